@@ -1,0 +1,3 @@
+export function ensureDependencies(): Promise<void>
+export function prepareDatabase(database: string, options?: { seed?: boolean }): Promise<void>
+export function ensureClientBuild(outDir?: string): Promise<void>

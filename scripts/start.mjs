@@ -1,0 +1,71 @@
+#!/usr/bin/env node
+// npm start: all set-up (dependencies, PostgreSQL, migrations, demo data, client build), then the
+// SMTP sink and the app on http://127.0.0.1:${PORT:-3000}. Ctrl-C stops everything cleanly.
+import { ensureClientBuild, ensureDependencies, prepareDatabase } from './lib/setup.mjs'
+import { log, startService, stopService } from './lib/proc.mjs'
+import { APP_DATABASE, databaseUrl } from './lib/paths.mjs'
+
+const PORT = Number(process.env.PORT ?? 3000)
+const SMTP_PORT = Number(process.env.SMTP_PORT ?? 2525)
+
+await ensureDependencies()
+const db = await import('./db.mjs')
+const startedDb = await db.startCluster()
+const children = []
+let stopping = false
+
+async function stopAll(code = 0) {
+  if (stopping) return
+  stopping = true
+  log('start', 'stopping…')
+  await Promise.all(children.map((child) => stopService(child)))
+  if (startedDb) db.stopCluster()
+  process.exit(code)
+}
+process.on('SIGINT', () => stopAll(0))
+process.on('SIGTERM', () => stopAll(0))
+
+try {
+  await prepareDatabase(APP_DATABASE)
+  await ensureClientBuild()
+} catch (error) {
+  console.error(error.message)
+  await stopAll(1)
+}
+
+const env = {
+  ...process.env,
+  DATABASE_URL: databaseUrl(APP_DATABASE),
+  PORT: String(PORT),
+  SMTP_PORT: String(SMTP_PORT),
+}
+const tsx = ['--import', 'tsx']
+children.push(startService('mail', process.execPath, [...tsx, 'server/mail-sink/index.ts'], { env }))
+const api = startService('api', process.execPath, [...tsx, 'server/index.ts'], { env })
+children.push(api)
+for (const child of children) child.on('exit', (code) => !stopping && stopAll(code ?? 1))
+
+await waitForHealth(`http://127.0.0.1:${PORT}/api/health`)
+console.log(`
+  Ambitus is running at http://127.0.0.1:${PORT}
+
+  Demo accounts (password: ambitus-demo)
+    student  student@cedarhollow.test   Noor Halvorsen, 4-string bass
+    teacher  teacher@cedarhollow.test   Marta Ilves, Cedar Hollow Music Collective
+    admin    admin@cedarhollow.test     Ivo Renn
+    more students: tobiah@ (5-string), lucia@ (guitar), rafe@ (drop D), signe@ (left-handed)
+
+  Mail sent by the app is captured on 127.0.0.1:${SMTP_PORT}; admins read it under Admin → Mail log.
+  Press Ctrl-C to stop.
+`)
+
+async function waitForHealth(url) {
+  for (let i = 0; i < 120 && !stopping; i++) {
+    try {
+      if ((await fetch(url)).ok) return
+    } catch {
+      // not listening yet
+    }
+    await new Promise((r) => setTimeout(r, 250))
+  }
+}

@@ -1,0 +1,53 @@
+// Server configuration, read from the environment once and validated at start-up.
+import path from 'node:path'
+import { z } from 'zod'
+import { DATA_DIR, ROOT, databaseUrl, localSecret } from '../scripts/lib/paths.mjs'
+
+const ConfigSchema = z.object({
+  host: z.string().default('127.0.0.1'),
+  port: z.coerce.number().int().min(0).max(65535).default(3000),
+  databaseUrl: z.string().min(1),
+  jwtSecret: z.string().min(32, 'JWT_SECRET must be at least 32 characters'),
+  appUrl: z.url().optional(),
+  smtpHost: z.string().default('127.0.0.1'),
+  smtpPort: z.coerce.number().int().min(1).max(65535).default(2525),
+  mailFrom: z.string().default('Ambitus <no-reply@ambitus.test>'),
+  clientDist: z.string().default(path.join(ROOT, 'dist')),
+  dataDir: z.string().default(DATA_DIR),
+  logLevel: z.enum(['fatal', 'error', 'warn', 'info', 'debug', 'trace', 'silent']).default('info'),
+  bcryptCost: z.coerce.number().int().min(12).max(15).default(12),
+  loginAttemptsPer15Min: z.coerce.number().int().min(1).default(10),
+  resetRequestsPerHour: z.coerce.number().int().min(1).default(5),
+})
+
+export type Config = z.infer<typeof ConfigSchema>
+
+/** Builds the configuration from environment variables, with local defaults for development. */
+export function loadConfig(env: NodeJS.ProcessEnv = process.env, overrides: Partial<Config> = {}): Config {
+  const parsed = ConfigSchema.safeParse({
+    host: env.HOST,
+    port: env.PORT,
+    databaseUrl: env.DATABASE_URL ?? databaseUrl(),
+    jwtSecret: env.JWT_SECRET ?? localSecret('jwt'),
+    appUrl: env.APP_URL || undefined,
+    smtpHost: env.SMTP_HOST,
+    smtpPort: env.SMTP_PORT,
+    mailFrom: env.MAIL_FROM,
+    clientDist: env.CLIENT_DIST,
+    dataDir: env.AMBITUS_DATA_DIR,
+    logLevel: env.LOG_LEVEL,
+    bcryptCost: env.BCRYPT_COST,
+    loginAttemptsPer15Min: env.LOGIN_RATE_LIMIT,
+    resetRequestsPerHour: env.RESET_RATE_LIMIT,
+    ...overrides,
+  })
+  if (!parsed.success) {
+    throw new Error(`Invalid configuration:\n${z.prettifyError(parsed.error)}`)
+  }
+  return parsed.data
+}
+
+/** The public base URL used in e-mailed links (APP_URL, else the local address). */
+export function publicUrl(config: Config): string {
+  return (config.appUrl ?? `http://${config.host}:${config.port}`).replace(/\/$/, '')
+}

@@ -1,0 +1,29 @@
+// Process entry: load configuration, open the database, listen; stop cleanly on SIGINT/SIGTERM.
+import { createApp } from './app'
+import { loadConfig } from './config'
+import { createDb } from './lib/db'
+import { createLogger } from './lib/logger'
+import { createMailer } from './lib/mail'
+
+const config = loadConfig()
+const logger = createLogger(config.logLevel)
+const db = createDb(config.databaseUrl)
+const mailer = createMailer(config)
+const app = createApp({ config, db, logger, mailer })
+
+const server = app.listen(config.port, config.host, () => {
+  logger.info(`Ambitus API listening on http://${config.host}:${config.port}`)
+})
+
+function shutdown(signal: string) {
+  logger.info(`${signal}: shutting down`)
+  server.close(async () => {
+    mailer.close()
+    await db.destroy()
+    process.exit(0)
+  })
+  server.closeAllConnections()
+  setTimeout(() => process.exit(1), 8000).unref()
+}
+process.on('SIGINT', () => shutdown('SIGINT'))
+process.on('SIGTERM', () => shutdown('SIGTERM'))

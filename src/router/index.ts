@@ -1,0 +1,48 @@
+// Routes: named, lazy-loaded (except the landing page), guarded by meta.roles.
+import { createRouter, createWebHistory, type RouteRecordRaw } from 'vue-router'
+import { setUnauthorizedHandler } from '../api/http'
+import { useAuthStore } from '../stores/auth'
+import LandingView from '../views/LandingView.vue'
+
+const ANY_USER = ['student', 'teacher', 'admin'] as const
+
+export const routes: RouteRecordRaw[] = [
+  { path: '/', name: 'landing', component: LandingView, meta: { layout: 'public', title: 'Welcome' } },
+  { path: '/sign-in', name: 'sign-in', component: () => import('../views/SignInView.vue'), meta: { layout: 'public', title: 'Sign in' } },
+  { path: '/register', name: 'register', component: () => import('../views/RegisterView.vue'), meta: { layout: 'public', title: 'Create an account' } },
+  { path: '/forgot-password', name: 'forgot-password', component: () => import('../views/ForgotPasswordView.vue'), meta: { layout: 'public', title: 'Forgotten password' } },
+  { path: '/reset-password', name: 'reset-password', component: () => import('../views/ResetPasswordView.vue'), meta: { layout: 'public', title: 'Choose a new password' } },
+  { path: '/practice', name: 'practice', component: () => import('../views/PracticeView.vue'), meta: { roles: [...ANY_USER], title: 'Practice' } },
+  { path: '/progress', name: 'progress', component: () => import('../views/ProgressView.vue'), meta: { roles: [...ANY_USER], title: 'Progress' } },
+  { path: '/studio', name: 'studio', component: () => import('../views/StudioView.vue'), meta: { roles: ['teacher'], title: 'Studio' } },
+  { path: '/admin', redirect: { name: 'admin-users' } },
+  { path: '/admin/users', name: 'admin-users', component: () => import('../views/AdminUsersView.vue'), meta: { roles: ['admin'], title: 'Users' } },
+  { path: '/admin/mail', name: 'admin-mail', component: () => import('../views/AdminMailView.vue'), meta: { roles: ['admin'], title: 'Mail log' } },
+  { path: '/account', name: 'account', component: () => import('../views/AccountView.vue'), meta: { roles: [...ANY_USER], title: 'Account' } },
+  { path: '/:pathMatch(.*)*', name: 'not-found', component: () => import('../views/NotFoundView.vue'), meta: { layout: 'public', title: 'Not found' } },
+]
+
+const router = createRouter({ history: createWebHistory(), routes })
+
+router.beforeEach(async (to) => {
+  const auth = useAuthStore()
+  await auth.loadSession().catch(() => undefined)
+  if (!to.meta.roles) return true
+  if (!auth.isSignedIn) return { name: 'sign-in', query: { next: to.fullPath } }
+  if (!auth.hasRole(to.meta.roles)) return { name: auth.homeRoute }
+  return true
+})
+
+router.afterEach((to) => {
+  document.title = to.meta.title ? `${to.meta.title} · Ambitus` : 'Ambitus'
+})
+
+// One place handles a 401: forget the user, go to sign-in, then come back.
+setUnauthorizedHandler(() => {
+  const auth = useAuthStore()
+  auth.expire()
+  const current = router.currentRoute.value
+  if (current.meta.roles) void router.push({ name: 'sign-in', query: { next: current.fullPath } })
+})
+
+export default router

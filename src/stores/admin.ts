@@ -1,0 +1,55 @@
+// Admin data: the user list and the captured-mail log, each paged on the server.
+import { defineStore } from 'pinia'
+import { ref } from 'vue'
+import * as adminApi from '../api/admin'
+import { ApiError } from '../api/http'
+import type { PublicUser, Role } from '../../server/users/users-schema'
+
+export const useAdminStore = defineStore('admin', () => {
+  const users = ref<PublicUser[]>([])
+  const userTotal = ref(0)
+  const mail = ref<adminApi.MailSummary[]>([])
+  const mailTotal = ref(0)
+  const openMessage = ref<adminApi.MailMessage | null>(null)
+  const isLoading = ref(false)
+  const error = ref<ApiError | null>(null)
+
+  async function track(work: () => Promise<void>) {
+    isLoading.value = true
+    error.value = null
+    try {
+      await work()
+    } catch (e) {
+      error.value = e instanceof ApiError ? e : new ApiError(0, 'unknown', String(e))
+    } finally {
+      isLoading.value = false
+    }
+  }
+
+  const loadUsers = (query: adminApi.PageQuery) =>
+    track(async () => {
+      const page = await adminApi.listUsers(query)
+      users.value = page.items
+      userTotal.value = page.total
+    })
+
+  const setRole = (id: string, role: Role) =>
+    track(async () => {
+      const { user } = await adminApi.changeRole(id, role)
+      users.value = users.value.map((u) => (u.id === id ? user : u))
+    })
+
+  const loadMail = (query: adminApi.PageQuery) =>
+    track(async () => {
+      const page = await adminApi.listMail(query)
+      mail.value = page.items
+      mailTotal.value = page.total
+    })
+
+  const openMail = (id: number) =>
+    track(async () => {
+      openMessage.value = (await adminApi.fetchMail(id)).message
+    })
+
+  return { users, userTotal, mail, mailTotal, openMessage, isLoading, error, loadUsers, setRole, loadMail, openMail }
+})

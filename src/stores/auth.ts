@@ -1,0 +1,71 @@
+// Who is signed in: loads the session once, signs in and out, and knows each role's home page.
+import { defineStore } from 'pinia'
+import { computed, ref } from 'vue'
+import * as authApi from '../api/auth'
+import { ApiError } from '../api/http'
+import type { PublicUser } from '../api/auth'
+import type { Role } from '../../server/users/users-schema'
+
+const HOME_BY_ROLE: Record<Role, string> = { student: 'practice', teacher: 'studio', admin: 'admin-users' }
+
+export const useAuthStore = defineStore('auth', () => {
+  const user = ref<PublicUser | null>(null)
+  const loaded = ref(false)
+  const isLoading = ref(false)
+  const error = ref<ApiError | null>(null)
+
+  const isSignedIn = computed(() => user.value !== null)
+  const homeRoute = computed(() => (user.value ? HOME_BY_ROLE[user.value.role] : 'sign-in'))
+
+  async function track<T>(work: () => Promise<T>): Promise<T> {
+    isLoading.value = true
+    error.value = null
+    try {
+      return await work()
+    } catch (e) {
+      error.value = e instanceof ApiError ? e : new ApiError(0, 'unknown', String(e))
+      throw error.value
+    } finally {
+      isLoading.value = false
+    }
+  }
+
+  /** Loads the current session once (a 401 simply means nobody is signed in). */
+  async function loadSession() {
+    if (loaded.value) return
+    try {
+      user.value = (await authApi.fetchMe()).user
+    } catch (e) {
+      if (!(e instanceof ApiError && e.status === 401)) throw e
+      user.value = null
+    } finally {
+      loaded.value = true
+    }
+  }
+
+  const signIn = (email: string, password: string) =>
+    track(async () => {
+      user.value = (await authApi.login(email, password)).user
+    })
+
+  const register = (body: authApi.RegisterBody) =>
+    track(async () => {
+      user.value = (await authApi.register(body)).user
+    })
+
+  const signOut = () =>
+    track(async () => {
+      await authApi.logout()
+      user.value = null
+    })
+
+  /** Forgets the user locally (the server already ended the session). */
+  function expire() {
+    user.value = null
+    loaded.value = true
+  }
+
+  const hasRole = (roles?: Role[]) => !roles || (user.value !== null && roles.includes(user.value.role))
+
+  return { user, loaded, isLoading, error, isSignedIn, homeRoute, loadSession, signIn, register, signOut, expire, hasRole }
+})

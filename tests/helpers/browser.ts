@@ -1,0 +1,54 @@
+// Debian's Chromium driven by playwright-core (never a downloaded browser); screenshots for review.
+import { mkdirSync } from 'node:fs'
+import path from 'node:path'
+import { chromium, type Browser, type BrowserContext, type Page } from 'playwright-core'
+import { inject } from 'vitest'
+import { ROOT } from '../../scripts/lib/paths.mjs'
+
+export const SCREENSHOT_DIR = path.join(ROOT, '.test-output', 'screenshots')
+export const LAPTOP = { width: 1366, height: 820 }
+export const PHONE = { width: 390, height: 844 }
+
+const CHROMIUM_ARGS = [
+  '--headless',
+  '--no-sandbox',
+  '--disable-gpu',
+  '--disable-quic',
+  '--no-first-run',
+  '--disable-background-networking',
+  '--disable-component-update',
+  '--disable-sync',
+  '--autoplay-policy=no-user-gesture-required',
+]
+
+export function launchBrowser(): Promise<Browser> {
+  return chromium.launch({ executablePath: process.env.CHROMIUM_PATH ?? '/usr/bin/chromium', args: CHROMIUM_ARGS })
+}
+
+export const baseUrl = () => inject('baseUrl')
+
+/** A new page whose requests to any other origin are recorded, so tests can assert there are none. */
+export async function newPage(browser: Browser, viewport = LAPTOP) {
+  const context: BrowserContext = await browser.newContext({ viewport, baseURL: baseUrl() })
+  const page = await context.newPage()
+  const foreign: string[] = []
+  const origin = new URL(baseUrl()).origin
+  page.on('request', (req) => {
+    const url = req.url()
+    if (!url.startsWith(origin) && !url.startsWith('data:') && !url.startsWith('blob:')) foreign.push(url)
+  })
+  return { page, context, foreign }
+}
+
+export async function screenshot(page: Page, name: string) {
+  mkdirSync(SCREENSHOT_DIR, { recursive: true })
+  await page.screenshot({ path: path.join(SCREENSHOT_DIR, `${name}.png`), fullPage: true })
+}
+
+/** Signs in through the sign-in form, as a person would. */
+export async function signInThroughUi(page: Page, email: string, password = 'ambitus-demo') {
+  await page.goto('/sign-in')
+  await page.getByLabel('E-mail').fill(email)
+  await page.getByLabel('Password', { exact: true }).fill(password)
+  await page.getByRole('button', { name: 'Sign in' }).click()
+}

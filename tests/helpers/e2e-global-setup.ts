@@ -1,0 +1,61 @@
+// End-to-end tests: a throwaway seeded database, a fresh client build, the SMTP sink and the API
+// server as real processes on free loopback ports. Tests read the URL with inject('baseUrl').
+import type { ChildProcess } from 'node:child_process'
+import path from 'node:path'
+import type { TestProject } from 'vitest/node'
+import { createDatabase, dropDatabase, startCluster } from '../../scripts/db.mjs'
+import { databaseUrl, ROOT, TEST_E2E_DATABASE } from '../../scripts/lib/paths.mjs'
+import { freePort, startService, stopService } from '../../scripts/lib/proc.mjs'
+import { ensureClientBuild, prepareDatabase } from '../../scripts/lib/setup.mjs'
+
+declare module 'vitest' {
+  export interface ProvidedContext {
+    baseUrl: string
+    e2eDatabaseUrl: string
+  }
+}
+
+const DIST = path.join(ROOT, '.test-output', 'dist')
+
+async function waitForHealth(url: string) {
+  for (let i = 0; i < 200; i++) {
+    try {
+      if ((await fetch(url)).ok) return
+    } catch {
+      // not up yet
+    }
+    await new Promise((r) => setTimeout(r, 150))
+  }
+  throw new Error(`server did not become healthy at ${url}`)
+}
+
+export default async function setup(project: TestProject) {
+  await startCluster()
+  await dropDatabase(TEST_E2E_DATABASE)
+  await createDatabase(TEST_E2E_DATABASE)
+  await prepareDatabase(TEST_E2E_DATABASE)
+  await ensureClientBuild(DIST)
+
+  const [port, smtpPort] = [await freePort(), await freePort()]
+  const env = {
+    ...process.env,
+    DATABASE_URL: databaseUrl(TEST_E2E_DATABASE),
+    PORT: String(port),
+    SMTP_PORT: String(smtpPort),
+    CLIENT_DIST: DIST,
+    LOG_LEVEL: 'warn',
+    APP_URL: `http://127.0.0.1:${port}`,
+  }
+  const tsx = ['--import', 'tsx']
+  const children: ChildProcess[] = [
+    startService('e2e-mail', process.execPath, [...tsx, 'server/mail-sink/index.ts'], { env }),
+    startService('e2e-api', process.execPath, [...tsx, 'server/index.ts'], { env }),
+  ]
+  await waitForHealth(`http://127.0.0.1:${port}/api/health`)
+  project.provide('baseUrl', `http://127.0.0.1:${port}`)
+  project.provide('e2eDatabaseUrl', env.DATABASE_URL)
+
+  return async () => {
+    await Promise.all(children.map((child) => stopService(child)))
+  }
+}

@@ -1,0 +1,66 @@
+// Vite (client build, dev server) and Vitest (all test layers) configuration.
+import { fileURLToPath, URL } from 'node:url'
+import { defineConfig } from 'vitest/config'
+import vue from '@vitejs/plugin-vue'
+import vuetify from 'vite-plugin-vuetify'
+import { databaseUrl, TEST_API_DATABASE } from './scripts/lib/paths.mjs'
+
+const API_PORT = Number(process.env.API_PORT ?? process.env.PORT ?? 3000)
+const alias = { '@': fileURLToPath(new URL('./src', import.meta.url)) }
+
+export default defineConfig({
+  plugins: [vue(), vuetify({ autoImport: true })],
+  resolve: { alias },
+  server: {
+    host: '127.0.0.1',
+    proxy: { '/api': `http://127.0.0.1:${API_PORT}` },
+  },
+  build: { chunkSizeWarningLimit: 900 },
+  test: {
+    projects: [
+      {
+        extends: true,
+        test: {
+          name: 'unit',
+          environment: 'node',
+          include: ['src/**/*.test.ts', 'tests/unit/**/*.test.ts'],
+        },
+      },
+      {
+        extends: true,
+        test: {
+          name: 'client',
+          environment: 'jsdom',
+          include: ['tests/client/**/*.test.ts'],
+          setupFiles: ['tests/helpers/client-setup.ts'],
+          server: { deps: { inline: ['vuetify'] } },
+        },
+      },
+      {
+        extends: true,
+        test: {
+          name: 'server',
+          environment: 'node',
+          include: ['tests/server/**/*.test.ts'],
+          globalSetup: ['tests/helpers/server-global-setup.ts'],
+          env: { DATABASE_URL: databaseUrl(TEST_API_DATABASE), LOG_LEVEL: 'silent' },
+          execArgv: ['--import', 'tsx'],
+          testTimeout: 30_000,
+          hookTimeout: 60_000,
+        },
+      },
+      {
+        extends: true,
+        test: {
+          name: 'e2e',
+          environment: 'node',
+          include: ['tests/e2e/**/*.spec.ts'],
+          globalSetup: ['tests/helpers/e2e-global-setup.ts'],
+          fileParallelism: false,
+          testTimeout: 90_000,
+          hookTimeout: 180_000,
+        },
+      },
+    ],
+  },
+})
