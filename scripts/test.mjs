@@ -5,11 +5,11 @@
 import { existsSync, mkdirSync, readFileSync, rmSync } from 'node:fs'
 import { execFileSync } from 'node:child_process'
 import path from 'node:path'
-import { ROOT } from './lib/paths.mjs'
+import { TEST_OUTPUT_DIR } from './lib/paths.mjs'
 import { log, run } from './lib/proc.mjs'
 import { ensureDependencies } from './lib/setup.mjs'
 
-const REPORT = path.join(ROOT, '.test-output', 'vitest.json')
+const REPORT = path.join(TEST_OUTPUT_DIR, 'vitest.json')
 const CHROMIUM = process.env.CHROMIUM_PATH ?? '/usr/bin/chromium'
 
 function ensureChromium() {

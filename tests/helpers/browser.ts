@@ -3,9 +3,9 @@ import { mkdirSync } from 'node:fs'
 import path from 'node:path'
 import { chromium, type Browser, type BrowserContext, type Page } from 'playwright-core'
 import { inject } from 'vitest'
-import { ROOT } from '../../scripts/lib/paths.mjs'
+import { TEST_OUTPUT_DIR } from '../../scripts/lib/paths.mjs'
 
-export const SCREENSHOT_DIR = path.join(ROOT, '.test-output', 'screenshots')
+export const SCREENSHOT_DIR = path.join(TEST_OUTPUT_DIR, 'screenshots')
 export const LAPTOP = { width: 1366, height: 820 }
 export const PHONE = { width: 390, height: 844 }
 

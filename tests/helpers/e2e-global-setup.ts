@@ -4,7 +4,7 @@ import type { ChildProcess } from 'node:child_process'
 import path from 'node:path'
 import type { TestProject } from 'vitest/node'
 import { createDatabase, dropDatabase, startCluster } from '../../scripts/db.mjs'
-import { databaseUrl, ROOT, TEST_E2E_DATABASE } from '../../scripts/lib/paths.mjs'
+import { databaseUrl, TEST_E2E_DATABASE, TEST_OUTPUT_DIR } from '../../scripts/lib/paths.mjs'
 import { freePort, startService, stopService } from '../../scripts/lib/proc.mjs'
 import { ensureClientBuild, prepareDatabase } from '../../scripts/lib/setup.mjs'
 
@@ -15,7 +15,7 @@ declare module 'vitest' {
   }
 }
 
-const DIST = path.join(ROOT, '.test-output', 'dist')
+const DIST = path.join(TEST_OUTPUT_DIR, 'dist')
 
 async function waitForHealth(url: string) {
   for (let i = 0; i < 200; i++) {
