@@ -42,5 +42,7 @@ export async function ensureClientBuild(outDir = path.join(ROOT, 'dist')) {
   const newestSource = Math.max(...sources.map((s) => newestMtime(path.join(ROOT, s))))
   if (mtime(path.join(outDir, 'index.html')) > newestSource) return
   log('setup', 'building the client…')
-  await runOrThrow(process.execPath, ['node_modules/vite/bin/vite.js', 'build', '--outDir', outDir, '--emptyOutDir'])
+  // NODE_ENV=production even when called from Vitest (which sets "test"): the real production bundle.
+  const env = { ...process.env, NODE_ENV: 'production' }
+  await runOrThrow(process.execPath, ['node_modules/vite/bin/vite.js', 'build', '--outDir', outDir, '--emptyOutDir'], { env })
 }
