@@ -10,7 +10,11 @@ const REFERENCE_MESSAGE = 'Reference pitch between 400 and 480 Hz.'
 
 // Every field without its default, so the PATCH schema can leave untouched fields undefined.
 const FIELDS = {
-  name: z.string().trim().min(1, 'Give the instrument a name.').max(60, 'Use at most 60 characters.'),
+  name: z
+    .string()
+    .trim()
+    .min(1, 'Give the instrument a name.')
+    .max(60, 'Use at most 60 characters.'),
   presetId: z.string().max(40).nullable(),
   tuning: z
     .array(z.number().int().min(0).max(127), 'List the open strings as MIDI pitches.')

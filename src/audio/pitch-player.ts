@@ -13,6 +13,8 @@ export interface PitchPlayer {
   stopClick(): void
   setVolume(volume: number): void
   setReferenceHz(hz: number): void
+  /** Picks the voice for an instrument (bass or guitar samples) from its open strings. Optional. */
+  setTuning?(tuning: number[]): void
   /** Which voice is in use: rendered samples, or the synthesized fallback. */
   readonly voice: 'samples' | 'synth' | 'silent'
 }

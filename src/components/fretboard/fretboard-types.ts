@@ -44,6 +44,7 @@ export interface FretboardProps {
 
 export interface FretboardEmits {
   select: [cell: Cell & { pitch: number }]
-  answer: [text: string, cell: Cell]
+  /** typedAt: performance.now() of the first key of the answer, so waiting for a ♯/♭ adds no time. */
+  answer: [text: string, cell: Cell, typedAt: number]
   'update:activeCell': [cell: Cell | null]
 }

@@ -1,0 +1,111 @@
+// Turns the drawn board into a stand-alone image (SVG, or PNG through a canvas): theme colours
+// resolved from the page and written onto each element, a background, interaction-only parts removed.
+import { SVG, type Svg } from '@svgdotjs/svg.js'
+
+export interface ExportOptions {
+  format: 'svg' | 'png'
+  /** PNG pixels per SVG unit (2 = sharp on most screens and in print). */
+  scale?: number
+  /** Background colour; defaults to the page's surface colour. */
+  background?: string
+}
+
+const STYLE_PROPERTIES = [
+  'fill',
+  'fill-opacity',
+  'stroke',
+  'stroke-opacity',
+  'stroke-width',
+  'stroke-dasharray',
+  'stroke-linecap',
+  'opacity',
+  'font-size',
+  'font-weight',
+  'font-family',
+  'text-anchor',
+  'dominant-baseline',
+]
+// Hover and focus aids and the run marker mean nothing in a picture.
+const INTERACTIVE_ONLY = '.fb-hit, .fb-focus, .fb-run-marker'
+
+// The page's CSS (theme variables included) does not travel with the file: copy the used values.
+function inlineStyles(source: Element, copy: Element) {
+  const computed = getComputedStyle(source)
+  const style = STYLE_PROPERTIES.map((name) => [name, computed.getPropertyValue(name)] as const)
+    .filter(([, value]) => value !== '')
+    .map(([name, value]) => `${name}:${value}`)
+    .join(';')
+  if (style) copy.setAttribute('style', style)
+  Array.from(source.children).forEach((child, i) => {
+    const copied = copy.children[i]
+    if (copied) inlineStyles(child, copied)
+  })
+}
+
+function surfaceColour(svgElement: SVGSVGElement): string {
+  const value = getComputedStyle(svgElement).getPropertyValue('--v-theme-surface').trim()
+  return value ? `rgb(${value})` : '#ffffff'
+}
+
+/** A copy of the board as SVG markup with everything it needs to look the same on its own. */
+export function boardSvgMarkup(svgElement: SVGSVGElement, background?: string): string {
+  const copy = svgElement.cloneNode(true) as SVGSVGElement
+  inlineStyles(svgElement, copy)
+  copy.querySelectorAll(INTERACTIVE_ONLY).forEach((element) => element.remove())
+  const [, , width = 0, height = 0] = (copy.getAttribute('viewBox') ?? '').split(' ').map(Number)
+  const board = SVG(copy) as Svg
+  board.attr({ width, height, style: null, role: null, 'aria-label': null })
+  board
+    .rect(width, height)
+    .fill(background ?? surfaceColour(svgElement))
+    .back()
+  return board.svg()
+}
+
+function svgToPng(markup: string, width: number, height: number, scale: number): Promise<Blob> {
+  return new Promise((resolve, reject) => {
+    const image = new Image()
+    const url = URL.createObjectURL(new Blob([markup], { type: 'image/svg+xml' }))
+    image.onload = () => {
+      const canvas = document.createElement('canvas')
+      canvas.width = Math.round(width * scale)
+      canvas.height = Math.round(height * scale)
+      canvas.getContext('2d')?.drawImage(image, 0, 0, canvas.width, canvas.height)
+      URL.revokeObjectURL(url)
+      canvas.toBlob(
+        (blob) => (blob ? resolve(blob) : reject(new Error('PNG export failed.'))),
+        'image/png',
+      )
+    }
+    image.onerror = () => {
+      URL.revokeObjectURL(url)
+      reject(new Error('The board could not be turned into a picture.'))
+    }
+    image.src = url
+  })
+}
+
+/** The current board as a downloadable image (SVG markup, or PNG drawn through a canvas). */
+export async function exportBoardImage(
+  svgElement: SVGSVGElement,
+  options: ExportOptions,
+): Promise<Blob> {
+  const markup = boardSvgMarkup(svgElement, options.background)
+  if (options.format === 'svg') return new Blob([markup], { type: 'image/svg+xml' })
+  const [, , width = 0, height = 0] = (svgElement.getAttribute('viewBox') ?? '')
+    .split(' ')
+    .map(Number)
+  return svgToPng(markup, width, height, options.scale ?? 2)
+}
+
+/** Saves a blob under a file name through a temporary link (what "Export image" does). */
+export function downloadBlob(blob: Blob, fileName: string): void {
+  const url = URL.createObjectURL(blob)
+  const link = document.createElement('a')
+  link.href = url
+  link.download = fileName
+  document.body.appendChild(link)
+  link.click()
+  link.remove()
+  setTimeout(() => URL.revokeObjectURL(url), 1000)
+}

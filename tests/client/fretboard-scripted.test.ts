@@ -1,0 +1,109 @@
+// Scripted SVG on a drawn board: the run marker (animateRun) and the exported image (boardSvgMarkup).
+import { mount } from '@vue/test-utils'
+import { afterEach, describe, expect, it } from 'vitest'
+import { animateRun } from '../../src/components/fretboard/animate-run'
+import { boardSvgMarkup, exportBoardImage } from '../../src/components/fretboard/board-export'
+import FretboardBoard from '../../src/components/fretboard/FretboardBoard.vue'
+
+const BASS_4 = [28, 33, 38, 43] // E1 A1 D2 G2
+
+function drawnBoard() {
+  const wrapper = mount(FretboardBoard, {
+    props: {
+      tuning: BASS_4,
+      fretEnd: 5,
+      labelMode: 'names',
+      marks: [{ string: 1, fret: 2, kind: 'correct' }],
+    },
+    attachTo: document.body,
+  })
+  return { wrapper, svg: wrapper.find('svg').element as SVGSVGElement }
+}
+
+function centreOf(svg: SVGSVGElement, string: number, fret: number) {
+  const hit = svg.querySelector(`[data-string="${string}"][data-fret="${fret}"] .fb-hit`)!
+  const get = (name: string) => Number(hit.getAttribute(name))
+  return { x: get('x') + get('width') / 2, y: get('y') + get('height') / 2 }
+}
+
+afterEach(() => {
+  document.body.innerHTML = ''
+})
+
+describe('animateRun', () => {
+  it('moves a marker through the cells in order, then removes it', async () => {
+    const { svg } = drawnBoard()
+    const cells = [
+      { string: 0, fret: 3 },
+      { string: 1, fret: 0 },
+      { string: 1, fret: 2 },
+    ]
+    const run = animateRun(svg, cells, { bpm: 600 })
+    const marker = svg.querySelector('.fb-run-marker')!
+    const start = centreOf(svg, 0, 3)
+    expect(Number(marker.getAttribute('cx'))).toBeCloseTo(start.x, 3)
+    expect(Number(marker.getAttribute('cy'))).toBeCloseTo(start.y, 3)
+    const seen: { x: number; y: number }[] = []
+    const watch = setInterval(
+      () =>
+        seen.push({ x: Number(marker.getAttribute('cx')), y: Number(marker.getAttribute('cy')) }),
+      5,
+    )
+    await run.finished
+    clearInterval(watch)
+    const end = centreOf(svg, 1, 2)
+    const last = seen.at(-1)!
+    expect(last.x).toBeCloseTo(end.x, 1)
+    expect(last.y).toBeCloseTo(end.y, 1)
+    const middle = centreOf(svg, 1, 0)
+    expect(seen.some((p) => Math.abs(p.x - middle.x) < 0.5 && Math.abs(p.y - middle.y) < 0.5)).toBe(
+      true,
+    )
+    expect(svg.querySelector('.fb-run-marker')).toBeNull()
+  })
+
+  it('does nothing for cells the board does not show', async () => {
+    const { svg } = drawnBoard()
+    const run = animateRun(svg, [{ string: 0, fret: 20 }], { bpm: 120 })
+    await run.finished
+    expect(svg.querySelector('.fb-run-marker')).toBeNull()
+  })
+
+  it('stop() removes the marker at once', async () => {
+    const { svg } = drawnBoard()
+    const run = animateRun(
+      svg,
+      [
+        { string: 0, fret: 1 },
+        { string: 0, fret: 2 },
+      ],
+      { bpm: 30 },
+    )
+    run.stop()
+    await run.finished
+    expect(svg.querySelector('.fb-run-marker')).toBeNull()
+  })
+})
+
+describe('board export', () => {
+  it('writes a stand-alone SVG: sized, with a background, marks and labels kept, hit areas dropped', () => {
+    const { svg } = drawnBoard()
+    const doc = new DOMParser().parseFromString(boardSvgMarkup(svg, '#ffffff'), 'image/svg+xml')
+    const root = doc.documentElement
+    const [, , width, height] = svg.getAttribute('viewBox')!.split(' ')
+    expect(root.getAttribute('width')).toBe(width)
+    expect(root.getAttribute('height')).toBe(height)
+    expect(root.firstElementChild?.getAttribute('fill')).toBe('#ffffff')
+    expect(doc.querySelectorAll('.fb-hit')).toHaveLength(0)
+    expect(doc.querySelectorAll('.fb-correct')).toHaveLength(1)
+    expect(doc.querySelectorAll('.fb-label').length).toBe(4 * 6)
+    expect(svg.querySelectorAll('.fb-hit')).toHaveLength(4 * 6)
+  })
+
+  it('gives an SVG blob for the svg format', async () => {
+    const { svg } = drawnBoard()
+    const blob = await exportBoardImage(svg, { format: 'svg' })
+    expect(blob.type).toBe('image/svg+xml')
+    expect(await blob.text()).toContain('<svg')
+  })
+})
