@@ -22,11 +22,73 @@ export const AttemptInputSchema = z.strictObject({
   responseMs: z.number().int().min(0).max(600_000),
   createdAt: z.iso.datetime({ offset: true }),
   /** Drill-specific context, e.g. { key: 'Eb', degree: 3, displaced: true }. */
-  detail: z.record(z.string(), z.union([z.string().max(64), z.number(), z.boolean(), z.null()])).default({}),
+  detail: z
+    .record(z.string(), z.union([z.string().max(64), z.number(), z.boolean(), z.null()]))
+    .default({}),
   planItemId: z.uuid().nullable().default(null),
 })
 export type AttemptInput = z.infer<typeof AttemptInputSchema>
 
-export const AttemptBatchSchema = z.strictObject({
-  attempts: z.array(AttemptInputSchema).min(1, 'Send at least one attempt.').max(MAX_ATTEMPT_BATCH, `At most ${MAX_ATTEMPT_BATCH} attempts per request.`),
-})
+/** How far ahead of the server's clock an answer may be dated (devices' clocks drift). */
+export const MAX_CLOCK_SKEW_MS = 24 * 3600 * 1000
+const EARLIEST_ATTEMPT = Date.parse('2000-01-01T00:00:00Z')
+
+// Zones already accepted, so a batch does not build an Intl formatter every time.
+const acceptedZones = new Set<string>()
+const isZone = (zone: string) => {
+  if (acceptedZones.has(zone)) return true
+  try {
+    new Intl.DateTimeFormat('en', { timeZone: zone })
+    acceptedZones.add(zone)
+    return true
+  } catch {
+    return false
+  }
+}
+
+/** An IANA time zone name the runtime knows ("Europe/Oslo"); it decides which day an answer counts for. */
+export const TimeZoneSchema = z.string().max(64).refine(isZone, 'Not a known time zone.')
+
+// Checks that need several fields of one attempt; issues point at the offending field.
+function checkAttempt(attempt: AttemptInput, index: number, ctx: z.RefinementCtx) {
+  const issue = (field: string, message: string) =>
+    ctx.addIssue({ code: 'custom', path: ['attempts', index, field], message })
+  if ((attempt.string === null) !== (attempt.fret === null)) {
+    issue(attempt.string === null ? 'string' : 'fret', 'Give both string and fret, or neither.')
+  }
+  if (attempt.string !== null && attempt.string >= attempt.tuning.length) {
+    issue('string', `String ${attempt.string} is not on a ${attempt.tuning.length}-string tuning.`)
+  }
+  const at = Date.parse(attempt.createdAt)
+  if (at > Date.now() + MAX_CLOCK_SKEW_MS) issue('createdAt', 'This answer is dated in the future.')
+  if (at < EARLIEST_ATTEMPT) issue('createdAt', 'This answer is dated before the year 2000.')
+}
+
+export const AttemptBatchSchema = z
+  .strictObject({
+    attempts: z
+      .array(AttemptInputSchema)
+      .min(1, 'Send at least one attempt.')
+      .max(MAX_ATTEMPT_BATCH, `At most ${MAX_ATTEMPT_BATCH} attempts per request.`),
+    /** The player's time zone (optional; the client sends it so days and streaks follow local midnight). */
+    timeZone: TimeZoneSchema.optional(),
+  })
+  .superRefine((batch, ctx) => batch.attempts.forEach((a, i) => checkAttempt(a, i, ctx)))
+export type AttemptBatch = z.infer<typeof AttemptBatchSchema>
+
+/** An attempt as stored (what POST /api/attempts answers with). */
+export interface StoredAttempt extends Omit<AttemptInput, 'detail' | 'planItemId'> {
+  detail: AttemptInput['detail']
+  planItemId: string | null
+  receivedAt: string
+}
+
+/**
+ * The answer of POST /api/attempts (201 when something new was stored, else 200):
+ * `stored` new rows, `duplicates` ids that were already stored (re-sent batches), and the new rows.
+ */
+export interface AttemptBatchResult {
+  stored: number
+  duplicates: number
+  attempts: StoredAttempt[]
+}

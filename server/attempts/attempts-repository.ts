@@ -1,0 +1,104 @@
+// attempts table access: idempotent inserts, instrument ownership, the player's time zone.
+import type { Db } from '../lib/db'
+import type { AttemptInput, StoredAttempt } from './attempts-schema'
+
+export interface AttemptRow {
+  id: string
+  user_id: string
+  instrument_id: string | null
+  tuning: number[]
+  drill: AttemptInput['drill']
+  session_id: string
+  string: number | null
+  fret: number | null
+  expected_pitch: number
+  answer: string
+  correct: boolean
+  response_ms: number
+  created_at: Date
+  received_at: Date
+  detail: AttemptInput['detail']
+  plan_item_id: string | null
+}
+
+export const toStoredAttempt = (row: AttemptRow): StoredAttempt => ({
+  id: row.id,
+  instrumentId: row.instrument_id,
+  tuning: row.tuning.map(Number),
+  drill: row.drill,
+  sessionId: row.session_id,
+  string: row.string,
+  fret: row.fret,
+  expectedPitch: row.expected_pitch,
+  answer: row.answer,
+  correct: row.correct,
+  responseMs: row.response_ms,
+  createdAt: row.created_at.toISOString(),
+  receivedAt: row.received_at.toISOString(),
+  detail: row.detail,
+  planItemId: row.plan_item_id,
+})
+
+const toRow = (userId: string, a: AttemptInput) => ({
+  id: a.id,
+  user_id: userId,
+  instrument_id: a.instrumentId,
+  tuning: a.tuning,
+  drill: a.drill,
+  session_id: a.sessionId,
+  string: a.string,
+  fret: a.fret,
+  expected_pitch: a.expectedPitch,
+  answer: a.answer,
+  correct: a.correct,
+  response_ms: a.responseMs,
+  created_at: a.createdAt,
+  detail: JSON.stringify(a.detail),
+  plan_item_id: a.planItemId,
+})
+
+/** Which of these instrument ids belong to the user. */
+export async function ownedInstrumentIds(db: Db, userId: string, ids: string[]) {
+  if (!ids.length) return new Set<string>()
+  const rows: { id: string }[] = await db('instruments')
+    .where('user_id', userId)
+    .whereIn('id', ids)
+    .select('id')
+  return new Set(rows.map((r) => r.id))
+}
+
+/** The plan items among `ids` that belong to a plan assigned to the player. */
+export async function assignedPlanItemIds(db: Db, userId: string, ids: string[]) {
+  if (!ids.length) return new Set<string>()
+  const rows: { id: string }[] = await db('plan_items as i')
+    .join('plan_assignments as a', 'a.plan_id', 'i.plan_id')
+    .where('a.student_id', userId)
+    .whereIn('i.id', ids)
+    .select('i.id')
+  return new Set(rows.map((r) => r.id))
+}
+
+/** Inserts the attempts whose ids are new; ids already stored (by anyone) are left untouched. */
+export async function insertNewAttempts(db: Db, userId: string, attempts: AttemptInput[]) {
+  const rows: AttemptRow[] = await db('attempts')
+    .insert(attempts.map((a) => toRow(userId, a)))
+    .onConflict('id')
+    .ignore()
+    .returning('*')
+  return rows
+}
+
+/** Whether PostgreSQL knows a time zone name (its list can differ slightly from the JS runtime's). */
+export async function isKnownTimeZone(db: Db, zone: string) {
+  const row = await db('pg_timezone_names').where('name', zone).first('name')
+  return row !== undefined
+}
+
+/** Remembers the player's time zone; later answers count for days in that zone. */
+export async function saveTimeZone(db: Db, userId: string, zone: string) {
+  await db('user_time_zones')
+    .insert({ user_id: userId, time_zone: zone, updated_at: db.fn.now() })
+    .onConflict('user_id')
+    .merge(['time_zone', 'updated_at'])
+    .whereRaw('user_time_zones.time_zone is distinct from excluded.time_zone')
+}

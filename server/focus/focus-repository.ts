@@ -1,0 +1,167 @@
+// focus_cards table access and the few attempt reads the focus needs.
+import type { Knex } from 'knex'
+import type { Db } from '../lib/db'
+import { ALL_DRILLS } from '../progress/progress-repository'
+import type { ReviewCard } from './focus-types'
+
+type Conn = Db | Knex.Transaction
+
+interface CardRow {
+  string: number
+  fret: number
+  due: Date
+  stability: number
+  difficulty: number
+  elapsed_days: number
+  scheduled_days: number
+  learning_steps: number
+  reps: number
+  lapses: number
+  state: number
+  last_review: Date | null
+  recent_misses: Date[]
+}
+
+export const cellKey = (string: number, fret: number) => `${string}:${fret}`
+
+const toCard = (r: CardRow): ReviewCard => ({
+  due: r.due,
+  stability: r.stability,
+  difficulty: r.difficulty,
+  elapsedDays: r.elapsed_days,
+  scheduledDays: r.scheduled_days,
+  learningSteps: r.learning_steps,
+  reps: r.reps,
+  lapses: r.lapses,
+  state: r.state,
+  lastReview: r.last_review,
+  recentMisses: r.recent_misses,
+})
+
+/** Every card of an instrument, keyed "string:fret". */
+export async function loadCards(db: Conn, userId: string, instrumentKey: string) {
+  const rows: CardRow[] = await db('focus_cards')
+    .where({ user_id: userId, instrument_key: instrumentKey })
+    .select('*')
+  return new Map(rows.map((r) => [cellKey(r.string, r.fret), toCard(r)]))
+}
+
+export interface PlacedCard {
+  string: number
+  fret: number
+  card: ReviewCard
+}
+
+interface CardJson extends Omit<CardRow, 'due' | 'last_review' | 'recent_misses'> {
+  due: string
+  last_review: string | null
+  recent_misses: string[]
+}
+
+const fromJson = (r: CardJson): CardRow => ({
+  ...r,
+  due: new Date(r.due),
+  last_review: r.last_review ? new Date(r.last_review) : null,
+  recent_misses: r.recent_misses.map((at) => new Date(at)),
+})
+
+/** In one round trip: the cards of some places and the player's usual time (see usualMs). */
+export async function cardsAndUsual(
+  db: Conn,
+  userId: string,
+  instrumentKey: string,
+  cells: [number, number][],
+) {
+  const { rows } = await db.raw(
+    `select (select percentile_cont(0.5) within group (order by recent_median_ms) from progress_items
+         where user_id = :user and instrument_key = :key and drill = :all and string >= 0
+           and recent_median_ms is not null) as usual,
+       coalesce((select json_agg(c) from focus_cards c where c.user_id = :user and c.instrument_key = :key
+         and (c.string, c.fret) in (select * from unnest(:strings::smallint[], :frets::smallint[]))), '[]') as cards`,
+    {
+      user: userId,
+      key: instrumentKey,
+      all: ALL_DRILLS,
+      strings: cells.map((c) => c[0]),
+      frets: cells.map((c) => c[1]),
+    },
+  )
+  const row = rows[0] as { usual: number | null; cards: CardJson[] }
+  const cards = new Map(row.cards.map((r) => [cellKey(r.string, r.fret), toCard(fromJson(r))]))
+  return { usual: row.usual, cards }
+}
+
+/** Writes cards (insert or replace). */
+export async function saveCards(
+  db: Conn,
+  userId: string,
+  instrumentKey: string,
+  cards: PlacedCard[],
+) {
+  if (!cards.length) return
+  const rows = cards.map(({ string, fret, card: c }) => ({
+    user_id: userId,
+    instrument_key: instrumentKey,
+    string,
+    fret,
+    due: c.due,
+    stability: c.stability,
+    difficulty: c.difficulty,
+    elapsed_days: c.elapsedDays,
+    scheduled_days: c.scheduledDays,
+    learning_steps: c.learningSteps,
+    reps: c.reps,
+    lapses: c.lapses,
+    state: c.state,
+    last_review: c.lastReview,
+    recent_misses: c.recentMisses,
+  }))
+  await db('focus_cards')
+    .insert(rows)
+    .onConflict(['user_id', 'instrument_key', 'string', 'fret'])
+    .merge()
+}
+
+/** The player's usual response time on an instrument: the median of the places' median times. */
+export async function usualMs(
+  db: Conn,
+  userId: string,
+  instrumentKey: string,
+): Promise<number | null> {
+  const { rows } = await db.raw(
+    `select percentile_cont(0.5) within group (order by recent_median_ms) as usual from progress_items
+     where user_id = ? and instrument_key = ? and drill = ? and string >= 0 and recent_median_ms is not null`,
+    [userId, instrumentKey, ALL_DRILLS],
+  )
+  return (rows[0] as { usual: number | null } | undefined)?.usual ?? null
+}
+
+export interface CellAnswer {
+  string: number
+  fret: number
+  correct: boolean
+  responseMs: number
+  at: Date
+}
+
+/** The latest answers with a place on one instrument, oldest first (to rebuild cards). */
+export async function latestCellAnswers(
+  db: Conn,
+  userId: string,
+  instrumentId: string,
+  limit: number,
+): Promise<CellAnswer[]> {
+  const rows = await db('attempts')
+    .where({ user_id: userId, instrument_id: instrumentId })
+    .whereNotNull('string')
+    .orderBy('created_at', 'desc')
+    .limit(limit)
+    .select('string', 'fret', 'correct', 'response_ms', 'created_at')
+  return rows.reverse().map((r) => ({
+    string: r.string,
+    fret: r.fret,
+    correct: r.correct,
+    responseMs: r.response_ms,
+    at: r.created_at,
+  }))
+}

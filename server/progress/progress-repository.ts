@@ -1,0 +1,175 @@
+// Reads of the statistics rollups (progress_days, progress_items, progress_sessions) and of runs
+// attempts for fingerings. The rollups are written by the attempts trigger, never here.
+import type { Db } from '../lib/db'
+
+/** instrument_key values in the rollups: attempts without an instrument, and every instrument. */
+export const NO_INSTRUMENT = '00000000-0000-0000-0000-000000000000'
+export const ALL_INSTRUMENTS = 'ffffffff-ffff-ffff-ffff-ffffffffffff'
+export const ALL_DRILLS = '*'
+
+export interface ItemRow {
+  string: number
+  fret: number
+  pitch: number
+  attempts: number
+  correct: number
+  lastAt: Date
+  recentCorrect: boolean[]
+  recentMs: number[]
+}
+
+export interface DayRow {
+  drill: string
+  day: string
+  attempts: number
+  correct: number
+  activeMs: number
+  medianMs: number | null
+  p90Ms: number | null
+  lastAt: Date
+}
+
+export interface DayRange {
+  from?: string
+  to?: string
+}
+
+/** The player's time zone for days and streaks (UTC until their client has sent one). */
+export async function timeZoneOf(db: Db, userId: string): Promise<string> {
+  const row = await db('user_time_zones').where('user_id', userId).first('time_zone')
+  return (row as { time_zone: string } | undefined)?.time_zone ?? 'UTC'
+}
+
+/** Per-place rollup rows of one instrument and drill ('*' for every drill). */
+export async function itemRows(
+  db: Db,
+  userId: string,
+  instrumentKey: string,
+  drill: string,
+): Promise<ItemRow[]> {
+  const rows = await db('progress_items')
+    .where({ user_id: userId, instrument_key: instrumentKey, drill })
+    .select(
+      'string',
+      'fret',
+      'pitch',
+      'attempts',
+      'correct',
+      'last_at',
+      'recent_correct',
+      'recent_ms',
+    )
+  return rows.map((r) => ({
+    string: r.string,
+    fret: r.fret,
+    pitch: r.pitch,
+    attempts: r.attempts,
+    correct: r.correct,
+    lastAt: r.last_at,
+    recentCorrect: r.recent_correct,
+    recentMs: r.recent_ms.map(Number),
+  }))
+}
+
+const inRange = (range: DayRange) => (q: ReturnType<Db>) => {
+  if (range.from) q.where('day', '>=', range.from)
+  if (range.to) q.where('day', '<=', range.to)
+}
+
+/** Per-day rollup rows, oldest first, for the given drill keys ('*' = all drills together; null = every key). */
+export async function dayRows(
+  db: Db,
+  userId: string,
+  instrumentKey: string,
+  drills: string[] | null,
+  range: DayRange,
+): Promise<DayRow[]> {
+  interface Row {
+    drill: string
+    day: string
+    attempts: number
+    correct: number
+    active_ms: string
+    median_ms: number | null
+    p90_ms: number | null
+    last_at: Date
+  }
+  const rows: Row[] = await db('progress_days')
+    .where({ user_id: userId, instrument_key: instrumentKey })
+    .modify((q) => (drills ? q.whereIn('drill', drills) : q))
+    .modify(inRange(range))
+    .orderBy('day')
+    .select(
+      'drill',
+      db.raw('day::text as day'),
+      'attempts',
+      'correct',
+      'active_ms',
+      'median_ms',
+      'p90_ms',
+      'last_at',
+    )
+  return rows.map((r) => ({
+    drill: r.drill,
+    day: r.day,
+    attempts: r.attempts,
+    correct: r.correct,
+    activeMs: Number(r.active_ms),
+    medianMs: r.median_ms,
+    p90Ms: r.p90_ms,
+    lastAt: r.last_at,
+  }))
+}
+
+/** How many sessions started in the range (a session counts for the day it began). */
+export async function sessionCount(
+  db: Db,
+  userId: string,
+  instrumentKey: string,
+  drill: string,
+  range: DayRange,
+) {
+  const q = db('progress_sessions').where('user_id', userId).modify(inRange(range))
+  if (instrumentKey !== ALL_INSTRUMENTS) q.where('instrument_key', instrumentKey)
+  if (drill !== ALL_DRILLS) q.where('drill', drill)
+  const row = await q.count({ n: '*' }).first()
+  return Number((row as { n: string } | undefined)?.n ?? 0)
+}
+
+export interface FingeringFilter {
+  instrumentId?: string
+  tonic: string
+  scale: string
+  lowFret: number
+  highFret: number
+}
+
+/** Range Runs of one key and region, per fingering pattern (from the per-session runs rollup). */
+export async function fingeringRows(db: Db, userId: string, f: FingeringFilter) {
+  const q = db('progress_runs').where({
+    user_id: userId,
+    tonic: f.tonic,
+    scale: f.scale,
+    low_fret: f.lowFret,
+    high_fret: f.highFret,
+  })
+  if (f.instrumentId) q.where('instrument_key', f.instrumentId)
+  const rows = (await q
+    .groupBy('pattern')
+    .select('pattern')
+    .count({ sessions: '*' })
+    .sum({ attempts: 'attempts' })
+    .max({ last_at: 'last_at' })
+    .orderBy('last_at', 'desc')) as unknown as {
+    pattern: string
+    sessions: string
+    attempts: string
+    last_at: Date
+  }[]
+  return rows.map((r) => ({
+    pattern: r.pattern,
+    sessions: Number(r.sessions),
+    attempts: Number(r.attempts),
+    lastPractisedAt: r.last_at.toISOString(),
+  }))
+}

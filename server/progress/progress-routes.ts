@@ -1,0 +1,39 @@
+// /api/progress: a student's statistics (own by default; `student=` for their teachers and admins)
+// and the signed-in teacher's roster summary.
+import { Router } from 'express'
+import { requireAuth, requireRole } from '../auth/auth-middleware'
+import type { AppContext } from '../context'
+import { parse } from '../lib/validate'
+import { FingeringsQuerySchema, ProgressScopeSchema, RangeQuerySchema } from './progress-schema'
+import { fingerings, notes, positions, summary, timeline } from './progress-service'
+import { rosterSummary } from './roster-service'
+
+export function progressRoutes(ctx: AppContext): Router {
+  const router = Router()
+  router.use(requireAuth(ctx))
+
+  router.get('/summary', async (req, res) => {
+    res.json(await summary(ctx, req.user!, parse(RangeQuerySchema, req, 'query')))
+  })
+
+  router.get('/positions', async (req, res) => {
+    res.json(await positions(ctx, req.user!, parse(ProgressScopeSchema, req, 'query')))
+  })
+
+  router.get('/notes', async (req, res) => {
+    res.json(await notes(ctx, req.user!, parse(ProgressScopeSchema, req, 'query')))
+  })
+
+  router.get('/timeline', async (req, res) => {
+    res.json(await timeline(ctx, req.user!, parse(RangeQuerySchema, req, 'query')))
+  })
+
+  router.get('/fingerings', async (req, res) => {
+    res.json(await fingerings(ctx, req.user!, parse(FingeringsQuerySchema, req, 'query')))
+  })
+
+  router.get('/roster-summary', requireRole('teacher'), async (req, res) => {
+    res.json(await rosterSummary(ctx, req.user!.id))
+  })
+  return router
+}

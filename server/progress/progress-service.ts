@@ -1,0 +1,194 @@
+// Progress use cases: summary, places, notes, timeline and fingerings of one student, read from the
+// rollups. Own data by default; teachers and admins pass `student` and are checked first.
+import { assertCanReadStudent } from '../access/student-access'
+import type { AppContext } from '../context'
+import { badRequest } from '../lib/errors'
+import { listInstruments } from '../instruments/instruments-repository'
+import type { PublicUser } from '../users/users-schema'
+import {
+  addDays,
+  localDay,
+  pitchClassFigures,
+  pitchFigures,
+  positionsFrom,
+  streakOf,
+  stringFigures,
+  toPoint,
+  totalsOf,
+} from './progress-stats'
+import * as repo from './progress-repository'
+import type {
+  FingeringsAnswer,
+  FingeringsQuery,
+  NotesAnswer,
+  PositionsAnswer,
+  ProgressInstrument,
+  ProgressScope,
+  RangeQuery,
+  SummaryAnswer,
+  TimelineAnswer,
+} from './progress-schema'
+
+const { ALL_DRILLS, ALL_INSTRUMENTS } = repo
+const DEFAULT_TIMELINE_DAYS = 30
+
+/** The student whose data is asked for, after checking the viewer may read it. */
+export async function readableStudent(ctx: AppContext, viewer: PublicUser, student?: string) {
+  const studentId = student ?? viewer.id
+  await assertCanReadStudent(ctx, viewer, studentId)
+  return studentId
+}
+
+async function instrumentsOf(ctx: AppContext, studentId: string): Promise<ProgressInstrument[]> {
+  const list = await listInstruments(ctx.db, studentId)
+  return list.map(
+    ({ id, name, tuning, frets, scaleLengthMm, handedness, accidentals, isActive }) => ({
+      id,
+      name,
+      tuning,
+      frets,
+      scaleLengthMm,
+      handedness,
+      accidentals,
+      isActive,
+    }),
+  )
+}
+
+/** The requested instrument (must be the student's), else null when `fallback` is false. */
+function pickInstrument(
+  list: ProgressInstrument[],
+  requested: string | undefined,
+  fallback: boolean,
+) {
+  if (requested) {
+    const found = list.find((i) => i.id === requested)
+    if (!found)
+      throw badRequest('Some fields need attention.', {
+        'query.instrument': ['This is not one of the student’s instruments.'],
+      })
+    return found
+  }
+  return fallback ? (list.find((i) => i.isActive) ?? list[0] ?? null) : null
+}
+
+/** Summary: totals in the range (all time by default), today, the last 7 days, and the streak. */
+export async function summary(
+  ctx: AppContext,
+  viewer: PublicUser,
+  q: RangeQuery,
+): Promise<SummaryAnswer> {
+  const studentId = await readableStudent(ctx, viewer, q.student)
+  const [instruments, timeZone] = await Promise.all([
+    instrumentsOf(ctx, studentId),
+    repo.timeZoneOf(ctx.db, studentId),
+  ])
+  const key = pickInstrument(instruments, q.instrument, false)?.id ?? ALL_INSTRUMENTS
+  const drill = q.drill ?? ALL_DRILLS
+  const today = localDay(new Date(), timeZone)
+  const weekStart = addDays(today, -6)
+  const sessions = (from?: string, to?: string) =>
+    repo.sessionCount(ctx.db, studentId, key, drill, { from, to })
+  const [days, inRange, onToday, inWeek] = await Promise.all([
+    repo.dayRows(ctx.db, studentId, key, [drill], {}),
+    sessions(q.from, q.to),
+    sessions(today, today),
+    sessions(weekStart, today),
+  ])
+  const allDays = days.filter((d) => d.day <= today)
+  const within = (from?: string, to?: string) =>
+    allDays.filter((d) => (!from || d.day >= from) && (!to || d.day <= to))
+  const last = allDays.at(-1)
+  return {
+    studentId,
+    timeZone,
+    today,
+    range: { from: q.from ?? null, to: q.to ?? null },
+    totals: totalsOf(within(q.from, q.to), inRange),
+    todayTotals: totalsOf(within(today, today), onToday),
+    last7Days: totalsOf(within(weekStart, today), inWeek),
+    streak: streakOf(
+      allDays.map((d) => d.day),
+      today,
+    ),
+    lastPracticeAt: last ? last.lastAt.toISOString() : null,
+    instruments,
+    activeInstrumentId: instruments.find((i) => i.isActive)?.id ?? null,
+  }
+}
+
+async function itemScope(ctx: AppContext, viewer: PublicUser, q: ProgressScope) {
+  const studentId = await readableStudent(ctx, viewer, q.student)
+  const instrument = pickInstrument(await instrumentsOf(ctx, studentId), q.instrument, true)
+  const rows = instrument
+    ? await repo.itemRows(ctx.db, studentId, instrument.id, q.drill ?? ALL_DRILLS)
+    : []
+  return { instrument, rows }
+}
+
+/** Figures per fretboard place of one instrument (the active one by default). */
+export async function positions(
+  ctx: AppContext,
+  viewer: PublicUser,
+  q: ProgressScope,
+): Promise<PositionsAnswer> {
+  const { instrument, rows } = await itemScope(ctx, viewer, q)
+  return { instrument, positions: positionsFrom(rows) }
+}
+
+/** Figures per pitch class, per pitch and per string × pitch class of one instrument. */
+export async function notes(
+  ctx: AppContext,
+  viewer: PublicUser,
+  q: ProgressScope,
+): Promise<NotesAnswer> {
+  const { instrument, rows } = await itemScope(ctx, viewer, q)
+  return {
+    instrument,
+    pitchClasses: pitchClassFigures(rows),
+    pitches: pitchFigures(rows),
+    byString: stringFigures(rows, instrument?.tuning.length ?? 0),
+  }
+}
+
+/** Per-day points for all drills together and for each drill (last 30 days by default). */
+export async function timeline(
+  ctx: AppContext,
+  viewer: PublicUser,
+  q: RangeQuery,
+): Promise<TimelineAnswer> {
+  const studentId = await readableStudent(ctx, viewer, q.student)
+  const [instruments, timeZone] = await Promise.all([
+    instrumentsOf(ctx, studentId),
+    repo.timeZoneOf(ctx.db, studentId),
+  ])
+  const key = pickInstrument(instruments, q.instrument, false)?.id ?? ALL_INSTRUMENTS
+  const to = q.to ?? localDay(new Date(), timeZone)
+  const from = q.from ?? addDays(to, -(DEFAULT_TIMELINE_DAYS - 1))
+  const rows = await repo.dayRows(ctx.db, studentId, key, q.drill ? [q.drill] : null, { from, to })
+  const drills = [...new Set(rows.map((r) => r.drill))].sort((a, b) =>
+    a === ALL_DRILLS ? -1 : b === ALL_DRILLS ? 1 : a.localeCompare(b),
+  )
+  const series = drills.map((drill) => ({
+    drill: (drill === ALL_DRILLS ? 'all' : drill) as TimelineAnswer['series'][number]['drill'],
+    points: rows.filter((r) => r.drill === drill).map(toPoint),
+  }))
+  return { timeZone, from, to, series }
+}
+
+/** How often each fingering pattern of a key and region was practised in Range Runs. */
+export async function fingerings(
+  ctx: AppContext,
+  viewer: PublicUser,
+  q: FingeringsQuery,
+): Promise<FingeringsAnswer> {
+  const studentId = await readableStudent(ctx, viewer, q.student)
+  const instrument = q.instrument
+    ? pickInstrument(await instrumentsOf(ctx, studentId), q.instrument, false)
+    : null
+  const patterns = await repo.fingeringRows(ctx.db, studentId, {
+    ...q,
+    instrumentId: instrument?.id,
+  })
+  return { patterns }
+}

@@ -1,0 +1,90 @@
+// The roster summary of a teacher: one entry per student of their studios (the studio pages build
+// their sortable, paged roster table on rosterSummary).
+//
+// rosterSummary(ctx, teacherId) → { students: RosterStudent[] }, sorted by name, where
+//   RosterStudent = {
+//     studentId, name, email, studios: [{ id, name }],
+//     lastPracticeAt: ISO string | null,
+//     attempts7d, minutes7d,            // last 7 days in the student's time zone (today included)
+//     accuracy7d: 0..1 | null,          // right answers / answers, last 7 days
+//     medianRecallMs7d: number | null,  // median response time of right answers, last 7 days
+//     medianRecallMsPrev7d: number | null, // the same for the 7 days before
+//     recallTrend: { change: number | null, direction: 'faster' | 'slower' | 'steady' | null },
+//                                        // change = this week's median / last week's − 1 (−0.1 = 10 % faster)
+//     weakestPositions: [{ instrumentId, string, fret, pitch, answers, accuracy, medianMs }] // ≤ 3,
+//                                        // lowest recent accuracy first (latest 50 answers per place)
+//   }
+import type { AppContext } from '../context'
+import type { RosterStudent } from './progress-schema'
+import {
+  teacherMembers,
+  weakestPlaces,
+  weekFigures,
+  type WeakRow,
+  type WeekRow,
+} from './roster-repository'
+
+export type { RosterStudent }
+
+/** Below this relative change in median recall time the trend is "steady". */
+export const TREND_THRESHOLD = 0.05
+const WEAKEST_COUNT = 3
+
+export function recallTrend(
+  now: number | null,
+  before: number | null,
+): RosterStudent['recallTrend'] {
+  if (now === null || before === null || before <= 0) return { change: null, direction: null }
+  const change = now / before - 1
+  const direction =
+    change <= -TREND_THRESHOLD ? 'faster' : change >= TREND_THRESHOLD ? 'slower' : 'steady'
+  return { change: Math.round(change * 1000) / 1000, direction }
+}
+
+function weekPart(w: WeekRow | undefined) {
+  const attempts = Number(w?.attempts7d ?? 0)
+  return {
+    lastPracticeAt: w?.last_at ? w.last_at.toISOString() : null,
+    attempts7d: attempts,
+    minutes7d: Math.round(Number(w?.active_ms7d ?? 0) / 6000) / 10,
+    accuracy7d: attempts > 0 ? Number(w?.correct7d ?? 0) / attempts : null,
+    medianRecallMs7d: w?.median7d ?? null,
+    medianRecallMsPrev7d: w?.median_prev7d ?? null,
+    recallTrend: recallTrend(w?.median7d ?? null, w?.median_prev7d ?? null),
+  }
+}
+
+const toWeak = (r: WeakRow) => ({
+  instrumentId: r.instrument_key,
+  string: r.string,
+  fret: r.fret,
+  pitch: r.pitch,
+  answers: r.answers,
+  accuracy: r.recent_accuracy,
+  medianMs: r.recent_median_ms,
+})
+
+/** Every student of the teacher's studios with their week in figures (see the shape above). */
+export async function rosterSummary(
+  ctx: AppContext,
+  teacherId: string,
+): Promise<{ students: RosterStudent[] }> {
+  const members = await teacherMembers(ctx.db, teacherId)
+  if (!members.length) return { students: [] }
+  const ids = members.map((m) => m.id)
+  const [weeks, weak] = await Promise.all([
+    weekFigures(ctx.db, ids),
+    weakestPlaces(ctx.db, ids, WEAKEST_COUNT),
+  ])
+  const weekOf = new Map(weeks.map((w) => [w.user_id, w]))
+  return {
+    students: members.map((m) => ({
+      studentId: m.id,
+      name: m.name,
+      email: m.email,
+      studios: m.studios,
+      ...weekPart(weekOf.get(m.id)),
+      weakestPositions: weak.filter((w) => w.user_id === m.id).map(toWeak),
+    })),
+  }
+}

@@ -1,0 +1,13 @@
+// /api/attempts endpoints.
+import type {
+  AttemptBatchResult,
+  AttemptInput,
+  StoredAttempt,
+} from '../../server/attempts/attempts-schema'
+import { http } from './http'
+
+export type { AttemptBatchResult, AttemptInput, StoredAttempt }
+
+/** Sends a batch (≤ 200); ids already stored are skipped by the server, so re-sending is safe. */
+export const postAttempts = (attempts: AttemptInput[], timeZone?: string) =>
+  http.post<AttemptBatchResult>('/attempts', { attempts, ...(timeZone ? { timeZone } : {}) })

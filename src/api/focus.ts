@@ -1,0 +1,26 @@
+// /api/focus endpoint: the next questions for a drill, weakest places first, each with its reason.
+import type { FocusAnswer, FocusItem } from '../../server/focus/focus-schema'
+import type { KeyFocus, RegionFocus } from '../../server/focus/focus-keys'
+import type { DrillId } from '../drills/drill-settings'
+import { http } from './http'
+
+export type { FocusAnswer, FocusItem, KeyFocus, RegionFocus }
+
+export interface FocusParams {
+  drill: DrillId
+  /** The player's instrument id (their active one when left out). */
+  instrument?: string
+  /** How many questions (1–100, default 24). */
+  n?: number
+  lowString?: number
+  highString?: number
+  lowFret?: number
+  highFret?: number
+  /** Scale whose keys are ranked for runs, scatter and cycle (default major). */
+  scale?: string
+  /** Makes the draw reproducible. */
+  seed?: number
+}
+
+export const fetchFocus = (params: FocusParams) =>
+  http.get<FocusAnswer>('/focus', { query: { ...params } })

@@ -1,0 +1,63 @@
+// /api/progress endpoints: a student's statistics (own, or `student` for their teachers) and the roster.
+import type {
+  FingeringsAnswer,
+  ItemFigures,
+  NotesAnswer,
+  PositionFigures,
+  PositionsAnswer,
+  ProgressInstrument,
+  RosterStudent,
+  SummaryAnswer,
+  TimelineAnswer,
+  TimelinePoint,
+} from '../../server/progress/progress-schema'
+import type { DrillId } from '../drills/drill-settings'
+import { http } from './http'
+
+export type {
+  FingeringsAnswer,
+  ItemFigures,
+  NotesAnswer,
+  PositionFigures,
+  PositionsAnswer,
+  ProgressInstrument,
+  RosterStudent,
+  SummaryAnswer,
+  TimelineAnswer,
+  TimelinePoint,
+}
+
+/** Whose progress (omit for your own), on which instrument and drill, over which days (YYYY-MM-DD). */
+export interface ProgressFilter {
+  student?: string
+  instrument?: string
+  drill?: DrillId
+  from?: string
+  to?: string
+}
+
+const scope = ({ student, instrument, drill }: ProgressFilter) => ({ student, instrument, drill })
+
+export const fetchSummary = (f: ProgressFilter) =>
+  http.get<SummaryAnswer>('/progress/summary', { query: { ...f } })
+export const fetchPositions = (f: ProgressFilter) =>
+  http.get<PositionsAnswer>('/progress/positions', { query: scope(f) })
+export const fetchNotes = (f: ProgressFilter) =>
+  http.get<NotesAnswer>('/progress/notes', { query: scope(f) })
+export const fetchTimeline = (f: ProgressFilter) =>
+  http.get<TimelineAnswer>('/progress/timeline', { query: { ...f } })
+export const fetchRosterSummary = () =>
+  http.get<{ students: RosterStudent[] }>('/progress/roster-summary')
+
+export interface FingeringsParams {
+  student?: string
+  instrument?: string
+  tonic: string
+  scale: string
+  lowFret: number
+  highFret: number
+}
+
+/** How often each fingering of a key and region was practised in Range Runs. */
+export const fetchFingerings = (p: FingeringsParams) =>
+  http.get<FingeringsAnswer>('/progress/fingerings', { query: { ...p } })

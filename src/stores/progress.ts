@@ -1,0 +1,92 @@
+// Progress figures of one student (the signed-in one, or a teacher's student via `student`): summary,
+// timeline, places and notes, loaded together for one filter.
+import { defineStore } from 'pinia'
+import { computed, ref } from 'vue'
+import { ApiError } from '../api/http'
+import * as api from '../api/progress'
+import type {
+  NotesAnswer,
+  PositionsAnswer,
+  ProgressFilter,
+  SummaryAnswer,
+  TimelineAnswer,
+} from '../api/progress'
+import type { DrillId } from '../drills/drill-settings'
+
+/** Date ranges offered by the filters, in days back from today. */
+export const RANGE_CHOICES = [7, 30, 90, 365] as const
+export type RangeDays = (typeof RANGE_CHOICES)[number]
+
+export interface ProgressSelection {
+  studentId?: string
+  instrumentId?: string
+  drill?: DrillId
+  rangeDays: RangeDays
+}
+
+/** YYYY-MM-DD of `today` moved back by days (calendar arithmetic in UTC, as the API's days). */
+export function daysBefore(today: string, days: number) {
+  const d = new Date(`${today}T00:00:00Z`)
+  d.setUTCDate(d.getUTCDate() - days)
+  return d.toISOString().slice(0, 10)
+}
+
+const localToday = () =>
+  new Intl.DateTimeFormat('en-CA', { year: 'numeric', month: '2-digit', day: '2-digit' }).format(
+    new Date(),
+  )
+
+export const useProgressStore = defineStore('progress', () => {
+  const selection = ref<ProgressSelection>({ rangeDays: 30 })
+  const summary = ref<SummaryAnswer | null>(null)
+  const timeline = ref<TimelineAnswer | null>(null)
+  const positions = ref<PositionsAnswer | null>(null)
+  const notes = ref<NotesAnswer | null>(null)
+  const isLoading = ref(false)
+  const error = ref<ApiError | null>(null)
+  let request = 0
+
+  /** True once loaded for a student who has never practised (the page shows how to start). */
+  const isEmpty = computed(() => summary.value !== null && summary.value.lastPracticeAt === null)
+
+  function filterOf(s: ProgressSelection): ProgressFilter {
+    const to = summary.value?.today ?? localToday()
+    return {
+      student: s.studentId,
+      instrument: s.instrumentId,
+      drill: s.drill,
+      from: daysBefore(to, s.rangeDays - 1),
+      to,
+    }
+  }
+
+  /** Loads everything for a selection; a newer call wins over a slower older one. */
+  async function load(next: Partial<ProgressSelection> = {}) {
+    const mine = ++request
+    if ('studentId' in next && next.studentId !== selection.value.studentId) summary.value = null
+    selection.value = { ...selection.value, ...next }
+    isLoading.value = true
+    error.value = null
+    try {
+      const f = filterOf(selection.value)
+      const [s, t, p, n] = await Promise.all([
+        api.fetchSummary(f),
+        api.fetchTimeline(f),
+        api.fetchPositions(f),
+        api.fetchNotes(f),
+      ])
+      if (mine !== request) return
+      summary.value = s
+      timeline.value = t
+      positions.value = p
+      notes.value = n
+    } catch (e) {
+      if (mine === request)
+        error.value = e instanceof ApiError ? e : new ApiError(0, 'unknown', String(e))
+    } finally {
+      if (mine === request) isLoading.value = false
+    }
+  }
+
+  return { selection, summary, timeline, positions, notes, isLoading, error, isEmpty, load }
+})

@@ -1,0 +1,227 @@
+// The attempts recorder: batching, retry with back-off, a queue that survives reloads, and answers
+// the server refuses dropped with a visible error. fetch is stubbed; time is faked.
+import { createPinia, setActivePinia } from 'pinia'
+import { afterEach, beforeEach, describe, expect, it, vi } from 'vitest'
+import type { AttemptInput } from '../../src/api/attempts'
+import { BATCH_SIZE, FLUSH_DELAY_MS, useAttemptsStore } from '../../src/stores/attempts'
+import { useAuthStore } from '../../src/stores/auth'
+
+const PLAYER = {
+  id: 'player-1',
+  email: 'noor@example.test',
+  name: 'Noor',
+  role: 'student' as const,
+  createdAt: '',
+}
+let sequence = 0
+
+function attempt(): AttemptInput {
+  sequence += 1
+  return {
+    id: `00000000-0000-4000-8000-${String(sequence).padStart(12, '0')}`,
+    instrumentId: null,
+    tuning: [28, 33, 38, 43],
+    drill: 'recall',
+    sessionId: '00000000-0000-4000-8000-aaaaaaaaaaaa',
+    string: 1,
+    fret: 3,
+    expectedPitch: 36,
+    answer: 'C',
+    correct: true,
+    responseMs: 1200,
+    createdAt: new Date().toISOString(),
+    detail: {},
+    planItemId: null,
+  }
+}
+
+type Reply = 'network' | number | { status: number; body: unknown }
+
+/** A fetch that answers each call with the next reply (the last one repeats); records sent bodies. */
+function stubFetch(...replies: Reply[]) {
+  const bodies: { attempts: AttemptInput[]; timeZone?: string }[] = []
+  const statuses: number[] = []
+  let call = 0
+  const fetch = vi.fn(async (_url: string, init: RequestInit) => {
+    const reply = replies[Math.min(call++, replies.length - 1)]!
+    const body = JSON.parse(String(init.body))
+    bodies.push(body)
+    if (reply === 'network') throw new TypeError('Failed to fetch')
+    const { status, body: answer } =
+      typeof reply === 'number'
+        ? { status: reply, body: { error: { code: 'x', message: 'Server unwell' } } }
+        : reply
+    statuses.push(status)
+    const ok = status < 300 ? { stored: body.attempts.length, duplicates: 0, attempts: [] } : answer
+    return new Response(JSON.stringify(ok), {
+      status,
+      headers: { 'content-type': 'application/json' },
+    })
+  })
+  vi.stubGlobal('fetch', fetch)
+  return { fetch, bodies, statuses }
+}
+
+function freshStore() {
+  setActivePinia(createPinia())
+  useAuthStore().user = PLAYER
+  return useAttemptsStore()
+}
+
+beforeEach(() => {
+  vi.useFakeTimers()
+  localStorage.clear()
+})
+afterEach(() => {
+  vi.useRealTimers()
+  vi.unstubAllGlobals()
+})
+
+describe('attempts recorder', () => {
+  it('when sending fails twice and then succeeds, then every answer is sent once, after back-off, with none lost or doubled', async () => {
+    const { fetch, bodies } = stubFetch('network', 503, 201)
+    const store = freshStore()
+    const answers = [attempt(), attempt(), attempt()]
+    answers.forEach((a) => store.record(a))
+
+    await store.flush() // 1st try: network error
+    expect(store.pending).toBe(3)
+    expect(store.lastError?.status).toBe(0)
+    await vi.advanceTimersByTimeAsync(1300) // back-off 1 s (+ jitter): 2nd try, 503
+    expect(fetch).toHaveBeenCalledTimes(2)
+    expect(store.lastError?.status).toBe(503)
+    await vi.advanceTimersByTimeAsync(1000)
+    expect(fetch).toHaveBeenCalledTimes(2) // back-off doubled to 2 s: not yet
+    await vi.advanceTimersByTimeAsync(1300)
+
+    expect(fetch).toHaveBeenCalledTimes(3)
+    const accepted = bodies[2]!.attempts.map((a) => a.id)
+    expect(accepted).toEqual(answers.map((a) => a.id))
+    expect(new Set(accepted).size).toBe(3)
+    expect(store.pending).toBe(0)
+    expect(store.lastError).toBeNull()
+    await vi.advanceTimersByTimeAsync(120_000)
+    expect(fetch).toHaveBeenCalledTimes(3) // nothing is sent again
+  })
+
+  it('when fewer than 20 answers wait, then they go out together a few seconds later', async () => {
+    const { fetch, bodies } = stubFetch(201)
+    const store = freshStore()
+    store.record(attempt())
+    store.record(attempt())
+
+    await vi.advanceTimersByTimeAsync(FLUSH_DELAY_MS - 100)
+    expect(fetch).not.toHaveBeenCalled()
+    await vi.advanceTimersByTimeAsync(200)
+
+    expect(fetch).toHaveBeenCalledTimes(1)
+    expect(bodies[0]!.attempts).toHaveLength(2)
+    expect(bodies[0]!.timeZone).toBeTypeOf('string')
+  })
+
+  it('when the 20th answer is recorded, then the batch goes out at once', async () => {
+    const { fetch, bodies } = stubFetch(201)
+    const store = freshStore()
+    for (let i = 0; i < BATCH_SIZE; i++) store.record(attempt())
+    await vi.advanceTimersByTimeAsync(0)
+    expect(fetch).toHaveBeenCalledTimes(1)
+    expect(bodies[0]!.attempts).toHaveLength(BATCH_SIZE)
+  })
+
+  it('when the page is reloaded before sending, then the queued answers are still there and are sent', async () => {
+    stubFetch('network')
+    const first = freshStore()
+    const answers = [attempt(), attempt()]
+    answers.forEach((a) => first.record(a))
+    await first.flush()
+
+    const { bodies } = stubFetch(201)
+    const reloaded = freshStore() // a new Pinia: what a page reload gives
+    expect(reloaded.pending).toBe(2)
+    await reloaded.flush()
+
+    expect(bodies[0]!.attempts.map((a) => a.id)).toEqual(answers.map((a) => a.id))
+    expect(reloaded.pending).toBe(0)
+  })
+
+  it('when the server refuses one answer of a batch, then only that one is dropped, with a visible error, and the rest are sent', async () => {
+    const refusal = {
+      status: 400,
+      body: {
+        error: {
+          code: 'invalid_input',
+          message: 'Some fields need attention.',
+          fields: { 'attempts.1.fret': ['Too high.'] },
+        },
+      },
+    }
+    const { bodies } = stubFetch(refusal, 201)
+    const store = freshStore()
+    const answers = [attempt(), attempt(), attempt()]
+    answers.forEach((a) => store.record(a))
+
+    await store.flush()
+
+    expect(bodies).toHaveLength(2)
+    expect(bodies[1]!.attempts.map((a) => a.id)).toEqual([answers[0]!.id, answers[2]!.id])
+    expect(store.pending).toBe(0)
+    expect(store.dropped).toBe(1)
+    expect(store.lastError?.message).toContain('One answer could not be saved')
+  })
+
+  it('when the server refuses a batch without naming answers, then the batch is dropped and the queue moves on', async () => {
+    const { bodies } = stubFetch(
+      { status: 400, body: { error: { code: 'invalid_input', message: 'Bad batch.' } } },
+      201,
+    )
+    const store = freshStore()
+    store.record(attempt())
+    store.record(attempt())
+    await store.flush()
+    expect(store.pending).toBe(0)
+    expect(store.dropped).toBe(2)
+    expect(bodies).toHaveLength(1)
+    store.record(attempt())
+    await store.flush()
+    expect(bodies).toHaveLength(2) // later answers still go out
+  })
+
+  it('when the session has ended (401), then the answers stay queued for the next sign-in', async () => {
+    stubFetch({
+      status: 401,
+      body: { error: { code: 'unauthorized', message: 'Please sign in.' } },
+    })
+    const store = freshStore()
+    store.record(attempt())
+    await store.flush()
+    expect(store.pending).toBe(1)
+    expect(store.lastError?.status).toBe(401)
+    expect(JSON.parse(localStorage.getItem('ambitus.attempts.v1.player-1')!)).toHaveLength(1)
+  })
+
+  it('when the page is hidden, then waiting answers are sent without waiting for the timer', async () => {
+    const { fetch } = stubFetch(201)
+    const store = freshStore()
+    store.record(attempt())
+    Object.defineProperty(document, 'visibilityState', { value: 'hidden', configurable: true })
+    document.dispatchEvent(new Event('visibilitychange'))
+    await vi.advanceTimersByTimeAsync(0)
+    Object.defineProperty(document, 'visibilityState', { value: 'visible', configurable: true })
+    expect(fetch).toHaveBeenCalledTimes(1)
+  })
+
+  it("when another player signs in on this browser, then they never send the first player's answers", async () => {
+    const { bodies } = stubFetch('network', 201)
+    const store = freshStore()
+    store.record(attempt())
+    await store.flush()
+    const auth = useAuthStore()
+    auth.user = { ...PLAYER, id: 'player-2' }
+    await vi.advanceTimersByTimeAsync(0)
+    expect(store.pending).toBe(0)
+    auth.user = PLAYER
+    await vi.advanceTimersByTimeAsync(0)
+    expect(store.pending).toBe(0) // sent again for player 1 on their return
+    expect(bodies.at(-1)!.attempts).toHaveLength(1)
+  })
+})
