@@ -9,15 +9,39 @@ export type DrillId = z.infer<typeof DrillIdSchema>
 
 /** Display names and the one-line reason each drill helps (shown on the practice page). */
 export const DRILLS: Record<DrillId, { name: string; route: string; why: string }> = {
-  recall: { name: 'Neck Recall', route: '/practice/recall', why: 'Name every note of a blank stretch of neck from memory, so you stop counting up from the open string.' },
-  hunt: { name: 'Pitch Hunt', route: '/practice/hunt', why: 'Hear a pitch and find where it lives in the right octave, linking sound to place.' },
-  runs: { name: 'Range Runs', route: '/practice/runs', why: 'Play a scale from the lowest to the highest note a hand position offers, through every string combination.' },
-  scatter: { name: 'Octave Scatter', route: '/practice/scatter', why: 'Play a scale whose notes jump octaves, so every note is known all over the neck, not in one box.' },
-  cycle: { name: 'Window Cycle', route: '/practice/cycle', why: 'Play every key of a cycle inside a fixed low/high window, folding notes back when they leave it.' },
+  recall: {
+    name: 'Neck Recall',
+    route: '/practice/recall',
+    why: 'Name every note of a blank stretch of neck from memory, so you stop counting up from the open string.',
+  },
+  hunt: {
+    name: 'Pitch Hunt',
+    route: '/practice/hunt',
+    why: 'Hear a pitch and find where it lives in the right octave, linking sound to place.',
+  },
+  runs: {
+    name: 'Range Runs',
+    route: '/practice/runs',
+    why: 'Play a scale from the lowest to the highest note a hand position offers, through every string combination.',
+  },
+  scatter: {
+    name: 'Octave Scatter',
+    route: '/practice/scatter',
+    why: 'Play a scale whose notes jump octaves, so every note is known all over the neck, not in one box.',
+  },
+  cycle: {
+    name: 'Window Cycle',
+    route: '/practice/cycle',
+    why: 'Play every key of a cycle inside a fixed low/high window, folding notes back when they leave it.',
+  },
 }
 
-const Tonic = z.string().refine((t) => TONICS.includes(t), 'Choose one of the 18 key tonics (C, G, D … A#).')
-const Scale = z.string().refine((s) => SCALE_TYPES.some((t) => t.name === s), 'Choose a known scale.')
+const Tonic = z
+  .string()
+  .refine((t) => TONICS.includes(t), 'Choose one of the 18 key tonics (C, G, D … A#).')
+const Scale = z
+  .string()
+  .refine((s) => SCALE_TYPES.some((t) => t.name === s), 'Choose a known scale.')
 const Pitch = z.number().int().min(0).max(127)
 const Fret = z.number().int().min(0).max(30)
 
@@ -28,8 +52,16 @@ const Length = z.object({
 })
 
 const Region = z
-  .object({ lowString: z.number().int().min(0).max(9), highString: z.number().int().min(0).max(9), lowFret: Fret, highFret: Fret })
-  .refine((r) => r.lowString <= r.highString && r.lowFret <= r.highFret, 'The region ends before it starts.')
+  .object({
+    lowString: z.number().int().min(0).max(9),
+    highString: z.number().int().min(0).max(9),
+    lowFret: Fret,
+    highFret: Fret,
+  })
+  .refine(
+    (r) => r.lowString <= r.highString && r.lowFret <= r.highFret,
+    'The region ends before it starts.',
+  )
 
 export const RecallSettingsSchema = Length.extend({
   region: Region,
@@ -58,6 +90,8 @@ export const RunsSettingsSchema = Length.extend({
   highFret: Fret,
   maxPerString: z.number().int().min(1).max(8).default(4),
   handSpan: z.number().int().min(2).max(8).default(4),
+  /** Show the chosen fingering's cells on the board while playing (off: from memory). */
+  showFingering: z.boolean().default(true),
 })
 
 export const ScatterSettingsSchema = Length.extend({
@@ -94,7 +128,13 @@ export type HuntSettings = z.infer<typeof HuntSettingsSchema>
 export type RunsSettings = z.infer<typeof RunsSettingsSchema>
 export type ScatterSettings = z.infer<typeof ScatterSettingsSchema>
 export type CycleSettings = z.infer<typeof CycleSettingsSchema>
-export type DrillSettings = { recall: RecallSettings; hunt: HuntSettings; runs: RunsSettings; scatter: ScatterSettings; cycle: CycleSettings }
+export type DrillSettings = {
+  recall: RecallSettings
+  hunt: HuntSettings
+  runs: RunsSettings
+  scatter: ScatterSettings
+  cycle: CycleSettings
+}
 
 /** A drill with its settings (a "preset"): what a practice plan item or a quick-start link holds. */
 export const DrillPresetSchema = z.discriminatedUnion('drill', [

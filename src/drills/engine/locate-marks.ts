@@ -1,0 +1,43 @@
+// Board marks for drills answered by picking cells: the picks of the current question (right or
+// wrong, named) and, once it is answered, the places the student did not pick.
+import type { CellMark } from '../../components/fretboard/fretboard-types'
+import {
+  noteAt,
+  pitchName,
+  toUnicode,
+  type AccidentalPreference,
+  type Position,
+} from '../../theory'
+import { sameCell } from './locate'
+import type { Grade } from './types'
+
+export interface LocateMarkOptions {
+  tuning: readonly number[]
+  accidentals: AccidentalPreference
+  picks: readonly Grade[]
+  /** The question is answered: show the places it revealed. */
+  answered: boolean
+  /** How the expected note is labelled on revealed places ("B♭2"). */
+  expectedLabel: string
+}
+
+export function locateMarks(options: LocateMarkOptions): CellMark[] {
+  const { tuning, accidentals, picks } = options
+  const marks: CellMark[] = []
+  const picked: Position[] = []
+  for (const grade of picks) {
+    if (!grade.pick || picked.some((cell) => sameCell(cell, grade.pick as Position))) continue
+    picked.push(grade.pick)
+    const label = toUnicode(
+      pitchName(noteAt(tuning, grade.pick.string, grade.pick.fret), accidentals),
+    )
+    marks.push({ ...grade.pick, kind: grade.correct ? 'correct' : 'wrong', label })
+  }
+  const last = picks[picks.length - 1]
+  const reveal = options.answered ? (last?.reveal ?? []) : []
+  for (const cell of reveal) {
+    if (!picked.some((other) => sameCell(other, cell)))
+      marks.push({ ...cell, kind: 'hint', label: options.expectedLabel })
+  }
+  return marks
+}

@@ -1,0 +1,38 @@
+// One graded answer as the attempts API stores it (server/attempts/attempts-schema.ts).
+import type { AttemptInput } from '../../../server/attempts/attempts-schema'
+import type { DrillId } from '../drill-settings'
+import type { AnswerRecord, DrillQuestion } from './types'
+
+export interface AttemptContext {
+  instrumentId: string | null
+  tuning: readonly number[]
+  planItemId: string | null
+}
+
+const MAX_RESPONSE_MS = 600_000
+
+export function toAttempt<Q extends DrillQuestion>(
+  drill: DrillId,
+  sessionId: string,
+  entry: AnswerRecord<Q>,
+  context: AttemptContext,
+  createdAt: Date = new Date(),
+): AttemptInput {
+  const { question, grade } = entry
+  return {
+    id: crypto.randomUUID(),
+    instrumentId: context.instrumentId,
+    tuning: [...context.tuning],
+    drill,
+    sessionId,
+    string: grade.cell?.string ?? null,
+    fret: grade.cell?.fret ?? null,
+    expectedPitch: question.expectedPitch,
+    answer: grade.answer.slice(0, 32),
+    correct: grade.correct,
+    responseMs: Math.min(MAX_RESPONSE_MS, Math.max(0, Math.round(entry.responseMs))),
+    createdAt: createdAt.toISOString(),
+    detail: { ...question.detail, ...grade.detail },
+    planItemId: context.planItemId,
+  }
+}

@@ -1,0 +1,44 @@
+// A drill's settings on the page: the plan item's when practising one, else the ones remembered in
+// this browser, else defaults made for the player's instrument once it has loaded (remembered
+// settings that do not fit this instrument are replaced by those defaults too).
+import { ref, watch, type Ref } from 'vue'
+import { DRILL_SETTINGS_SCHEMAS, type DrillId, type DrillSettings } from '../drill-settings'
+import { copySettings, loadSettings } from './remembered-settings'
+import type { DrillNeck } from './useDrillNeck'
+import type { LoadedPlanItem } from './usePlanItem'
+
+export interface DrillSettingsOptions<D extends DrillId> {
+  drill: D
+  neck: Ref<DrillNeck>
+  /** True once the player's instrument has loaded. */
+  ready: Ref<boolean>
+  planItem: Ref<LoadedPlanItem<D> | null>
+  defaults: (neck: DrillNeck) => DrillSettings[D]
+  /** Whether settings suit this instrument (e.g. a pitch window inside its range). */
+  fits?: (settings: DrillSettings[D], neck: DrillNeck) => boolean
+}
+
+export function useDrillSettings<D extends DrillId>(
+  options: DrillSettingsOptions<D>,
+): Ref<DrillSettings[D]> {
+  const { drill, neck } = options
+  const remembered = loadSettings(drill, DRILL_SETTINGS_SCHEMAS[drill]) as DrillSettings[D] | null
+  const settings = ref(remembered ?? options.defaults(neck.value)) as Ref<DrillSettings[D]>
+
+  let checked = false // only when the instrument first arrives; later changes are the student's
+  watch(
+    options.ready,
+    (ready) => {
+      if (!ready || checked) return
+      checked = true
+      const fits = options.fits?.(settings.value, neck.value) ?? true
+      if (!options.planItem.value && (!remembered || !fits))
+        settings.value = options.defaults(neck.value)
+    },
+    { immediate: true },
+  )
+  watch(options.planItem, (item) => {
+    if (item) settings.value = copySettings(item.settings)
+  })
+  return settings
+}
