@@ -23,3 +23,4 @@ export const changeRole = (id: string, role: Role) =>
   http.patch<{ user: PublicUser }>(`/admin/users/${id}`, { role })
 export const listMail = (query: PageQuery) => http.get<Page<MailSummary>>('/admin/mail', { query })
 export const fetchMail = (id: number) => http.get<{ message: MailMessage }>(`/admin/mail/${id}`)
+export const sendDigestsNow = () => http.post<{ sent: number }>('/admin/digests/send')

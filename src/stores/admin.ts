@@ -51,5 +51,8 @@ export const useAdminStore = defineStore('admin', () => {
       openMessage.value = (await adminApi.fetchMail(id)).message
     })
 
-  return { users, userTotal, mail, mailTotal, openMessage, isLoading, error, loadUsers, setRole, loadMail, openMail }
+  /** Sends every teacher's weekly digest now; resolves to how many went out (errors are thrown to the caller). */
+  const sendDigests = async () => (await adminApi.sendDigestsNow()).sent
+
+  return { users, userTotal, mail, mailTotal, openMessage, isLoading, error, loadUsers, setRole, loadMail, openMail, sendDigests }
 })

@@ -1,0 +1,57 @@
+// Texts of the plan e-mails: a plan was assigned, a plan is due soon.
+import { publicUrl, type Config } from '../config'
+import type { OutgoingMail } from '../lib/mail'
+import { describePreset, describeTarget } from '../../src/plans/plan-text'
+import type { PlanItem } from './plans-schema'
+
+const dateText = (due: Date | string | null) =>
+  due ? new Date(due).toUTCString().replace(/:\d\d GMT$/, ' UTC') : 'no due date'
+
+const itemLines = (items: Pick<PlanItem, 'preset' | 'target'>[]) =>
+  items.map(
+    (item, i) =>
+      `${i + 1}. ${describePreset(item.preset)}\n   Target: ${describeTarget(item.target)}`,
+  )
+
+export function planAssignedMail(
+  config: Config,
+  to: { email: string; name: string },
+  plan: { title: string; notes: string; dueAt: string | null; items: PlanItem[] },
+  teacherName: string,
+): OutgoingMail {
+  return {
+    to: to.email,
+    subject: `New practice plan: ${plan.title}`,
+    text: [
+      `Hello ${to.name},`,
+      '',
+      `${teacherName} assigned you the practice plan "${plan.title}" (due ${dateText(plan.dueAt)}).`,
+      ...(plan.notes ? ['', plan.notes] : []),
+      '',
+      ...itemLines(plan.items),
+      '',
+      `Start it from your plans: ${publicUrl(config)}/plans`,
+      '',
+      'Short, regular sessions work best. Take a break when your hands tire, and stop if anything hurts.',
+    ].join('\n'),
+  }
+}
+
+export function dueSoonMail(
+  config: Config,
+  to: { email: string; name: string },
+  plan: { title: string; dueAt: Date; targetsMet: number; targetsTotal: number },
+): OutgoingMail {
+  return {
+    to: to.email,
+    subject: `Due soon: ${plan.title}`,
+    text: [
+      `Hello ${to.name},`,
+      '',
+      `Your practice plan "${plan.title}" is due ${dateText(plan.dueAt)}.`,
+      `You have reached ${plan.targetsMet} of ${plan.targetsTotal} targets so far.`,
+      '',
+      `Pick it up here: ${publicUrl(config)}/plans`,
+    ].join('\n'),
+  }
+}

@@ -1,0 +1,168 @@
+// Practice plan use cases for teachers: create, edit, copy, delete, assign and unassign; and the
+// plan item a drill view opens (for the assigned student and the plan's teacher).
+import type { AppContext } from '../context'
+import { forbidden, notFound } from '../lib/errors'
+import type { PublicUser } from '../users/users-schema'
+import { recordingStorage } from '../recordings/recording-storage'
+import { storageKeysOf } from '../recordings/recordings-repository'
+import { notify } from '../notifications/notify'
+import { teacherStudents } from '../studio/studio-repository'
+import {
+  deleteAssignments,
+  deletePlan as removePlan,
+  findAssignmentId,
+  findItemWithPlan,
+  findPlan,
+  findPlanRecord,
+  insertAssignments,
+  insertPlan,
+  listTeacherPlans,
+  updatePlan as replacePlan,
+  type PlanRecord,
+} from './plans-repository'
+import { planAssignedMail } from './plans-mail'
+import type { Plan, PlanCreateInput, PlanItemContext, PlanUpdateInput } from './plans-schema'
+import { STARTER_PLANS } from './starter-plans'
+
+export const listPlans = (ctx: AppContext, teacherId: string) => listTeacherPlans(ctx.db, teacherId)
+export const starterPlans = () => STARTER_PLANS
+
+async function ownPlan(ctx: AppContext, teacherId: string, planId: string): Promise<PlanRecord> {
+  const plan = await findPlanRecord(ctx.db, planId)
+  if (!plan) throw notFound('That plan')
+  if (plan.teacherId !== teacherId) throw forbidden('This plan belongs to another teacher.')
+  return plan
+}
+
+async function loadPlan(ctx: AppContext, planId: string): Promise<Plan> {
+  const plan = await findPlan(ctx.db, planId)
+  if (!plan) throw notFound('That plan')
+  return plan
+}
+
+/** Deletes recording files after their rows are gone; a missing file is not an error. */
+async function dropFiles(ctx: AppContext, keys: string[]) {
+  const storage = recordingStorage(ctx)
+  await Promise.all(
+    keys.map((key) =>
+      storage
+        .delete(key)
+        .catch((err: unknown) => ctx.logger.warn({ err }, 'recording delete failed')),
+    ),
+  )
+}
+
+/** Assigns the plan to students of the teacher's studios and mails the ones newly assigned. */
+async function assign(ctx: AppContext, teacher: PublicUser, planId: string, studentIds: string[]) {
+  const students = await teacherStudents(ctx.db, teacher.id)
+  const byId = new Map(students.map((s) => [s.id, s]))
+  if (studentIds.some((id) => !byId.has(id))) {
+    throw forbidden('Plans can only be assigned to students of your studios.')
+  }
+  const added = await insertAssignments(ctx.db, planId, [...new Set(studentIds)])
+  const plan = await loadPlan(ctx, planId)
+  await notify(
+    ctx,
+    added.map((id) => planAssignedMail(ctx.config, byId.get(id)!, plan, teacher.name)),
+  )
+  return plan
+}
+
+export async function getPlan(ctx: AppContext, teacherId: string, planId: string) {
+  await ownPlan(ctx, teacherId, planId)
+  return loadPlan(ctx, planId)
+}
+
+export async function createPlan(ctx: AppContext, teacher: PublicUser, input: PlanCreateInput) {
+  const { studentIds, ...fields } = input
+  const planId = await ctx.db.transaction((trx) => insertPlan(trx, teacher.id, fields))
+  return studentIds.length ? assign(ctx, teacher, planId, studentIds) : loadPlan(ctx, planId)
+}
+
+export async function updatePlan(
+  ctx: AppContext,
+  teacherId: string,
+  planId: string,
+  input: PlanUpdateInput,
+) {
+  const current = await getPlan(ctx, teacherId, planId)
+  const sent = new Set(input.items.map((item) => item.id))
+  const removed = current.items.filter((item) => !sent.has(item.id)).map((item) => item.id)
+  const keys = await storageKeysOf(ctx.db, { itemIds: removed })
+  await ctx.db.transaction((trx) => replacePlan(trx, planId, input))
+  await dropFiles(ctx, keys)
+  return loadPlan(ctx, planId)
+}
+
+/** A copy with the same notes, items and due date, assigned to nobody. */
+export async function copyPlan(ctx: AppContext, teacherId: string, planId: string) {
+  const plan = await getPlan(ctx, teacherId, planId)
+  const copy = {
+    title: `${plan.title} (copy)`.slice(0, 120),
+    notes: plan.notes,
+    dueAt: plan.dueAt,
+    items: plan.items.map(({ preset, target }) => ({ preset, target })),
+  }
+  const newId = await ctx.db.transaction((trx) => insertPlan(trx, teacherId, copy))
+  return loadPlan(ctx, newId)
+}
+
+export async function deletePlan(ctx: AppContext, teacherId: string, planId: string) {
+  await ownPlan(ctx, teacherId, planId)
+  const keys = await storageKeysOf(ctx.db, { planId })
+  await removePlan(ctx.db, planId)
+  await dropFiles(ctx, keys)
+}
+
+export async function assignPlan(
+  ctx: AppContext,
+  teacher: PublicUser,
+  planId: string,
+  studentIds: string[],
+) {
+  await ownPlan(ctx, teacher.id, planId)
+  return assign(ctx, teacher, planId, studentIds)
+}
+
+/** Removes one student's assignment, with its comments and recordings. */
+export async function unassignPlan(
+  ctx: AppContext,
+  teacherId: string,
+  planId: string,
+  studentId: string,
+) {
+  await ownPlan(ctx, teacherId, planId)
+  const assignmentId = await findAssignmentId(ctx.db, planId, studentId)
+  if (!assignmentId) throw notFound('That assignment')
+  await purgeAssignments(ctx, [assignmentId])
+  return loadPlan(ctx, planId)
+}
+
+/** Deletes assignments (comments and recordings go with them) and their recording files. */
+export async function purgeAssignments(ctx: AppContext, assignmentIds: string[]) {
+  const keys = await storageKeysOf(ctx.db, { assignmentIds })
+  await deleteAssignments(ctx.db, assignmentIds)
+  await dropFiles(ctx, keys)
+}
+
+/** A plan item for a drill view: its student (when assigned) or its teacher may open it. */
+export async function planItemContext(
+  ctx: AppContext,
+  user: PublicUser,
+  itemId: string,
+): Promise<PlanItemContext> {
+  const found = await findItemWithPlan(ctx.db, itemId)
+  if (!found) throw notFound('That plan item')
+  const isTeacher = found.teacherId === user.id
+  const isStudent = !isTeacher && (await findAssignmentId(ctx.db, found.planId, user.id)) !== null
+  if (!isTeacher && !isStudent) throw forbidden('This plan item is not assigned to you.')
+  const { id, preset, target } = found.item
+  return {
+    id,
+    planId: found.planId,
+    planTitle: found.planTitle,
+    preset,
+    target,
+    dueAt: found.dueAt?.toISOString() ?? null,
+  }
+}

@@ -1,0 +1,105 @@
+// The starter library: ready-made plans a teacher copies and adapts. Settings are parsed through the
+// shared drill schemas at load time, so every default is filled in and a bad entry fails loudly.
+import { DrillPresetSchema, PracticeTargetSchema } from '../../src/drills/drill-settings'
+import type { StarterPlan } from './plans-schema'
+
+interface StarterInput {
+  key: string
+  title: string
+  notes: string
+  items: { preset: unknown; target: unknown }[]
+}
+
+// Region strings 0–3 fit every 4- to 8-string instrument; frets stay within the first 12.
+const STARTERS: StarterInput[] = [
+  {
+    key: 'first-position-names',
+    title: 'First position note names',
+    notes:
+      'Name every note from the nut to the fifth fret on the four lowest strings, from memory. Short daily sessions beat one long one.',
+    items: [
+      {
+        preset: {
+          drill: 'recall',
+          settings: { region: { lowString: 0, highString: 3, lowFret: 0, highFret: 5 } },
+        },
+        target: { kind: 'accuracy', minAccuracy: 0.9, maxMedianMs: 2500, minAttempts: 60 },
+      },
+    ],
+  },
+  {
+    key: 'fourths-one-octave',
+    title: 'Fourths in a one-octave window',
+    notes:
+      'Every major key round the cycle of fourths, root to octave, inside A1–A2. Notes that leave the window fold back down.',
+    items: [
+      {
+        preset: {
+          drill: 'cycle',
+          settings: { low: 33, high: 45, scale: 'major', cycle: 'fourths' },
+        },
+        target: { kind: 'all-keys' },
+      },
+    ],
+  },
+  {
+    key: 'pitch-hunt-twelve',
+    title: 'Find it by ear, frets 0–12',
+    notes:
+      'Hear a pitch, find it in the right octave. Keep the volume moderate and take a short break every 20 minutes.',
+    items: [
+      {
+        preset: { drill: 'hunt', settings: { lowFret: 0, highFret: 12 } },
+        target: { kind: 'accuracy', minAccuracy: 0.85, maxMedianMs: 4000, minAttempts: 40 },
+      },
+    ],
+  },
+  {
+    key: 'fifth-position-runs',
+    title: 'C major through fifth position',
+    notes:
+      'From the lowest to the highest C-major note frets 5–8 offer, and back, through every string combination.',
+    items: [
+      {
+        preset: {
+          drill: 'runs',
+          settings: { tonic: 'C', scale: 'major', lowFret: 5, highFret: 8 },
+        },
+        target: { kind: 'sessions', count: 3 },
+      },
+    ],
+  },
+  {
+    key: 'weekly-neck-workout',
+    title: 'Weekly neck workout',
+    notes:
+      'A mixed week: the middle of the neck from memory, then E minor pentatonic scattered across octaves.',
+    items: [
+      {
+        preset: {
+          drill: 'recall',
+          settings: { region: { lowString: 0, highString: 3, lowFret: 5, highFret: 9 } },
+        },
+        target: { kind: 'accuracy', minAccuracy: 0.9, maxMedianMs: 3000, minAttempts: 50 },
+      },
+      {
+        preset: { drill: 'scatter', settings: { tonic: 'E', scale: 'minor pentatonic' } },
+        target: { kind: 'sessions', count: 4 },
+      },
+    ],
+  },
+]
+
+function toStarter(input: StarterInput): StarterPlan {
+  return {
+    key: input.key,
+    title: input.title,
+    notes: input.notes,
+    items: input.items.map((item) => ({
+      preset: DrillPresetSchema.parse(item.preset),
+      target: PracticeTargetSchema.parse(item.target),
+    })),
+  }
+}
+
+export const STARTER_PLANS: readonly StarterPlan[] = STARTERS.map(toStarter)

@@ -1,0 +1,118 @@
+// The recordings table: metadata of each uploaded take; the bytes are in recording storage.
+import type { Db } from '../lib/db'
+import type { RecordingSummary } from '../plans/plans-schema'
+
+interface RecordingRow {
+  id: string
+  assignment_id: string
+  plan_item_id: string
+  student_id: string
+  storage_key: string
+  mime_type: string
+  extension: string
+  size_bytes: number
+  original_name: string
+  created_at: Date
+}
+
+export interface RecordingRecord extends RecordingSummary {
+  assignmentId: string
+  studentId: string
+  storageKey: string
+  extension: string
+}
+
+const toRecord = (r: RecordingRow): RecordingRecord => ({
+  id: r.id,
+  assignmentId: r.assignment_id,
+  planItemId: r.plan_item_id,
+  studentId: r.student_id,
+  storageKey: r.storage_key,
+  mimeType: r.mime_type,
+  extension: r.extension,
+  sizeBytes: r.size_bytes,
+  originalName: r.original_name,
+  createdAt: r.created_at.toISOString(),
+})
+
+export const toSummary = ({
+  id,
+  planItemId,
+  mimeType,
+  sizeBytes,
+  originalName,
+  createdAt,
+}: RecordingRecord): RecordingSummary => ({
+  id,
+  planItemId,
+  mimeType,
+  sizeBytes,
+  originalName,
+  createdAt,
+})
+
+export async function insertRecording(
+  db: Db,
+  input: Omit<RecordingRecord, 'id' | 'createdAt'>,
+): Promise<RecordingRecord> {
+  const [row] = await db('recordings')
+    .insert({
+      assignment_id: input.assignmentId,
+      plan_item_id: input.planItemId,
+      student_id: input.studentId,
+      storage_key: input.storageKey,
+      mime_type: input.mimeType,
+      extension: input.extension,
+      size_bytes: input.sizeBytes,
+      original_name: input.originalName,
+    })
+    .returning('*')
+  return toRecord(row as RecordingRow)
+}
+
+export async function findRecording(db: Db, id: string): Promise<RecordingRecord | null> {
+  const row = await db<RecordingRow>('recordings').where({ id }).first()
+  return row ? toRecord(row) : null
+}
+
+export async function countItemRecordings(
+  db: Db,
+  assignmentId: string,
+  planItemId: string,
+): Promise<number> {
+  const [row] = (await db('recordings')
+    .where({ assignment_id: assignmentId, plan_item_id: planItemId })
+    .count({ count: '*' })) as [{ count: string }]
+  return Number(row.count)
+}
+
+/** Recordings of several assignments, newest first. */
+export async function recordingsOfAssignments(
+  db: Db,
+  assignmentIds: string[],
+): Promise<RecordingRecord[]> {
+  if (!assignmentIds.length) return []
+  const rows: RecordingRow[] = await db('recordings')
+    .whereIn('assignment_id', assignmentIds)
+    .orderBy('created_at', 'desc')
+  return rows.map(toRecord)
+}
+
+export async function deleteRecording(db: Db, id: string) {
+  await db('recordings').where({ id }).delete()
+}
+
+/** Storage keys of recordings that a delete of these assignments or items would remove. */
+export async function storageKeysOf(
+  db: Db,
+  where: { assignmentIds?: string[]; itemIds?: string[]; planId?: string },
+) {
+  return db('recordings as r')
+    .modify((q) => {
+      if (where.assignmentIds) q.whereIn('r.assignment_id', where.assignmentIds)
+      if (where.itemIds) q.whereIn('r.plan_item_id', where.itemIds)
+      if (where.planId)
+        q.join('plan_items as i', 'i.id', 'r.plan_item_id').where('i.plan_id', where.planId)
+    })
+    .pluck('r.storage_key') as Promise<string[]>
+}

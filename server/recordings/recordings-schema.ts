@@ -1,0 +1,21 @@
+// Recording upload fields, limits and the audio formats accepted (checked by content, not by name).
+import { z } from 'zod'
+
+export const MAX_RECORDING_BYTES = 20 * 1024 * 1024
+export const MAX_RECORDINGS_PER_ITEM = 10
+
+/** file-type's extension → the Content-Type the recording is served with. */
+export const ACCEPTED_AUDIO: Readonly<Record<string, string>> = {
+  webm: 'audio/webm',
+  ogg: 'audio/ogg',
+  oga: 'audio/ogg',
+  opus: 'audio/ogg',
+  mp3: 'audio/mpeg',
+  wav: 'audio/wav',
+  m4a: 'audio/mp4',
+  // Safari's MediaRecorder writes audio-only MP4 with a generic brand.
+  mp4: 'audio/mp4',
+}
+
+export const RecordingUploadSchema = z.object({ planItemId: z.uuid('Not a valid plan item id.') })
+export const RecordingIdParamsSchema = z.object({ id: z.uuid('Not a valid recording id.') })

@@ -1,0 +1,24 @@
+// Text of the invitation e-mail.
+import type { OutgoingMail } from '../lib/mail'
+
+export function invitationMail(
+  email: string,
+  invite: { teacherName: string; studioName: string; link: string; expiresAt: Date },
+): OutgoingMail {
+  return {
+    to: email,
+    subject: `${invite.teacherName} invites you to ${invite.studioName} on Ambitus`,
+    text: [
+      'Hello,',
+      '',
+      `${invite.teacherName} invites you to join "${invite.studioName}" on Ambitus, where your teacher`,
+      'assigns fretboard practice and follows how it goes between lessons.',
+      '',
+      'Open this link to accept (you can create an account or sign in to an existing one):',
+      invite.link,
+      '',
+      `The link works once and expires on ${invite.expiresAt.toUTCString()}.`,
+      'If you were not expecting this, ignore the message; nothing happens unless you accept.',
+    ].join('\n'),
+  }
+}

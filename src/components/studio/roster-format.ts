@@ -1,0 +1,41 @@
+// How roster figures read in the table and on the student page.
+import type { RosterRow, RosterStatus } from '@/api/studio'
+import { toUnicode } from '@/theory'
+
+export const STATUS_LABEL: Record<RosterStatus, { text: string; color: string }> = {
+  behind: { text: 'Behind', color: 'error' },
+  inactive: { text: 'Quiet', color: 'warning' },
+  'on-track': { text: 'On track', color: 'success' },
+}
+
+export const percent = (v: number | null) => (v === null ? '–' : `${Math.round(v * 100)} %`)
+
+export function lastPractice(iso: string | null): string {
+  if (!iso) return 'never'
+  const days = Math.floor((Date.now() - Date.parse(iso)) / (24 * 3600 * 1000))
+  if (days <= 0) return 'today'
+  if (days === 1) return 'yesterday'
+  if (days < 14) return `${days} days ago`
+  return new Date(iso).toLocaleDateString()
+}
+
+/** "12 % faster (1.4 s)", "steady (1.9 s)", or "–" without two weeks of figures. */
+export function recallText(recall: RosterRow['recall']): string {
+  const median = recall.medianMs === null ? '' : ` (${(recall.medianMs / 1000).toFixed(1)} s)`
+  if (recall.direction === null || recall.change === null)
+    return recall.medianMs === null ? '–' : `median${median}`
+  if (recall.direction === 'steady') return `steady${median}`
+  return `${Math.round(Math.abs(recall.change) * 100)} % ${recall.direction}${median}`
+}
+
+export const planText = (row: RosterRow) =>
+  row.plans.assigned === 0
+    ? 'no plans'
+    : `${row.plans.targetsMet}/${row.plans.targetsTotal} targets`
+
+export const spotText = (w: RosterRow['weakSpots'][number]) =>
+  `${toUnicode(w.label)} · ${percent(w.accuracy)}`
+
+/** Whole minutes; a short first session still shows as practice. */
+export const minutesText = (minutes: number) =>
+  minutes > 0 && minutes < 1 ? '< 1' : String(Math.round(minutes))

@@ -1,0 +1,180 @@
+// The student's plan list and the teacher's plan editor, with the API stubbed at fetch.
+import { flushPromises } from '@vue/test-utils'
+import { afterEach, describe, expect, it, vi } from 'vitest'
+import AssignedPlans from '../../src/components/plans/AssignedPlans.vue'
+import PlanEditorDialog from '../../src/components/plans/PlanEditorDialog.vue'
+import InvitationAcceptView from '../../src/views/InvitationAcceptView.vue'
+import { defaultPreset } from '../../src/plans/preset-fields'
+import { mountWithApp } from '../helpers/mount'
+
+afterEach(() => {
+  vi.unstubAllGlobals()
+  document.body.innerHTML = ''
+})
+
+type Handler = (url: string, init: RequestInit) => unknown
+function stubApi(routes: Record<string, Handler>) {
+  const fetch = vi.fn(async (url: string, init: RequestInit = {}) => {
+    const key = `${init.method ?? 'GET'} ${url.split('?')[0]}`
+    const handler = routes[key]
+    const body = handler
+      ? handler(url, init)
+      : { error: { code: 'not_found', message: `no stub for ${key}` } }
+    return new Response(JSON.stringify(body), {
+      status: handler ? 200 : 404,
+      headers: { 'content-type': 'application/json' },
+    })
+  })
+  vi.stubGlobal('fetch', fetch)
+  return fetch
+}
+
+const ITEM_RECALL = '11111111-1111-4111-8111-111111111111'
+const ITEM_CYCLE = '22222222-2222-4222-8222-222222222222'
+const ASSIGNMENT = {
+  id: 'a1',
+  planId: 'p1',
+  title: 'Week 3',
+  notes: 'Slow and steady.',
+  dueAt: new Date(Date.now() + 5 * 864e5).toISOString(),
+  assignedAt: new Date().toISOString(),
+  teacher: { id: 't', name: 'Marta Ilves' },
+  student: { id: 's', name: 'Noor' },
+  targetsMet: 1,
+  complete: false,
+  overdue: false,
+  commentCount: 0,
+  items: [
+    {
+      id: ITEM_RECALL,
+      position: 0,
+      preset: defaultPreset('recall'),
+      recordings: [],
+      target: { kind: 'accuracy', minAccuracy: 0.9, maxMedianMs: 2000, minAttempts: 4 },
+      progress: {
+        kind: 'accuracy',
+        met: true,
+        ratio: 1,
+        attempts: 4,
+        needed: 4,
+        accuracy: 1,
+        medianMs: 1500,
+      },
+    },
+    {
+      id: ITEM_CYCLE,
+      position: 1,
+      preset: defaultPreset('cycle'),
+      recordings: [],
+      target: { kind: 'all-keys' },
+      progress: {
+        kind: 'all-keys',
+        met: false,
+        ratio: 2 / 3,
+        keysPlayed: ['C', 'F'],
+        keysMissing: ['Bb'],
+      },
+    },
+  ],
+}
+
+describe('AssignedPlans', () => {
+  it('when the student has a plan, then each drill has a Start link with its plan item and its progress', async () => {
+    stubApi({ 'GET /api/plans/assigned': () => ({ assignments: [ASSIGNMENT] }) })
+    const { wrapper } = mountWithApp(AssignedPlans)
+    await flushPromises()
+    const starts = wrapper.findAll('a[href^="/practice/"]').map((a) => a.attributes('href'))
+    expect(starts).toEqual([
+      `/practice/recall?planItem=${ITEM_RECALL}`,
+      `/practice/cycle?planItem=${ITEM_CYCLE}`,
+    ])
+    const recallRow = wrapper.find(`[data-testid="plan-item-row-${ITEM_RECALL}"]`).text()
+    expect(recallRow).toContain('Target met')
+    expect(recallRow).toContain('4 of 4 answers · 100 % right · median 1.5 s')
+    expect(wrapper.find(`[data-testid="plan-item-row-${ITEM_CYCLE}"]`).text()).toContain(
+      '2 of 3 keys · still to play: B♭',
+    )
+    expect(wrapper.text()).toContain('From Marta Ilves · 1 of 2 targets met')
+  })
+
+  it('when there is no plan, then the student is told where plans will appear', async () => {
+    stubApi({ 'GET /api/plans/assigned': () => ({ assignments: [] }) })
+    const { wrapper } = mountWithApp(AssignedPlans)
+    await flushPromises()
+    expect(wrapper.text()).toContain('No plans yet.')
+  })
+})
+
+describe('PlanEditorDialog', () => {
+  it('when the title is empty, then nothing is sent; with a title, the plan is posted with its drill and students', async () => {
+    const posted: unknown[] = []
+    const fetch = stubApi({
+      'POST /api/plans': (_url, init) => {
+        posted.push(JSON.parse(String(init.body)))
+        return {
+          plan: {
+            id: 'p9',
+            title: 'x',
+            notes: '',
+            dueAt: null,
+            createdAt: '',
+            updatedAt: '',
+            items: [],
+            assignees: [],
+          },
+        }
+      },
+    })
+    const { wrapper } = mountWithApp(PlanEditorDialog, {
+      props: { modelValue: false, plan: null, students: [{ id: 's1', name: 'Noor' }] },
+      attachTo: document.body,
+    })
+    await wrapper.setProps({ modelValue: true })
+    await flushPromises()
+    const save = () =>
+      (document.querySelector('[data-testid="plan-save"]') as HTMLButtonElement).click()
+    save()
+    await flushPromises()
+    expect(fetch).not.toHaveBeenCalled()
+    expect(document.body.textContent).toContain('Give the plan a title.')
+    const title = [...document.querySelectorAll('input')].find((i) =>
+      i.labels?.[0]?.textContent?.includes('Title'),
+    )!
+    title.value = 'Low strings'
+    title.dispatchEvent(new Event('input'))
+    save()
+    await flushPromises()
+    expect(posted).toEqual([
+      expect.objectContaining({
+        title: 'Low strings',
+        dueAt: null,
+        studentIds: [],
+        items: [expect.objectContaining({ preset: expect.objectContaining({ drill: 'recall' }) })],
+      }),
+    ])
+    expect(wrapper.emitted('saved')).toHaveLength(1)
+    wrapper.unmount()
+  }, 30_000) // a full Vuetify dialog mounts slowly in jsdom when the machine is busy
+})
+
+describe('InvitationAcceptView', () => {
+  it('when a new student opens a valid link, then the teacher, the studio and the sign-up fields are shown', async () => {
+    stubApi({
+      'GET /api/invitations/preview': () => ({
+        invitation: {
+          studioName: 'Cedar Hollow',
+          teacherName: 'Marta Ilves',
+          email: 'wren@example.test',
+          expiresAt: new Date().toISOString(),
+          accountExists: false,
+        },
+      }),
+    })
+    const { wrapper, router } = mountWithApp(InvitationAcceptView)
+    await router.push('/invitations/accept?token=abcdefghijklmnopqrstuvwxyz')
+    await flushPromises()
+    expect(wrapper.text()).toContain('Marta Ilves invites you to Cedar Hollow')
+    expect(wrapper.find('input[name="name"]').exists()).toBe(true)
+    expect(wrapper.text()).toContain('Create my account and join')
+  })
+})
