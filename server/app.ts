@@ -10,8 +10,17 @@ import { adminRoutes } from './admin/admin-routes'
 import { authRoutes } from './auth/auth-routes'
 import type { AppContext } from './context'
 import { healthRoutes } from './health/health-routes'
+import { instrumentsRoutes } from './instruments/instruments-routes'
 import { apiNotFound, errorHandler } from './lib/errors'
+import { attemptsRoutes } from './attempts/attempts-routes'
+import { focusRoutes } from './focus/focus-routes'
+import { progressRoutes } from './progress/progress-routes'
 import { studioRoutes } from './studio/studio-routes'
+import { invitationRoutes } from './studio/invitation-routes'
+import { planRoutes } from './plans/plans-routes'
+import { commentRoutes } from './comments/comments-routes'
+import { recordingRoutes } from './recordings/recordings-routes'
+import { digestRoutes } from './notifications/digest-routes'
 
 // Same-origin only; blob: for recorded audio, audio worklets and exported board images.
 const CSP_DIRECTIVES = {
@@ -30,6 +39,15 @@ function apiRouter(ctx: AppContext) {
   api.use('/auth', authRoutes(ctx))
   api.use('/admin', adminRoutes(ctx))
   api.use('/studio', studioRoutes(ctx))
+  api.use('/invitations', invitationRoutes(ctx))
+  api.use('/plans', planRoutes(ctx))
+  api.use('/assignments', commentRoutes(ctx))
+  api.use('/recordings', recordingRoutes(ctx))
+  api.use('/admin/digests', digestRoutes(ctx))
+  api.use('/instruments', instrumentsRoutes(ctx))
+  api.use('/attempts', attemptsRoutes(ctx))
+  api.use('/progress', progressRoutes(ctx))
+  api.use('/focus', focusRoutes(ctx))
   api.use(apiNotFound)
   return api
 }

@@ -4,12 +4,14 @@ import { loadConfig } from './config'
 import { createDb } from './lib/db'
 import { createLogger } from './lib/logger'
 import { createMailer } from './lib/mail'
+import { startScheduler } from './notifications/scheduler'
 
 const config = loadConfig()
 const logger = createLogger(config.logLevel)
 const db = createDb(config.databaseUrl)
 const mailer = createMailer(config)
 const app = createApp({ config, db, logger, mailer })
+const scheduler = startScheduler({ config, db, logger, mailer })
 
 const server = app.listen(config.port, config.host, () => {
   logger.info(`Ambitus API listening on http://${config.host}:${config.port}`)
@@ -17,6 +19,7 @@ const server = app.listen(config.port, config.host, () => {
 
 function shutdown(signal: string) {
   logger.info(`${signal}: shutting down`)
+  scheduler.stop()
   server.close(async () => {
     mailer.close()
     await db.destroy()
