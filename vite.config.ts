@@ -17,6 +17,8 @@ export default defineConfig({
   },
   build: { chunkSizeWarningLimit: 900 },
   test: {
+    // Most test time is waiting on PostgreSQL and Chromium, so more workers than cores pays off.
+    maxWorkers: 3,
     projects: [
       {
         extends: true,
@@ -56,9 +58,11 @@ export default defineConfig({
           environment: 'node',
           include: ['tests/e2e/**/*.spec.ts'],
           globalSetup: ['tests/helpers/e2e-global-setup.ts'],
-          fileParallelism: false,
+          // Spec files run side by side; each works with its own demo people (see DEVELOPERS.md).
           testTimeout: 90_000,
           hookTimeout: 180_000,
+          // The browser waits on a server that shares two cores with other spec files.
+          expect: { poll: { timeout: 15_000, interval: 100 } },
         },
       },
     ],

@@ -6,7 +6,7 @@ import { existsSync, mkdirSync, readFileSync, rmSync } from 'node:fs'
 import { execFileSync } from 'node:child_process'
 import path from 'node:path'
 import { TEST_OUTPUT_DIR } from './lib/paths.mjs'
-import { log, run } from './lib/proc.mjs'
+import { log, run, runCaptured } from './lib/proc.mjs'
 import { ensureDependencies } from './lib/setup.mjs'
 
 const REPORT = path.join(TEST_OUTPUT_DIR, 'vitest.json')
@@ -43,11 +43,21 @@ mkdirSync(path.dirname(REPORT), { recursive: true })
 rmSync(REPORT, { force: true })
 
 const node = process.execPath
-const steps = []
-steps.push(['type check (vue-tsc -b)', await run(node, ['node_modules/vue-tsc/bin/vue-tsc.js', '-b'])])
-steps.push(['lint (eslint)', await run(node, ['node_modules/eslint/bin/eslint.js', '.', '--max-warnings=0'])])
+// The type check and lint run beside Vitest (whose browser and database waits leave the CPU idle);
+// their output is held back and printed after the tests, so the logs do not interleave.
+const checks = [
+  ['type check (vue-tsc -b)', runCaptured(node, ['node_modules/vue-tsc/bin/vue-tsc.js', '-b'])],
+  ['lint (eslint)', runCaptured(node, ['node_modules/eslint/bin/eslint.js', '.', '--max-warnings=0'])],
+]
 const vitestArgs = ['run', '--reporter=default', '--reporter=json', `--outputFile.json=${REPORT}`]
-steps.push(['vitest (unit, client, server, e2e)', await run(node, ['node_modules/vitest/vitest.mjs', ...vitestArgs])])
+const vitestStep = ['vitest (unit, client, server, e2e)', await run(node, ['node_modules/vitest/vitest.mjs', ...vitestArgs])]
+const steps = []
+for (const [name, pending] of checks) {
+  const { code, output } = await pending
+  if (output.trim()) console.log(`\n[${name}]\n${output}`)
+  steps.push([name, code])
+}
+steps.push(vitestStep)
 
 if (startedDb) db.stopCluster()
 process.exit(summarise(steps))

@@ -5,3 +5,4 @@ export function runOrThrow(command: string, args: string[], options?: SpawnOptio
 export function startService(tag: string, command: string, args: string[], options?: SpawnOptions): ChildProcess
 export function stopService(child: ChildProcess | undefined, graceMs?: number): Promise<void>
 export function freePort(): Promise<number>
+export function runCaptured(command: string, args: string[], options?: SpawnOptions): Promise<{ code: number; output: string }>

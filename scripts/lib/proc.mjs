@@ -17,6 +17,18 @@ export function run(command, args, options = {}) {
   })
 }
 
+/** Runs a command with its output collected; resolves to { code, output }. */
+export function runCaptured(command, args, options = {}) {
+  return new Promise((resolve, reject) => {
+    const child = spawn(command, args, { cwd: ROOT, stdio: ['ignore', 'pipe', 'pipe'], ...options })
+    let output = ''
+    child.stdout.on('data', (chunk) => (output += chunk))
+    child.stderr.on('data', (chunk) => (output += chunk))
+    child.on('error', reject)
+    child.on('exit', (code, signal) => resolve({ code: code ?? (signal ? 1 : 0), output }))
+  })
+}
+
 /** Runs a command and rejects when it fails. */
 export async function runOrThrow(command, args, options = {}) {
   const code = await run(command, args, options)

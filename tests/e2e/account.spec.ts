@@ -16,9 +16,14 @@ afterAll(async () => {
   await db?.destroy()
 })
 
-async function latestMailText(address: string): Promise<string> {
+/** The newest mail with this subject to an address (other mail, e.g. plan reminders, may arrive too). */
+async function latestMailText(address: string, subject: string): Promise<string> {
   for (let i = 0; i < 50; i++) {
-    const row = await db('captured_mail').whereRaw('? = any(recipients)', [address]).orderBy('id', 'desc').first()
+    const row = await db('captured_mail')
+      .whereRaw('? = any(recipients)', [address])
+      .andWhere({ subject })
+      .orderBy('id', 'desc')
+      .first()
     if (row) return row.text_body as string
     await new Promise((r) => setTimeout(r, 150))
   }
@@ -45,14 +50,15 @@ it('a student who forgot the password resets it with the mailed link and signs i
   await page.goto('/forgot-password')
   await page.getByLabel('E-mail').fill('lucia@cedarhollow.test')
   await page.getByRole('button', { name: 'Send reset link' }).click()
-  await expect.poll(() => page.getByTestId('reset-sent').isVisible()).toBe(true)
+  await expect.poll(() => page.getByTestId('reset-sent').isVisible(), { timeout: 15_000 }).toBe(true)
 
-  const link = (await latestMailText('lucia@cedarhollow.test')).match(/https?:\/\/\S+/)![0]
+  const mail = await latestMailText('lucia@cedarhollow.test', 'Reset your Ambitus password')
+  const link = mail.match(/https?:\/\/\S+\/reset-password\S+/)![0]
   await page.goto(link)
   await page.getByLabel('New password', { exact: true }).fill('a fresh passphrase')
   await page.getByLabel('Repeat the new password').fill('a fresh passphrase')
   await page.getByRole('button', { name: 'Save new password' }).click()
-  await expect.poll(() => page.getByTestId('reset-done').isVisible()).toBe(true)
+  await expect.poll(() => page.getByTestId('reset-done').isVisible(), { timeout: 15_000 }).toBe(true)
   await screenshot(page, 'reset-done-laptop')
 
   await signInThroughUi(page, 'lucia@cedarhollow.test', 'a fresh passphrase')

@@ -1,5 +1,7 @@
 // The real app in-process against the real test database, with its own SMTP sink on a free port.
 import { randomUUID } from 'node:crypto'
+import path from 'node:path'
+import { TEST_OUTPUT_DIR } from '../../scripts/lib/paths.mjs'
 import request from 'supertest'
 import type { Express } from 'express'
 import { createApp } from '../../server/app'
@@ -10,6 +12,9 @@ import { createLogger } from '../../server/lib/logger'
 import { createMailer } from '../../server/lib/mail'
 import { startMailSink, type MailSink } from '../../server/mail-sink/mail-sink'
 import { latestMailTo } from '../../server/admin/mail-log-repository'
+import { hashPassword } from '../../server/auth/password'
+import { SESSION_COOKIE, signSession } from '../../server/auth/session-token'
+import { insertUser, toPublicUser } from '../../server/users/users-repository'
 
 export const TEST_PASSWORD = 'correct horse battery'
 
@@ -22,7 +27,12 @@ export interface TestApi {
 
 /** Starts the app and a mail sink for one test file; call close() in afterAll. */
 export async function startTestApi(overrides: Partial<Config> = {}, logLines?: string[]): Promise<TestApi> {
-  const base = loadConfig(process.env, { logLevel: 'silent', clientDist: '/nonexistent', ...overrides })
+  const base = loadConfig(process.env, {
+    logLevel: 'silent',
+    clientDist: '/nonexistent',
+    dataDir: path.join(TEST_OUTPUT_DIR, 'api-data'), // recordings uploaded by tests stay out of .data
+    ...overrides,
+  })
   const db = createDb(base.databaseUrl)
   const sink = await startMailSink(db, 0)
   const config = { ...base, smtpPort: sink.port }
@@ -31,8 +41,10 @@ export async function startTestApi(overrides: Partial<Config> = {}, logLines?: s
     ? createLogger('info', { write: (line: string) => void logLines.push(line) })
     : createLogger('silent')
   const ctx: AppContext = { config, db, mailer, logger }
+  const app = createApp(ctx)
+  contexts.set(app, ctx)
   return {
-    app: createApp(ctx),
+    app,
     ctx,
     sink,
     async close() {
@@ -46,13 +58,27 @@ export async function startTestApi(overrides: Partial<Config> = {}, logLines?: s
 /** A fresh, unique e-mail so tests never collide. */
 export const uniqueEmail = (label = 'user') => `${label}-${randomUUID().slice(0, 8)}@example.test`
 
-/** Registers a new account and returns a cookie-keeping agent signed in as it. */
+// One real bcrypt hash (cost 12) of TEST_PASSWORD per test process: every test account shares it, so
+// setting up a user costs no hashing while signing in with TEST_PASSWORD still works for real.
+let testPasswordHash: Promise<string> | undefined
+const contexts = new WeakMap<Express, AppContext>()
+
+/**
+ * A new account and a cookie-keeping agent signed in as it. The account is written straight to the
+ * database and its session cookie minted with the app's own key (auth.test.ts covers the register and
+ * sign-in routes themselves); everything after that goes through the real middleware.
+ */
 export async function signedInAgent(app: Express, role: 'student' | 'teacher' = 'student', name = 'Test Player') {
-  const agent = request.agent(app)
+  const ctx = contexts.get(app)
+  if (!ctx) throw new Error('signedInAgent needs an app from startTestApi()')
   const email = uniqueEmail(role)
-  const res = await agent.post('/api/auth/register').send({ email, password: TEST_PASSWORD, name, role })
-  if (res.status !== 201) throw new Error(`register failed: ${res.status} ${JSON.stringify(res.body)}`)
-  return { agent, email, user: res.body.user as { id: string; email: string; role: string } }
+  testPasswordHash ??= hashPassword(TEST_PASSWORD, ctx.config.bcryptCost)
+  const record = await insertUser(ctx.db, { email, name, role, passwordHash: await testPasswordHash })
+  const agent = request.agent(app)
+  const cookie = `${SESSION_COOKIE}=${signSession(record, ctx.config.jwtSecret)}; Path=/; HttpOnly`
+  agent.jar.setCookies([cookie], '127.0.0.1', '/')
+  const user = toPublicUser(record)
+  return { agent, email, user: user as { id: string; email: string; role: string } }
 }
 
 /** Promotes an account to admin directly in the database (no API creates admins). */

@@ -43,6 +43,8 @@ export default async function setup(project: TestProject) {
     PORT: String(port),
     SMTP_PORT: String(smtpPort),
     CLIENT_DIST: DIST,
+    // Recordings and the session secret of the e2e server stay in the test output folder.
+    AMBITUS_DATA_DIR: path.join(TEST_OUTPUT_DIR, 'data'),
     LOG_LEVEL: 'warn',
     APP_URL: `http://127.0.0.1:${port}`,
   }
