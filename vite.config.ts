@@ -25,6 +25,8 @@ export default defineConfig({
         test: {
           name: 'unit',
           environment: 'node',
+          // Pure modules: one module graph for all files saves re-importing tonal per file.
+          isolate: false,
           include: ['src/**/*.test.ts', 'tests/unit/**/*.test.ts'],
         },
       },

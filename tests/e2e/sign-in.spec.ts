@@ -55,6 +55,18 @@ describe('signing in', () => {
     await context.close()
   })
 
+  it('signing out ends the session and leaves the next person a clean sign-in page', async () => {
+    const { page, context } = await newPage(browser, PHONE)
+    await signInThroughUi(page, 'signe@cedarhollow.test')
+    await page.waitForURL('**/practice')
+    await page.getByTestId('user-menu').click()
+    await page.getByTestId('sign-out').click()
+    await page.waitForURL('**/sign-in')
+    expect((await page.request.get('/api/auth/me')).status()).toBe(401)
+    expect(await page.textContent('body')).not.toContain('Signe Marlow')
+    await context.close()
+  })
+
   it('an unknown address shows the 404 page', async () => {
     const { page, context } = await newPage(browser, LAPTOP)
     await page.goto('/no/such/page')
