@@ -19,6 +19,16 @@ export interface SessionFrameProps {
   summary: SessionSummary<DrillQuestion> | null
   endReason: 'done' | 'time' | 'stopped' | null
   neck: DrillNeck
+  /** What the frame's buttons do: the session's own actions (only "again" differs per drill). */
+  controls: SessionControls
+}
+
+export interface SessionControls {
+  next: () => void
+  reveal: () => void
+  stop: () => void
+  retry: () => void
+  settings: () => void
 }
 
 export function useFrameProps<Q extends DrillQuestion, A>(
@@ -40,6 +50,13 @@ export function useFrameProps<Q extends DrillQuestion, A>(
       summary: session.summary.value,
       endReason: state?.endReason ?? null,
       neck: neck.value,
+      controls: {
+        next: session.next,
+        reveal: session.reveal,
+        stop: session.stop,
+        retry: () => void session.retryMisses(),
+        settings: session.reset,
+      },
     }
   })
 }

@@ -17,6 +17,12 @@ export interface DrillNeck {
   volume: number
 }
 
+/** The FretboardBoard props that follow the instrument (bind with v-bind="neckBoard(neck)"). */
+export function neckBoard(neck: DrillNeck) {
+  const { tuning, scaleLengthMm, leftHanded, accidentals } = neck
+  return { tuning, scaleLengthMm, leftHanded, accidentals }
+}
+
 const FALLBACK_PRESET = tuningPreset('bass-4')
 
 export const FALLBACK_NECK: DrillNeck = {
