@@ -45,7 +45,14 @@ export default withVueTs(
     rules: {
       'no-restricted-imports': [
         'error',
-        { patterns: [{ group: IMPURE_MODULES, message: 'src/theory must stay pure (no I/O, UI or server imports).' }] },
+        {
+          patterns: [
+            {
+              group: IMPURE_MODULES,
+              message: 'src/theory must stay pure (no I/O, UI or server imports).',
+            },
+          ],
+        },
       ],
       'no-restricted-globals': ['error', 'window', 'document', 'process', 'fetch', 'localStorage'],
     },

@@ -24,7 +24,8 @@ function findBinDir() {
 export function ensureInstalled() {
   let bin = findBinDir()
   if (bin) return bin
-  if (!IS_ROOT) throw new Error('PostgreSQL is not installed; run as root once, or: apt-get install postgresql')
+  if (!IS_ROOT)
+    throw new Error('PostgreSQL is not installed; run as root once, or: apt-get install postgresql')
   log('db', 'installing PostgreSQL from Debian packages (first run only)…')
   const env = { ...process.env, DEBIAN_FRONTEND: 'noninteractive' }
   execFileSync('apt-get', ['update', '-qq'], { stdio: 'inherit', env })
@@ -38,7 +39,11 @@ export function ensureInstalled() {
 function asOwner(bin, tool, args, options = {}) {
   const file = path.join(bin, tool)
   if (!IS_ROOT) return execFileSync(file, args, { stdio: 'pipe', ...options })
-  return execFileSync('runuser', ['-u', 'postgres', '--', file, ...args], { cwd: '/', stdio: 'pipe', ...options })
+  return execFileSync('runuser', ['-u', 'postgres', '--', file, ...args], {
+    cwd: '/',
+    stdio: 'pipe',
+    ...options,
+  })
 }
 
 function initCluster(bin) {
@@ -51,14 +56,27 @@ function initCluster(bin) {
     chownSync(CLUSTER_DIR, uid, gid)
     chownSync(pwFile, uid, gid)
   }
-  const args = ['-D', CLUSTER_DIR, '-U', PG_USER, '--pwfile', pwFile, '-E', 'UTF8', '--locale=C.UTF-8']
+  const args = [
+    '-D',
+    CLUSTER_DIR,
+    '-U',
+    PG_USER,
+    '--pwfile',
+    pwFile,
+    '-E',
+    'UTF8',
+    '--locale=C.UTF-8',
+  ]
   asOwner(bin, 'initdb', [...args, '--auth-host=scram-sha-256', '--auth-local=peer'])
   execFileSync('rm', ['-f', pwFile])
 }
 
 function postgresIds() {
-  const line = readFileSync('/etc/passwd', 'utf8').split('\n').find((l) => l.startsWith('postgres:'))
-  if (!line) throw new Error('the postgres system user is missing (is the postgresql package installed?)')
+  const line = readFileSync('/etc/passwd', 'utf8')
+    .split('\n')
+    .find((l) => l.startsWith('postgres:'))
+  if (!line)
+    throw new Error('the postgres system user is missing (is the postgresql package installed?)')
   const [, , uid, gid] = line.split(':')
   return { uid: Number(uid), gid: Number(gid) }
 }
@@ -88,7 +106,18 @@ export async function startCluster() {
   const options = `-p ${PG_PORT} -c listen_addresses=${PG_HOST} -c unix_socket_directories=''`
   if (IS_ROOT && !existsSync(LOG_FILE)) writeFileSync(LOG_FILE, '')
   if (IS_ROOT) chownSync(LOG_FILE, postgresIds().uid, postgresIds().gid)
-  asOwner(bin, 'pg_ctl', ['start', '-D', CLUSTER_DIR, '-l', LOG_FILE, '-w', '-t', '60', '-o', options])
+  asOwner(bin, 'pg_ctl', [
+    'start',
+    '-D',
+    CLUSTER_DIR,
+    '-l',
+    LOG_FILE,
+    '-w',
+    '-t',
+    '60',
+    '-o',
+    options,
+  ])
   log('db', `PostgreSQL listening on ${PG_HOST}:${PG_PORT}`)
   return true
 }
@@ -126,17 +155,22 @@ export async function createDatabase(name) {
 
 /** Drops a database (closing its connections) when it exists. */
 export async function dropDatabase(name) {
-  await withAdmin((client) => client.query(`drop database if exists ${quoteIdent(name)} with (force)`))
+  await withAdmin((client) =>
+    client.query(`drop database if exists ${quoteIdent(name)} with (force)`),
+  )
 }
 
 async function main([command, name]) {
   if (command === 'start') await startCluster()
   else if (command === 'stop') stopCluster()
-  else if (command === 'status') console.log(runningPort() ? `running on ${runningPort()}` : 'stopped')
-  else if (command === 'create' && name) console.log((await createDatabase(name)) ? 'created' : 'exists')
+  else if (command === 'status')
+    console.log(runningPort() ? `running on ${runningPort()}` : 'stopped')
+  else if (command === 'create' && name)
+    console.log((await createDatabase(name)) ? 'created' : 'exists')
   else if (command === 'drop' && name) await dropDatabase(name)
   else if (command === 'url') console.log(databaseUrl(name))
-  else throw new Error('usage: node scripts/db.mjs start|stop|status|create <db>|drop <db>|url [db]')
+  else
+    throw new Error('usage: node scripts/db.mjs start|stop|status|create <db>|drop <db>|url [db]')
 }
 
 if (import.meta.url === pathToFileURL(process.argv[1] ?? '').href) {
@@ -145,4 +179,3 @@ if (import.meta.url === pathToFileURL(process.argv[1] ?? '').href) {
     process.exit(1)
   })
 }
-

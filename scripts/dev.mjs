@@ -23,8 +23,18 @@ const env = {
 const node = process.execPath
 const children = [
   startService('mail', node, ['--import', 'tsx', 'server/mail-sink/index.ts'], { env }),
-  startService('api', node, ['--watch-path=server', '--watch-path=src/theory', '--import', 'tsx', 'server/index.ts'], { env }),
-  startService('vite', node, ['node_modules/vite/bin/vite.js', '--port', String(VITE_PORT), '--strictPort'], { env }),
+  startService(
+    'api',
+    node,
+    ['--watch-path=server', '--watch-path=src/theory', '--import', 'tsx', 'server/index.ts'],
+    { env },
+  ),
+  startService(
+    'vite',
+    node,
+    ['node_modules/vite/bin/vite.js', '--port', String(VITE_PORT), '--strictPort'],
+    { env },
+  ),
 ]
 log('dev', `open http://127.0.0.1:${VITE_PORT} (API on :${API_PORT}); Ctrl-C stops everything`)
 

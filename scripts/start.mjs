@@ -40,7 +40,9 @@ const env = {
   SMTP_PORT: String(SMTP_PORT),
 }
 const tsx = ['--import', 'tsx']
-children.push(startService('mail', process.execPath, [...tsx, 'server/mail-sink/index.ts'], { env }))
+children.push(
+  startService('mail', process.execPath, [...tsx, 'server/mail-sink/index.ts'], { env }),
+)
 const api = startService('api', process.execPath, [...tsx, 'server/index.ts'], { env })
 children.push(api)
 for (const child of children) child.on('exit', (code) => !stopping && stopAll(code ?? 1))

@@ -14,7 +14,8 @@ const CHROMIUM = process.env.CHROMIUM_PATH ?? '/usr/bin/chromium'
 
 function ensureChromium() {
   if (existsSync(CHROMIUM)) return
-  if (process.getuid?.() !== 0) throw new Error(`Chromium is missing at ${CHROMIUM}; install Debian's chromium package`)
+  if (process.getuid?.() !== 0)
+    throw new Error(`Chromium is missing at ${CHROMIUM}; install Debian's chromium package`)
   log('setup', "installing Debian's Chromium for end-to-end tests (first run only)…")
   const env = { ...process.env, DEBIAN_FRONTEND: 'noninteractive' }
   execFileSync('apt-get', ['update', '-qq'], { stdio: 'inherit', env })
@@ -27,7 +28,8 @@ function summarise(steps) {
   if (existsSync(REPORT)) {
     const report = JSON.parse(readFileSync(REPORT, 'utf8'))
     passed = report.numPassedTests ?? 0
-    failed = (report.numFailedTests ?? 0) + (report.numTodoTests ?? 0) + (report.numPendingTests ?? 0)
+    failed =
+      (report.numFailedTests ?? 0) + (report.numTodoTests ?? 0) + (report.numPendingTests ?? 0)
   }
   for (const [name, code] of steps) log('test', `${name}: ${code === 0 ? 'ok' : 'FAILED'}`)
   console.log(`${passed} passed, ${failed} failed`)
@@ -47,10 +49,16 @@ const node = process.execPath
 // their output is held back and printed after the tests, so the logs do not interleave.
 const checks = [
   ['type check (vue-tsc -b)', runCaptured(node, ['node_modules/vue-tsc/bin/vue-tsc.js', '-b'])],
-  ['lint (eslint)', runCaptured(node, ['node_modules/eslint/bin/eslint.js', '.', '--max-warnings=0'])],
+  [
+    'lint (eslint)',
+    runCaptured(node, ['node_modules/eslint/bin/eslint.js', '.', '--max-warnings=0']),
+  ],
 ]
 const vitestArgs = ['run', '--reporter=default', '--reporter=json', `--outputFile.json=${REPORT}`]
-const vitestStep = ['vitest (unit, client, server, e2e)', await run(node, ['node_modules/vitest/vitest.mjs', ...vitestArgs])]
+const vitestStep = [
+  'vitest (unit, client, server, e2e)',
+  await run(node, ['node_modules/vitest/vitest.mjs', ...vitestArgs]),
+]
 const steps = []
 for (const [name, pending] of checks) {
   const { code, output } = await pending

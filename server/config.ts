@@ -23,7 +23,10 @@ const ConfigSchema = z.object({
 export type Config = z.infer<typeof ConfigSchema>
 
 /** Builds the configuration from environment variables, with local defaults for development. */
-export function loadConfig(env: NodeJS.ProcessEnv = process.env, overrides: Partial<Config> = {}): Config {
+export function loadConfig(
+  env: NodeJS.ProcessEnv = process.env,
+  overrides: Partial<Config> = {},
+): Config {
   const parsed = ConfigSchema.safeParse({
     host: env.HOST,
     port: env.PORT,

@@ -13,7 +13,9 @@ export async function up(knex: Knex): Promise<void> {
     t.integer('size_bytes').notNullable()
     t.timestamp('received_at', { useTz: true }).notNullable().defaultTo(knex.fn.now()).index()
   })
-  await knex.raw('create index captured_mail_recipients_idx on captured_mail using gin (recipients)')
+  await knex.raw(
+    'create index captured_mail_recipients_idx on captured_mail using gin (recipients)',
+  )
 }
 
 export async function down(knex: Knex): Promise<void> {

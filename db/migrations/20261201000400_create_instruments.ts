@@ -18,7 +18,9 @@ export async function up(knex: Knex): Promise<void> {
     t.boolean('is_active').notNullable().defaultTo(false)
     t.timestamps(true, true)
   })
-  await knex.raw('create unique index instruments_one_active on instruments (user_id) where is_active')
+  await knex.raw(
+    'create unique index instruments_one_active on instruments (user_id) where is_active',
+  )
 }
 
 export async function down(knex: Knex): Promise<void> {

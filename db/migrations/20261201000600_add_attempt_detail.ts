@@ -6,7 +6,9 @@ export async function up(knex: Knex): Promise<void> {
     t.jsonb('detail').notNullable().defaultTo('{}')
     t.uuid('plan_item_id')
   })
-  await knex.raw('create index attempts_plan_item on attempts (plan_item_id) where plan_item_id is not null')
+  await knex.raw(
+    'create index attempts_plan_item on attempts (plan_item_id) where plan_item_id is not null',
+  )
 }
 
 export async function down(knex: Knex): Promise<void> {

@@ -6,7 +6,12 @@ import { practiceHistory } from './lib/practice-history'
 
 async function insertPerson(knex: Knex, person: DemoPerson, passwordHash: string) {
   const [user] = await knex('users')
-    .insert({ email: person.email, name: person.name, role: person.role, password_hash: passwordHash })
+    .insert({
+      email: person.email,
+      name: person.name,
+      role: person.role,
+      password_hash: passwordHash,
+    })
     .returning(['id'])
   return (user as { id: string }).id
 }
@@ -35,7 +40,8 @@ export async function seed(knex: Knex): Promise<void> {
   const passwordHash = await bcrypt.hash(DEMO_PASSWORD, 12)
   await knex.transaction(async (trx) => {
     const ids = new Map<string, string>()
-    for (const person of DEMO_PEOPLE) ids.set(person.email, await insertPerson(trx, person, passwordHash))
+    for (const person of DEMO_PEOPLE)
+      ids.set(person.email, await insertPerson(trx, person, passwordHash))
     const [studio] = await trx('studios')
       .insert({ teacher_id: ids.get('teacher@cedarhollow.test'), name: DEMO_STUDIO })
       .returning(['id'])
@@ -43,9 +49,18 @@ export async function seed(knex: Knex): Promise<void> {
     for (const [index, person] of DEMO_PEOPLE.entries()) {
       if (!person.instrument) continue
       const userId = ids.get(person.email)!
-      await trx('studio_members').insert({ studio_id: (studio as { id: string }).id, student_id: userId })
+      await trx('studio_members').insert({
+        studio_id: (studio as { id: string }).id,
+        student_id: userId,
+      })
       const instrumentId = await insertInstrument(trx, userId, person)
-      const history = practiceHistory({ userId, instrumentId, instrument: person.instrument, seed: 1000 + index, now })
+      const history = practiceHistory({
+        userId,
+        instrumentId,
+        instrument: person.instrument,
+        seed: 1000 + index,
+        now,
+      })
       await trx.batchInsert('attempts', history, 500)
     }
   })

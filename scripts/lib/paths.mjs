@@ -11,7 +11,9 @@ export const PG_PORT = Number(process.env.PGPORT ?? 54329)
 export const PG_USER = 'ambitus'
 export const APP_DATABASE = process.env.AMBITUS_DATABASE ?? 'ambitus'
 // AMBITUS_TEST_SUFFIX lets parallel test runs on one machine keep their databases apart.
-const TEST_SUFFIX = (process.env.AMBITUS_TEST_SUFFIX ?? '').replace(/[^a-z0-9_]/gi, '').toLowerCase()
+const TEST_SUFFIX = (process.env.AMBITUS_TEST_SUFFIX ?? '')
+  .replace(/[^a-z0-9_]/gi, '')
+  .toLowerCase()
 export const TEST_API_DATABASE = `ambitus_test_api${TEST_SUFFIX ? `_${TEST_SUFFIX}` : ''}`
 export const TEST_E2E_DATABASE = `ambitus_test_e2e${TEST_SUFFIX ? `_${TEST_SUFFIX}` : ''}`
 export const TEST_OUTPUT_DIR = path.join(ROOT, '.test-output', TEST_SUFFIX)

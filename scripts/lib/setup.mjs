@@ -44,5 +44,9 @@ export async function ensureClientBuild(outDir = path.join(ROOT, 'dist')) {
   log('setup', 'building the client…')
   // NODE_ENV=production even when called from Vitest (which sets "test"): the real production bundle.
   const env = { ...process.env, NODE_ENV: 'production' }
-  await runOrThrow(process.execPath, ['node_modules/vite/bin/vite.js', 'build', '--outDir', outDir, '--emptyOutDir'], { env })
+  await runOrThrow(
+    process.execPath,
+    ['node_modules/vite/bin/vite.js', 'build', '--outDir', outDir, '--emptyOutDir'],
+    { env },
+  )
 }

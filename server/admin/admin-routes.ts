@@ -18,8 +18,12 @@ export function adminRoutes(ctx: AppContext): Router {
   })
 
   router.patch('/users/:id', async (req, res) => {
-    const { params, body } = parseRequest(req, { params: UserIdParamsSchema, body: RoleChangeSchema })
-    if (params.id === req.user!.id) throw badRequest('You cannot change your own role.', { role: ['Ask another admin.'] })
+    const { params, body } = parseRequest(req, {
+      params: UserIdParamsSchema,
+      body: RoleChangeSchema,
+    })
+    if (params.id === req.user!.id)
+      throw badRequest('You cannot change your own role.', { role: ['Ask another admin.'] })
     const user = await updateRole(ctx.db, params.id, body.role)
     if (!user) throw notFound('That user')
     res.json({ user: toPublicUser(user) })

@@ -8,7 +8,9 @@ export const MailListQuerySchema = z.object({
 })
 export type MailListQuery = z.infer<typeof MailListQuerySchema>
 
-export const MailIdParamsSchema = z.object({ id: z.coerce.number().int().positive('Not a valid message id.') })
+export const MailIdParamsSchema = z.object({
+  id: z.coerce.number().int().positive('Not a valid message id.'),
+})
 
 export interface MailSummary {
   id: number

@@ -24,7 +24,9 @@ export async function listMail(db: Db, query: MailListQuery) {
   const base = db<MailRow>('captured_mail').modify((q) => {
     if (!query.search) return
     const like = `%${query.search.replace(/[%_\\]/g, '\\$&')}%`
-    q.where((w) => w.whereILike('subject', like).orWhereRaw('array_to_string(recipients, \' \') ilike ?', [like]))
+    q.where((w) =>
+      w.whereILike('subject', like).orWhereRaw("array_to_string(recipients, ' ') ilike ?", [like]),
+    )
   })
   const [{ count }] = (await base.clone().count({ count: '*' })) as [{ count: string }]
   const rows = await base
@@ -37,12 +39,17 @@ export async function listMail(db: Db, query: MailListQuery) {
 }
 
 export async function findMail(db: Db, id: number): Promise<MailMessage | null> {
-  const row = await db<MailRow>('captured_mail').where({ id: String(id) }).first()
+  const row = await db<MailRow>('captured_mail')
+    .where({ id: String(id) })
+    .first()
   return row ? { ...toSummary(row), text: row.text_body, html: row.html_body } : null
 }
 
 /** Newest message sent to an address (used by tests and by the admin view). */
 export async function latestMailTo(db: Db, address: string): Promise<MailMessage | null> {
-  const row = await db<MailRow>('captured_mail').whereRaw('? = any(recipients)', [address]).orderBy('id', 'desc').first()
+  const row = await db<MailRow>('captured_mail')
+    .whereRaw('? = any(recipients)', [address])
+    .orderBy('id', 'desc')
+    .first()
   return row ? { ...toSummary(row), text: row.text_body, html: row.html_body } : null
 }

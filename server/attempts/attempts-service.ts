@@ -34,7 +34,11 @@ function assertOwnInstruments(batch: AttemptBatch, owned: Set<string>) {
  * dropped rather than refused: the answers are still the player's practice (a plan may have been
  * withdrawn while a batch waited offline), so they are kept, just not credited to that plan.
  */
-async function keepAssignedPlanItems(ctx: AppContext, userId: string, batch: AttemptBatch): Promise<AttemptBatch> {
+async function keepAssignedPlanItems(
+  ctx: AppContext,
+  userId: string,
+  batch: AttemptBatch,
+): Promise<AttemptBatch> {
   const itemIds = [...new Set(batch.attempts.flatMap((a) => (a.planItemId ? [a.planItemId] : [])))]
   if (!itemIds.length) return batch
   const assigned = await repo.assignedPlanItemIds(ctx.db, userId, itemIds)

@@ -23,7 +23,8 @@ export function requireAuth(ctx: AppContext): RequestHandler {
 export function requireRole(...roles: Role[]): RequestHandler {
   return (req, _res, next) => {
     if (!req.user) throw unauthorized()
-    if (!roles.includes(req.user.role)) throw forbidden(`This is only for ${roles.join(' or ')} accounts.`)
+    if (!roles.includes(req.user.role))
+      throw forbidden(`This is only for ${roles.join(' or ')} accounts.`)
     next()
   }
 }

@@ -24,7 +24,13 @@ function limiter(limit: number, windowMs: number, skipSuccessfulRequests = false
     standardHeaders: 'draft-8',
     legacyHeaders: false,
     handler: (_req, _res, next) =>
-      next(new AppError('rate_limited', 'Too many attempts. Please wait a few minutes and try again.', 429)),
+      next(
+        new AppError(
+          'rate_limited',
+          'Too many attempts. Please wait a few minutes and try again.',
+          429,
+        ),
+      ),
   })
 }
 

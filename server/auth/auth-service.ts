@@ -30,7 +30,9 @@ export async function register(ctx: AppContext, input: RegisterInput): Promise<U
     return await insertUser(ctx.db, { ...input, passwordHash })
   } catch (error) {
     if ((error as { code?: string }).code === '23505') {
-      throw conflict('An account with this e-mail already exists.', { email: ['This e-mail is already registered.'] })
+      throw conflict('An account with this e-mail already exists.', {
+        email: ['This e-mail is already registered.'],
+      })
     }
     throw error
   }
@@ -55,7 +57,11 @@ export async function changePassword(
       currentPassword: ['This is not your current password.'],
     })
   }
-  const changedAt = await updatePassword(ctx.db, user.id, await hashPassword(input.newPassword, ctx.config.bcryptCost))
+  const changedAt = await updatePassword(
+    ctx.db,
+    user.id,
+    await hashPassword(input.newPassword, ctx.config.bcryptCost),
+  )
   return { ...user, passwordChangedAt: changedAt }
 }
 

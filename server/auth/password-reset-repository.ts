@@ -2,7 +2,11 @@
 import type { Db } from '../lib/db'
 
 export async function insertReset(db: Db, userId: string, tokenHash: string, expiresAt: Date) {
-  await db('password_resets').insert({ user_id: userId, token_hash: tokenHash, expires_at: expiresAt })
+  await db('password_resets').insert({
+    user_id: userId,
+    token_hash: tokenHash,
+    expires_at: expiresAt,
+  })
 }
 
 /** Marks a valid, unused token as used and returns its user id; null when not usable. */
@@ -18,5 +22,8 @@ export async function consumeReset(db: Db, tokenHash: string): Promise<string | 
 
 /** Voids every other open token of the user (after a successful reset). */
 export async function voidResets(db: Db, userId: string) {
-  await db('password_resets').where({ user_id: userId }).whereNull('used_at').update({ used_at: db.fn.now() })
+  await db('password_resets')
+    .where({ user_id: userId })
+    .whereNull('used_at')
+    .update({ used_at: db.fn.now() })
 }

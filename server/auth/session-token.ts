@@ -51,5 +51,10 @@ export function setSessionCookie(req: Request, res: Response, token: string) {
 }
 
 export function clearSessionCookie(req: Request, res: Response) {
-  res.clearCookie(SESSION_COOKIE, { httpOnly: true, sameSite: 'lax', secure: req.secure, path: '/' })
+  res.clearCookie(SESSION_COOKIE, {
+    httpOnly: true,
+    sameSite: 'lax',
+    secure: req.secure,
+    path: '/',
+  })
 }

@@ -64,10 +64,19 @@ export const errorHandler: ErrorRequestHandler = (error, req, res, _next) => {
   req.log?.error({ err: error }, 'unhandled error')
   const requestId = String(req.id ?? '')
   res.status(500).json({
-    error: { code: 'internal', message: `Something went wrong on our side (request ${requestId}).` },
+    error: {
+      code: 'internal',
+      message: `Something went wrong on our side (request ${requestId}).`,
+    },
   })
 }
 
 export const apiNotFound: RequestHandler = (req, _res, next) => {
-  next(new AppError('not_found', `No API route for ${req.method} ${req.originalUrl.split("?")[0]}.`, 404))
+  next(
+    new AppError(
+      'not_found',
+      `No API route for ${req.method} ${req.originalUrl.split('?')[0]}.`,
+      404,
+    ),
+  )
 }

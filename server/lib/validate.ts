@@ -5,7 +5,12 @@ import { badRequest, fieldErrors, type FieldErrors } from './errors'
 
 type Part = 'params' | 'query' | 'body'
 
-function parsePart<S extends z.ZodType>(schema: S, value: unknown, part: Part, fields: FieldErrors) {
+function parsePart<S extends z.ZodType>(
+  schema: S,
+  value: unknown,
+  part: Part,
+  fields: FieldErrors,
+) {
   const result = schema.safeParse(value ?? {})
   if (result.success) return result.data as z.infer<S>
   Object.assign(fields, fieldErrors(result.error, part === 'body' ? undefined : part))
@@ -13,7 +18,11 @@ function parsePart<S extends z.ZodType>(schema: S, value: unknown, part: Part, f
 }
 
 /** Parses one part of the request with its schema. */
-export function parse<S extends z.ZodType>(schema: S, req: Request, part: Part = 'body'): z.infer<S> {
+export function parse<S extends z.ZodType>(
+  schema: S,
+  req: Request,
+  part: Part = 'body',
+): z.infer<S> {
   const fields: FieldErrors = {}
   const data = parsePart(schema, req[part], part, fields)
   if (data === undefined) throw badRequest('Some fields need attention.', fields)

@@ -42,7 +42,10 @@ export function startMailSink(db: Db, port = 2525, host = '127.0.0.1'): Promise<
       const from = session.envelope.mailFrom ? session.envelope.mailFrom.address : ''
       readStream(stream)
         .then((raw) => storeMessage(db, raw, to, from))
-        .then(() => callback(), (error: Error) => callback(error))
+        .then(
+          () => callback(),
+          (error: Error) => callback(error),
+        )
     },
   })
   return new Promise((resolve, reject) => {

@@ -134,14 +134,12 @@ export async function updatePlan(
   planId: string,
   input: PlanUpdateInput,
 ): Promise<string[]> {
-  await trx('plans')
-    .where({ id: planId })
-    .update({
-      title: input.title,
-      notes: input.notes,
-      due_at: input.dueAt,
-      updated_at: trx.fn.now(),
-    })
+  await trx('plans').where({ id: planId }).update({
+    title: input.title,
+    notes: input.notes,
+    due_at: input.dueAt,
+    updated_at: trx.fn.now(),
+  })
   const existing: string[] = await trx('plan_items').where({ plan_id: planId }).pluck('id')
   const kept = new Set(
     input.items.map((item) => item.id).filter((id) => id && existing.includes(id)),

@@ -39,11 +39,9 @@ function studioManagement(ctx: AppContext, router: Router) {
     res.json({ studios: await studios.studiosOf(ctx, req.user!.id) })
   })
   router.post('/studios', teacher, async (req, res) => {
-    res
-      .status(201)
-      .json({
-        studio: await studios.createStudio(ctx, req.user!.id, parse(StudioInputSchema, req).name),
-      })
+    res.status(201).json({
+      studio: await studios.createStudio(ctx, req.user!.id, parse(StudioInputSchema, req).name),
+    })
   })
   router.patch('/studios/:id', teacher, async (req, res) => {
     const { params, body } = parseRequest(req, {

@@ -52,7 +52,12 @@ export async function insertUser(
   user: { email: string; name: string; role: Role; passwordHash: string },
 ): Promise<UserRecord> {
   const [row] = await db<UserRow>('users')
-    .insert({ email: user.email, name: user.name, role: user.role, password_hash: user.passwordHash })
+    .insert({
+      email: user.email,
+      name: user.name,
+      role: user.role,
+      password_hash: user.passwordHash,
+    })
     .returning('*')
   return toRecord(row as UserRow)
 }
@@ -60,7 +65,11 @@ export async function insertUser(
 export async function updatePassword(db: Db, id: string, passwordHash: string): Promise<Date> {
   const [row] = await db<UserRow>('users')
     .where({ id })
-    .update({ password_hash: passwordHash, password_changed_at: new Date(), updated_at: new Date() })
+    .update({
+      password_hash: passwordHash,
+      password_changed_at: new Date(),
+      updated_at: new Date(),
+    })
     .returning('password_changed_at')
   return (row as UserRow).password_changed_at
 }

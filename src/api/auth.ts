@@ -14,7 +14,8 @@ export interface RegisterBody {
 export const fetchMe = () => http.get<{ user: PublicUser }>('/auth/me', { quiet401: true })
 export const login = (email: string, password: string) =>
   http.post<{ user: PublicUser }>('/auth/login', { email, password }, { quiet401: true })
-export const register = (body: RegisterBody) => http.post<{ user: PublicUser }>('/auth/register', body)
+export const register = (body: RegisterBody) =>
+  http.post<{ user: PublicUser }>('/auth/register', body)
 export const logout = () => http.post<void>('/auth/logout')
 export const changePassword = (currentPassword: string, newPassword: string) =>
   http.post<void>('/auth/password', { currentPassword, newPassword })

@@ -27,7 +27,12 @@ async function toApiError(response: Response): Promise<ApiError> {
     error?: { code?: string; message?: string; fields?: FieldErrors }
   } | null
   const e = body?.error
-  return new ApiError(response.status, e?.code ?? 'http_error', e?.message ?? response.statusText, e?.fields)
+  return new ApiError(
+    response.status,
+    e?.code ?? 'http_error',
+    e?.message ?? response.statusText,
+    e?.fields,
+  )
 }
 
 export interface RequestOptions {
@@ -39,14 +44,23 @@ export interface RequestOptions {
 
 function withQuery(path: string, query: RequestOptions['query']) {
   const params = new URLSearchParams()
-  for (const [k, v] of Object.entries(query ?? {})) if (v !== undefined && v !== '') params.set(k, String(v))
+  for (const [k, v] of Object.entries(query ?? {}))
+    if (v !== undefined && v !== '') params.set(k, String(v))
   const qs = params.toString()
   return qs ? `${path}?${qs}` : path
 }
 
 /** Calls /api{path}; resolves to the parsed JSON (undefined for 204) or throws ApiError. */
-export async function request<T>(method: string, path: string, options: RequestOptions = {}): Promise<T> {
-  const init: RequestInit = { method, credentials: 'same-origin', headers: { accept: 'application/json' } }
+export async function request<T>(
+  method: string,
+  path: string,
+  options: RequestOptions = {},
+): Promise<T> {
+  const init: RequestInit = {
+    method,
+    credentials: 'same-origin',
+    headers: { accept: 'application/json' },
+  }
   if (options.body instanceof FormData) init.body = options.body
   else if (options.body !== undefined) {
     init.body = JSON.stringify(options.body)
@@ -56,7 +70,11 @@ export async function request<T>(method: string, path: string, options: RequestO
   try {
     response = await fetch(`/api${withQuery(path, options.query)}`, init)
   } catch {
-    throw new ApiError(0, 'network', 'Cannot reach the server. Check your connection and try again.')
+    throw new ApiError(
+      0,
+      'network',
+      'Cannot reach the server. Check your connection and try again.',
+    )
   }
   if (!response.ok) {
     const error = await toApiError(response)
@@ -69,8 +87,11 @@ export async function request<T>(method: string, path: string, options: RequestO
 
 export const http = {
   get: <T>(path: string, options?: RequestOptions) => request<T>('GET', path, options),
-  post: <T>(path: string, body?: unknown, options?: RequestOptions) => request<T>('POST', path, { ...options, body }),
-  put: <T>(path: string, body?: unknown, options?: RequestOptions) => request<T>('PUT', path, { ...options, body }),
-  patch: <T>(path: string, body?: unknown, options?: RequestOptions) => request<T>('PATCH', path, { ...options, body }),
+  post: <T>(path: string, body?: unknown, options?: RequestOptions) =>
+    request<T>('POST', path, { ...options, body }),
+  put: <T>(path: string, body?: unknown, options?: RequestOptions) =>
+    request<T>('PUT', path, { ...options, body }),
+  patch: <T>(path: string, body?: unknown, options?: RequestOptions) =>
+    request<T>('PATCH', path, { ...options, body }),
   delete: <T>(path: string, options?: RequestOptions) => request<T>('DELETE', path, options),
 }

@@ -5,8 +5,14 @@ import { describePreset, describeTarget } from './plan-text'
 
 describe('describeTarget', () => {
   it.each([
-    [{ kind: 'accuracy', minAccuracy: 0.9, maxMedianMs: 2500, minAttempts: 60 }, 'accuracy ≥ 90 % and median answer ≤ 2.5 s over the last 60 answers'],
-    [{ kind: 'accuracy', minAccuracy: 0.8, maxMedianMs: null, minAttempts: 10 }, 'accuracy ≥ 80 % over the last 10 answers'],
+    [
+      { kind: 'accuracy', minAccuracy: 0.9, maxMedianMs: 2500, minAttempts: 60 },
+      'accuracy ≥ 90 % and median answer ≤ 2.5 s over the last 60 answers',
+    ],
+    [
+      { kind: 'accuracy', minAccuracy: 0.8, maxMedianMs: null, minAttempts: 10 },
+      'accuracy ≥ 80 % over the last 10 answers',
+    ],
     [{ kind: 'sessions', count: 1 }, '1 practice session'],
     [{ kind: 'sessions', count: 4 }, '4 practice sessions'],
     [{ kind: 'all-keys' }, 'every key of the cycle played correctly'],
@@ -17,12 +23,22 @@ describe('describeTarget', () => {
 
 describe('describePreset', () => {
   it('names the drill, what it covers and the session length', () => {
-    const recall = DrillPresetSchema.parse({ drill: 'recall', settings: { region: { lowString: 0, highString: 3, lowFret: 0, highFret: 5 } } })
-    expect(describePreset(recall)).toBe('Neck Recall — strings 1–4 (lowest = 1), frets 0–5 · 24 questions')
+    const recall = DrillPresetSchema.parse({
+      drill: 'recall',
+      settings: { region: { lowString: 0, highString: 3, lowFret: 0, highFret: 5 } },
+    })
+    expect(describePreset(recall)).toBe(
+      'Neck Recall — strings 1–4 (lowest = 1), frets 0–5 · 24 questions',
+    )
   })
 
   it('spells the window of a cycle with flats and keeps proper names capitalised', () => {
-    const cycle = DrillPresetSchema.parse({ drill: 'cycle', settings: { low: 34, high: 46, scale: 'minor', questionCount: null, timeLimitMinutes: 10 } })
-    expect(describePreset(cycle)).toBe('Window Cycle — natural minor (Aeolian), cycle of fourths, window Bb1–Bb2 · 10 min')
+    const cycle = DrillPresetSchema.parse({
+      drill: 'cycle',
+      settings: { low: 34, high: 46, scale: 'minor', questionCount: null, timeLimitMinutes: 10 },
+    })
+    expect(describePreset(cycle)).toBe(
+      'Window Cycle — natural minor (Aeolian), cycle of fourths, window Bb1–Bb2 · 10 min',
+    )
   })
 })

@@ -35,7 +35,8 @@ const lakewoodDark: ThemeDefinition = {
   },
 }
 
-const storedTheme = typeof localStorage === 'undefined' ? null : localStorage.getItem('ambitus.theme')
+const storedTheme =
+  typeof localStorage === 'undefined' ? null : localStorage.getItem('ambitus.theme')
 
 export default createVuetify({
   theme: {

@@ -54,5 +54,18 @@ export const useAdminStore = defineStore('admin', () => {
   /** Sends every teacher's weekly digest now; resolves to how many went out (errors are thrown to the caller). */
   const sendDigests = async () => (await adminApi.sendDigestsNow()).sent
 
-  return { users, userTotal, mail, mailTotal, openMessage, isLoading, error, loadUsers, setRole, loadMail, openMail, sendDigests }
+  return {
+    users,
+    userTotal,
+    mail,
+    mailTotal,
+    openMessage,
+    isLoading,
+    error,
+    loadUsers,
+    setRole,
+    loadMail,
+    openMail,
+    sendDigests,
+  }
 })

@@ -6,7 +6,11 @@ import { ApiError } from '../api/http'
 import type { PublicUser } from '../api/auth'
 import type { Role } from '../../server/users/users-schema'
 
-const HOME_BY_ROLE: Record<Role, string> = { student: 'practice', teacher: 'studio', admin: 'admin-users' }
+const HOME_BY_ROLE: Record<Role, string> = {
+  student: 'practice',
+  teacher: 'studio',
+  admin: 'admin-users',
+}
 
 export const useAuthStore = defineStore('auth', () => {
   const user = ref<PublicUser | null>(null)
@@ -65,7 +69,21 @@ export const useAuthStore = defineStore('auth', () => {
     loaded.value = true
   }
 
-  const hasRole = (roles?: Role[]) => !roles || (user.value !== null && roles.includes(user.value.role))
+  const hasRole = (roles?: Role[]) =>
+    !roles || (user.value !== null && roles.includes(user.value.role))
 
-  return { user, loaded, isLoading, error, isSignedIn, homeRoute, loadSession, signIn, register, signOut, expire, hasRole }
+  return {
+    user,
+    loaded,
+    isLoading,
+    error,
+    isSignedIn,
+    homeRoute,
+    loadSession,
+    signIn,
+    register,
+    signOut,
+    expire,
+    hasRole,
+  }
 })

@@ -7,7 +7,13 @@ import { mountWithApp } from '../helpers/mount'
 afterEach(() => vi.unstubAllGlobals())
 
 function stubFetch(status: number, body: unknown) {
-  const fetch = vi.fn(async () => new Response(JSON.stringify(body), { status, headers: { 'content-type': 'application/json' } }))
+  const fetch = vi.fn(
+    async () =>
+      new Response(JSON.stringify(body), {
+        status,
+        headers: { 'content-type': 'application/json' },
+      }),
+  )
   vi.stubGlobal('fetch', fetch)
   return fetch
 }
@@ -30,11 +36,15 @@ describe('SignInView', () => {
     await wrapper.find('input[name="password"]').setValue('wrong one')
     await wrapper.find('form').trigger('submit')
     await flushPromises()
-    expect(wrapper.find('[data-testid="form-error"]').text()).toBe('E-mail or password is not right.')
+    expect(wrapper.find('[data-testid="form-error"]').text()).toBe(
+      'E-mail or password is not right.',
+    )
   })
 
   it('when sign-in succeeds, then a student lands on the practice page', async () => {
-    stubFetch(200, { user: { id: '1', email: 'noor@example.test', name: 'Noor', role: 'student', createdAt: '' } })
+    stubFetch(200, {
+      user: { id: '1', email: 'noor@example.test', name: 'Noor', role: 'student', createdAt: '' },
+    })
     const { wrapper, router } = mountWithApp(SignInView)
     await wrapper.find('input[name="email"]').setValue('noor@example.test')
     await wrapper.find('input[name="password"]').setValue('right one!!')

@@ -3,7 +3,14 @@
 import knex, { type Knex } from 'knex'
 import type { Browser } from 'playwright-core'
 import { afterAll, beforeAll, expect, inject, it } from 'vitest'
-import { LAPTOP, launchBrowser, newPage, PHONE, screenshot, signInThroughUi } from '../helpers/browser'
+import {
+  LAPTOP,
+  launchBrowser,
+  newPage,
+  PHONE,
+  screenshot,
+  signInThroughUi,
+} from '../helpers/browser'
 
 let browser: Browser
 let db: Knex
@@ -50,7 +57,9 @@ it('a student who forgot the password resets it with the mailed link and signs i
   await page.goto('/forgot-password')
   await page.getByLabel('E-mail').fill('lucia@cedarhollow.test')
   await page.getByRole('button', { name: 'Send reset link' }).click()
-  await expect.poll(() => page.getByTestId('reset-sent').isVisible(), { timeout: 15_000 }).toBe(true)
+  await expect
+    .poll(() => page.getByTestId('reset-sent').isVisible(), { timeout: 15_000 })
+    .toBe(true)
 
   const mail = await latestMailText('lucia@cedarhollow.test', 'Reset your Ambitus password')
   const link = mail.match(/https?:\/\/\S+\/reset-password\S+/)![0]
@@ -58,7 +67,9 @@ it('a student who forgot the password resets it with the mailed link and signs i
   await page.getByLabel('New password', { exact: true }).fill('a fresh passphrase')
   await page.getByLabel('Repeat the new password').fill('a fresh passphrase')
   await page.getByRole('button', { name: 'Save new password' }).click()
-  await expect.poll(() => page.getByTestId('reset-done').isVisible(), { timeout: 15_000 }).toBe(true)
+  await expect
+    .poll(() => page.getByTestId('reset-done').isVisible(), { timeout: 15_000 })
+    .toBe(true)
   await screenshot(page, 'reset-done-laptop')
 
   await signInThroughUi(page, 'lucia@cedarhollow.test', 'a fresh passphrase')
@@ -74,7 +85,10 @@ it('the admin signs in, lands on Users and reads the reset mail in the mail log'
   await screenshot(page, 'admin-users-laptop')
   await page.getByRole('link', { name: 'Mail log' }).click()
   await page.waitForURL('**/admin/mail')
-  const row = page.getByTestId('mail-log').locator('tbody tr', { hasText: 'lucia@cedarhollow.test' }).first()
+  const row = page
+    .getByTestId('mail-log')
+    .locator('tbody tr', { hasText: 'lucia@cedarhollow.test' })
+    .first()
   await row.click()
   await expect.poll(() => page.getByRole('dialog').textContent()).toContain('reset-password?token=')
   await page.waitForTimeout(400) // let the dialog finish fading in before the screenshot

@@ -1,7 +1,14 @@
 // The demo people sign in through the UI and land on their home pages.
 import type { Browser } from 'playwright-core'
 import { afterAll, beforeAll, describe, expect, it } from 'vitest'
-import { LAPTOP, launchBrowser, newPage, PHONE, screenshot, signInThroughUi } from '../helpers/browser'
+import {
+  LAPTOP,
+  launchBrowser,
+  newPage,
+  PHONE,
+  screenshot,
+  signInThroughUi,
+} from '../helpers/browser'
 
 let browser: Browser
 beforeAll(async () => {
@@ -15,7 +22,9 @@ describe('signing in', () => {
     await signInThroughUi(page, 'student@cedarhollow.test')
     await page.waitForURL('**/practice')
     await expect.poll(() => page.getByTestId('practice-home').isVisible()).toBe(true)
-    expect(await page.getByRole('heading', { level: 1 }).first().textContent()).toContain('Practice')
+    expect(await page.getByRole('heading', { level: 1 }).first().textContent()).toContain(
+      'Practice',
+    )
     await screenshot(page, 'student-home-laptop')
     expect(foreign).toEqual([])
     await context.close()
@@ -47,7 +56,9 @@ describe('signing in', () => {
   it('a signed-out visitor asking for a protected page is sent to sign in, then back', async () => {
     const { page, context } = await newPage(browser, LAPTOP)
     await page.goto('/progress')
-    await page.waitForURL((url) => url.pathname === '/sign-in' && url.searchParams.get('next') === '/progress')
+    await page.waitForURL(
+      (url) => url.pathname === '/sign-in' && url.searchParams.get('next') === '/progress',
+    )
     await page.getByLabel('E-mail').fill('student@cedarhollow.test')
     await page.getByLabel('Password', { exact: true }).fill('ambitus-demo')
     await page.getByRole('button', { name: 'Sign in' }).click()

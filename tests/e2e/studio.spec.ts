@@ -204,8 +204,12 @@ describe('teacher studio', () => {
     await teacher.goto('/studio')
     await teacher.getByTestId('roster').getByRole('link', { name: 'Noor Halvorsen' }).click()
     await teacher.waitForURL('**/studio/students/*')
-    await expect.poll(() => teacher.getByTestId('student-glance').textContent()).toContain('Weak spots')
-    expect(await teacher.getByTestId('studio-student').textContent()).toContain('Fourths in a one-octave window')
+    await expect
+      .poll(() => teacher.getByTestId('student-glance').textContent())
+      .toContain('Weak spots')
+    expect(await teacher.getByTestId('studio-student').textContent()).toContain(
+      'Fourths in a one-octave window',
+    )
     await expect.poll(() => teacher.getByTestId('student-progress').isVisible()).toBe(true)
     await teacher.waitForTimeout(1500) // let the lazily loaded charts draw before the screenshot
     await screenshot(teacher, 'studio-demo-student-laptop')

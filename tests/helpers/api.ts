@@ -26,7 +26,10 @@ export interface TestApi {
 }
 
 /** Starts the app and a mail sink for one test file; call close() in afterAll. */
-export async function startTestApi(overrides: Partial<Config> = {}, logLines?: string[]): Promise<TestApi> {
+export async function startTestApi(
+  overrides: Partial<Config> = {},
+  logLines?: string[],
+): Promise<TestApi> {
   const base = loadConfig(process.env, {
     logLevel: 'silent',
     clientDist: '/nonexistent',
@@ -68,12 +71,21 @@ const contexts = new WeakMap<Express, AppContext>()
  * database and its session cookie minted with the app's own key (auth.test.ts covers the register and
  * sign-in routes themselves); everything after that goes through the real middleware.
  */
-export async function signedInAgent(app: Express, role: 'student' | 'teacher' = 'student', name = 'Test Player') {
+export async function signedInAgent(
+  app: Express,
+  role: 'student' | 'teacher' = 'student',
+  name = 'Test Player',
+) {
   const ctx = contexts.get(app)
   if (!ctx) throw new Error('signedInAgent needs an app from startTestApi()')
   const email = uniqueEmail(role)
   testPasswordHash ??= hashPassword(TEST_PASSWORD, ctx.config.bcryptCost)
-  const record = await insertUser(ctx.db, { email, name, role, passwordHash: await testPasswordHash })
+  const record = await insertUser(ctx.db, {
+    email,
+    name,
+    role,
+    passwordHash: await testPasswordHash,
+  })
   const agent = request.agent(app)
   const cookie = `${SESSION_COOKIE}=${signSession(record, ctx.config.jwtSecret)}; Path=/; HttpOnly`
   agent.jar.setCookies([cookie], '127.0.0.1', '/')

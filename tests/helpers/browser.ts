@@ -22,7 +22,10 @@ const CHROMIUM_ARGS = [
 ]
 
 export function launchBrowser(): Promise<Browser> {
-  return chromium.launch({ executablePath: process.env.CHROMIUM_PATH ?? '/usr/bin/chromium', args: CHROMIUM_ARGS })
+  return chromium.launch({
+    executablePath: process.env.CHROMIUM_PATH ?? '/usr/bin/chromium',
+    args: CHROMIUM_ARGS,
+  })
 }
 
 export const baseUrl = () => inject('baseUrl')
@@ -35,7 +38,8 @@ export async function newPage(browser: Browser, viewport = LAPTOP) {
   const origin = new URL(baseUrl()).origin
   page.on('request', (req) => {
     const url = req.url()
-    if (!url.startsWith(origin) && !url.startsWith('data:') && !url.startsWith('blob:')) foreign.push(url)
+    if (!url.startsWith(origin) && !url.startsWith('data:') && !url.startsWith('blob:'))
+      foreign.push(url)
   })
   return { page, context, foreign }
 }

@@ -24,6 +24,14 @@ if (!window.matchMedia) {
 }
 if (!window.visualViewport) {
   Object.defineProperty(window, 'visualViewport', {
-    value: { width: 1024, height: 768, offsetLeft: 0, offsetTop: 0, scale: 1, addEventListener() {}, removeEventListener() {} },
+    value: {
+      width: 1024,
+      height: 768,
+      offsetLeft: 0,
+      offsetTop: 0,
+      scale: 1,
+      addEventListener() {},
+      removeEventListener() {},
+    },
   })
 }

@@ -7,7 +7,10 @@ import { createVuetify } from 'vuetify'
 import * as components from 'vuetify/components'
 import * as directives from 'vuetify/directives'
 
-export function mountWithApp<C extends Component>(component: C, options: ComponentMountingOptions<C> = {}) {
+export function mountWithApp<C extends Component>(
+  component: C,
+  options: ComponentMountingOptions<C> = {},
+) {
   const pinia = createPinia()
   setActivePinia(pinia)
   const vuetify = createVuetify({ components, directives })
@@ -15,7 +18,15 @@ export function mountWithApp<C extends Component>(component: C, options: Compone
     history: createMemoryHistory(),
     routes: [{ path: '/:any(.*)*', name: 'any', component: { template: '<div />' } }],
   })
-  for (const name of ['sign-in', 'register', 'forgot-password', 'landing', 'practice', 'studio', 'admin-users']) {
+  for (const name of [
+    'sign-in',
+    'register',
+    'forgot-password',
+    'landing',
+    'practice',
+    'studio',
+    'admin-users',
+  ]) {
     router.addRoute({ path: `/${name}`, name, component: { template: '<div />' } })
   }
   const wrapper = mount(component, {

@@ -19,7 +19,9 @@ it('when an admin lists users with a search, then only matches come back, paged'
   const admin = await signedInAgent(api.app, 'teacher', 'Admin Person')
   await makeAdmin(api.ctx, admin.user.id)
   const target = await signedInAgent(api.app, 'student', 'Zebulon Quartz')
-  const res = await admin.agent.get('/api/admin/users').query({ search: 'Zebulon Quartz', pageSize: 5 })
+  const res = await admin.agent
+    .get('/api/admin/users')
+    .query({ search: 'Zebulon Quartz', pageSize: 5 })
   expect(res.status).toBe(200)
   expect(res.body.items.map((u: { id: string }) => u.id)).toEqual([target.user.id])
   expect(res.body.total).toBe(1)

@@ -369,7 +369,10 @@ describe('plan items', () => {
   /** A plan with one item, assigned to `studentId` by a teacher (rows written directly). */
   async function assignedItem(studentId: string) {
     const teacher = await signedInAgent(app, 'teacher')
-    const [plan] = await api.ctx.db('plans').insert({ teacher_id: teacher.user.id, title: 'Test plan' }).returning('id')
+    const [plan] = await api.ctx
+      .db('plans')
+      .insert({ teacher_id: teacher.user.id, title: 'Test plan' })
+      .returning('id')
     const preset = { drill: 'recall', settings: {} }
     const [item] = await api.ctx
       .db('plan_items')

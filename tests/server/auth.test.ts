@@ -3,7 +3,14 @@ import jwt from 'jsonwebtoken'
 import request from 'supertest'
 import { afterAll, beforeAll, describe, expect, it } from 'vitest'
 import { SESSION_COOKIE } from '../../server/auth/session-token'
-import { signedInAgent, startTestApi, TEST_PASSWORD, uniqueEmail, waitForMail, type TestApi } from '../helpers/api'
+import {
+  signedInAgent,
+  startTestApi,
+  TEST_PASSWORD,
+  uniqueEmail,
+  waitForMail,
+  type TestApi,
+} from '../helpers/api'
 
 let api: TestApi
 beforeAll(async () => {
@@ -12,13 +19,17 @@ beforeAll(async () => {
 afterAll(() => api.close())
 
 const sessionCookie = (res: request.Response) =>
-  ([] as string[]).concat(res.headers['set-cookie'] ?? []).find((c) => c.startsWith(`${SESSION_COOKIE}=`))
+  ([] as string[])
+    .concat(res.headers['set-cookie'] ?? [])
+    .find((c) => c.startsWith(`${SESSION_COOKIE}=`))
 
 describe('register, sign in, me, sign out', () => {
   it('when a student registers, signs out and signs in again, then /me names them with their role', async () => {
     const agent = request.agent(api.app)
     const email = uniqueEmail('flow')
-    const created = await agent.post('/api/auth/register').send({ email, password: TEST_PASSWORD, name: 'Ada Flow', role: 'student' })
+    const created = await agent
+      .post('/api/auth/register')
+      .send({ email, password: TEST_PASSWORD, name: 'Ada Flow', role: 'student' })
     expect(created.status).toBe(201)
     expect(created.body.user).toMatchObject({ email, role: 'student', name: 'Ada Flow' })
     expect(created.body.user.passwordHash).toBeUndefined()
@@ -26,7 +37,9 @@ describe('register, sign in, me, sign out', () => {
     expect((await agent.post('/api/auth/logout')).status).toBe(204)
     expect((await agent.get('/api/auth/me')).status).toBe(401)
 
-    const login = await agent.post('/api/auth/login').send({ email: email.toUpperCase(), password: TEST_PASSWORD })
+    const login = await agent
+      .post('/api/auth/login')
+      .send({ email: email.toUpperCase(), password: TEST_PASSWORD })
     expect(login.status).toBe(200)
     const cookie = sessionCookie(login)
     expect(cookie).toMatch(/HttpOnly/i)
@@ -49,21 +62,27 @@ describe('register, sign in, me, sign out', () => {
 
   it('when the password is wrong, then 401 and no cookie', async () => {
     const { email } = await signedInAgent(api.app)
-    const res = await request(api.app).post('/api/auth/login').send({ email, password: 'not the password' })
+    const res = await request(api.app)
+      .post('/api/auth/login')
+      .send({ email, password: 'not the password' })
     expect(res.status).toBe(401)
     expect(res.body.error.code).toBe('unauthorized')
     expect(sessionCookie(res)).toBeUndefined()
   })
 
   it('when the e-mail is unknown, then the same 401 as a wrong password', async () => {
-    const res = await request(api.app).post('/api/auth/login').send({ email: uniqueEmail('ghost'), password: 'whatever-it-is' })
+    const res = await request(api.app)
+      .post('/api/auth/login')
+      .send({ email: uniqueEmail('ghost'), password: 'whatever-it-is' })
     expect(res.status).toBe(401)
     expect(res.body.error.message).toBe('E-mail or password is not right.')
   })
 
   it('when an e-mail is already registered, then 409 with a field error', async () => {
     const { email } = await signedInAgent(api.app)
-    const res = await request(api.app).post('/api/auth/register').send({ email, password: TEST_PASSWORD, name: 'Twin', role: 'teacher' })
+    const res = await request(api.app)
+      .post('/api/auth/register')
+      .send({ email, password: TEST_PASSWORD, name: 'Twin', role: 'teacher' })
     expect(res.status).toBe(409)
     expect(res.body.error.fields.email[0]).toMatch(/already registered/)
   })
@@ -71,20 +90,27 @@ describe('register, sign in, me, sign out', () => {
 
 describe('boundary validation', () => {
   it('when the body is invalid, then 400 with a message per field', async () => {
-    const res = await request(api.app).post('/api/auth/register').send({ email: 'nope', password: 'short', name: '', role: 'admin' })
+    const res = await request(api.app)
+      .post('/api/auth/register')
+      .send({ email: 'nope', password: 'short', name: '', role: 'admin' })
     expect(res.status).toBe(400)
     expect(Object.keys(res.body.error.fields).sort()).toEqual(['email', 'name', 'password', 'role'])
     expect(res.body.error.fields.password[0]).toMatch(/at least 10/)
   })
 
   it('when the body is not JSON, then 400 not 500', async () => {
-    const res = await request(api.app).post('/api/auth/login').set('content-type', 'application/json').send('{"email":')
+    const res = await request(api.app)
+      .post('/api/auth/login')
+      .set('content-type', 'application/json')
+      .send('{"email":')
     expect(res.status).toBe(400)
     expect(res.body.error.code).toBe('invalid_input')
   })
 
   it('when the body is larger than the limit, then 413', async () => {
-    const res = await request(api.app).post('/api/auth/login').send({ email: 'a@b.test', password: 'x'.repeat(300_000) })
+    const res = await request(api.app)
+      .post('/api/auth/login')
+      .send({ email: 'a@b.test', password: 'x'.repeat(300_000) })
     expect(res.status).toBe(413)
   })
 
@@ -117,8 +143,13 @@ describe('sessions and roles', () => {
     const { agent } = await signedInAgent(api.app)
     const login = await agent.get('/api/auth/me')
     expect(login.status).toBe(200)
-    const forged = jwt.sign({ sub: login.body.user.id, pwc: 0 }, 'some-other-secret-of-32-characters!!')
-    const res = await request(api.app).get('/api/auth/me').set('Cookie', `${SESSION_COOKIE}=${forged}`)
+    const forged = jwt.sign(
+      { sub: login.body.user.id, pwc: 0 },
+      'some-other-secret-of-32-characters!!',
+    )
+    const res = await request(api.app)
+      .get('/api/auth/me')
+      .set('Cookie', `${SESSION_COOKIE}=${forged}`)
     expect(res.status).toBe(401)
   })
 
@@ -126,18 +157,28 @@ describe('sessions and roles', () => {
     const { user } = await signedInAgent(api.app)
     const row = await api.ctx.db('users').where({ id: user.id }).first()
     const expired = jwt.sign(
-      { sub: user.id, pwc: new Date(row.password_changed_at).getTime(), exp: Math.floor(Date.now() / 1000) - 60 },
+      {
+        sub: user.id,
+        pwc: new Date(row.password_changed_at).getTime(),
+        exp: Math.floor(Date.now() / 1000) - 60,
+      },
       api.ctx.config.jwtSecret,
     )
-    const res = await request(api.app).get('/api/auth/me').set('Cookie', `${SESSION_COOKIE}=${expired}`)
+    const res = await request(api.app)
+      .get('/api/auth/me')
+      .set('Cookie', `${SESSION_COOKIE}=${expired}`)
     expect(res.status).toBe(401)
   })
 
   it('when a valid JWT is replayed after a password change, then 401', async () => {
     const { agent, email } = await signedInAgent(api.app)
-    const old = await request(api.app).post('/api/auth/login').send({ email, password: TEST_PASSWORD })
+    const old = await request(api.app)
+      .post('/api/auth/login')
+      .send({ email, password: TEST_PASSWORD })
     const oldCookie = sessionCookie(old)!.split(';')[0]!
-    const change = await agent.post('/api/auth/password').send({ currentPassword: TEST_PASSWORD, newPassword: 'a brand new passphrase' })
+    const change = await agent
+      .post('/api/auth/password')
+      .send({ currentPassword: TEST_PASSWORD, newPassword: 'a brand new passphrase' })
     expect(change.status).toBe(204)
     expect((await agent.get('/api/auth/me')).status).toBe(200) // this session got a fresh cookie
     expect((await request(api.app).get('/api/auth/me').set('Cookie', oldCookie)).status).toBe(401)
@@ -147,10 +188,15 @@ describe('sessions and roles', () => {
 describe('change password', () => {
   it('when the current password is wrong, then 400 on that field and the password is unchanged', async () => {
     const { agent, email } = await signedInAgent(api.app)
-    const res = await agent.post('/api/auth/password').send({ currentPassword: 'wrong wrong wrong', newPassword: 'another passphrase' })
+    const res = await agent
+      .post('/api/auth/password')
+      .send({ currentPassword: 'wrong wrong wrong', newPassword: 'another passphrase' })
     expect(res.status).toBe(400)
     expect(res.body.error.fields.currentPassword).toBeDefined()
-    expect((await request(api.app).post('/api/auth/login').send({ email, password: TEST_PASSWORD })).status).toBe(200)
+    expect(
+      (await request(api.app).post('/api/auth/login').send({ email, password: TEST_PASSWORD }))
+        .status,
+    ).toBe(200)
   })
 })
 
@@ -163,15 +209,32 @@ describe('password reset by e-mail', () => {
     const mail = await waitForMail(api.ctx, email)
     expect(mail.subject).toMatch(/Reset your Ambitus password/)
     const token = new URL(mail.text.match(/https?:\/\/\S+/)![0]).searchParams.get('token')!
-    const stored = await api.ctx.db('password_resets').select('token_hash').orderBy('created_at', 'desc').first()
+    const stored = await api.ctx
+      .db('password_resets')
+      .select('token_hash')
+      .orderBy('created_at', 'desc')
+      .first()
     expect(stored.token_hash).not.toBe(token) // only a hash is stored
 
-    const confirm = await request(api.app).post('/api/auth/password-reset/confirm').send({ token, password: 'reset passphrase 1' })
+    const confirm = await request(api.app)
+      .post('/api/auth/password-reset/confirm')
+      .send({ token, password: 'reset passphrase 1' })
     expect(confirm.status).toBe(204)
-    expect((await request(api.app).post('/api/auth/login').send({ email, password: 'reset passphrase 1' })).status).toBe(200)
-    expect((await request(api.app).post('/api/auth/login').send({ email, password: TEST_PASSWORD })).status).toBe(401)
+    expect(
+      (
+        await request(api.app)
+          .post('/api/auth/login')
+          .send({ email, password: 'reset passphrase 1' })
+      ).status,
+    ).toBe(200)
+    expect(
+      (await request(api.app).post('/api/auth/login').send({ email, password: TEST_PASSWORD }))
+        .status,
+    ).toBe(401)
 
-    const again = await request(api.app).post('/api/auth/password-reset/confirm').send({ token, password: 'reset passphrase 2' })
+    const again = await request(api.app)
+      .post('/api/auth/password-reset/confirm')
+      .send({ token, password: 'reset passphrase 2' })
     expect(again.status).toBe(400)
     expect(again.body.error.code).toBe('invalid_token')
   })
@@ -182,8 +245,13 @@ describe('password reset by e-mail', () => {
     await request(api.app).post('/api/auth/password-reset').send({ email })
     const mail = await waitForMail(api.ctx, email, before)
     const token = new URL(mail.text.match(/https?:\/\/\S+/)![0]).searchParams.get('token')!
-    await api.ctx.db('password_resets').update({ expires_at: new Date(Date.now() - 1000) }).whereNull('used_at')
-    const res = await request(api.app).post('/api/auth/password-reset/confirm').send({ token, password: 'too late passphrase' })
+    await api.ctx
+      .db('password_resets')
+      .update({ expires_at: new Date(Date.now() - 1000) })
+      .whereNull('used_at')
+    const res = await request(api.app)
+      .post('/api/auth/password-reset/confirm')
+      .send({ token, password: 'too late passphrase' })
     expect(res.status).toBe(400)
   })
 
@@ -192,11 +260,17 @@ describe('password reset by e-mail', () => {
     const res = await request(api.app).post('/api/auth/password-reset').send({ email })
     expect(res.status).toBe(202)
     await new Promise((r) => setTimeout(r, 300))
-    expect(await api.ctx.db('captured_mail').whereRaw('? = any(recipients)', [email]).first()).toBeUndefined()
+    expect(
+      await api.ctx.db('captured_mail').whereRaw('? = any(recipients)', [email]).first(),
+    ).toBeUndefined()
   })
 })
 
 async function waitForMailOrZero(email: string) {
-  const row = await api.ctx.db('captured_mail').whereRaw('? = any(recipients)', [email]).max('id as id').first()
+  const row = await api.ctx
+    .db('captured_mail')
+    .whereRaw('? = any(recipients)', [email])
+    .max('id as id')
+    .first()
   return row?.id ? Number(row.id) : 0
 }

@@ -14,12 +14,18 @@ afterAll(() => api.close())
 it('when a user registers, signs in and calls the API with the cookie, then no secret reaches the log', async () => {
   const email = uniqueEmail('logged')
   const agent = request.agent(api.app)
-  await agent.post('/api/auth/register').send({ email, password: TEST_PASSWORD, name: 'Log Check', role: 'student' })
+  await agent
+    .post('/api/auth/register')
+    .send({ email, password: TEST_PASSWORD, name: 'Log Check', role: 'student' })
   const login = await agent.post('/api/auth/login').send({ email, password: TEST_PASSWORD })
-  const cookie = ([] as string[]).concat(login.headers['set-cookie'] ?? []).find((c) => c.startsWith(SESSION_COOKIE))!
+  const cookie = ([] as string[])
+    .concat(login.headers['set-cookie'] ?? [])
+    .find((c) => c.startsWith(SESSION_COOKIE))!
   const token = cookie.split(';')[0]!.split('=')[1]!
   await agent.get('/api/auth/me')
-  await agent.post('/api/auth/password-reset/confirm').send({ token: 'a-reset-token-that-is-long-enough', password: TEST_PASSWORD })
+  await agent
+    .post('/api/auth/password-reset/confirm')
+    .send({ token: 'a-reset-token-that-is-long-enough', password: TEST_PASSWORD })
 
   const log = lines.join('\n')
   expect(lines.length).toBeGreaterThanOrEqual(4) // the requests were logged at all

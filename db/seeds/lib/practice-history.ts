@@ -56,7 +56,13 @@ function isWeakSpot(instrument: DemoInstrument, string: number, fret: number) {
   return string === instrument.tuning.length - 2 && fret >= 5 && fret <= 9
 }
 
-function oneAttempt(input: HistoryInput, random: () => number, progress: number, sessionId: string, at: Date) {
+function oneAttempt(
+  input: HistoryInput,
+  random: () => number,
+  progress: number,
+  sessionId: string,
+  at: Date,
+) {
   const { instrument } = input
   const string = Math.floor(random() * instrument.tuning.length)
   const fret = Math.floor(random() * Math.min(instrument.frets, 12) + 1)
@@ -69,7 +75,8 @@ function oneAttempt(input: HistoryInput, random: () => number, progress: number,
   const drill = random() < 0.6 ? 'recall' : 'hunt'
   const wrong = expected + (random() < 0.5 ? 1 : -1)
   const answerPitch = correct ? expected : wrong
-  const answer = drill === 'recall' ? PITCH_CLASS_NAMES[answerPitch % 12]! : OCTAVE_NAMES(answerPitch)
+  const answer =
+    drill === 'recall' ? PITCH_CLASS_NAMES[answerPitch % 12]! : OCTAVE_NAMES(answerPitch)
   return {
     id: uuidFrom(random),
     user_id: input.userId,
