@@ -46,7 +46,11 @@ export async function newPage(browser: Browser, viewport = LAPTOP) {
 
 export async function screenshot(page: Page, name: string) {
   mkdirSync(SCREENSHOT_DIR, { recursive: true })
+  // From the top: a full-page capture of a scrolled page draws the fixed app bar mid-page.
+  const scrolled = await page.evaluate(() => window.scrollY)
+  if (scrolled) await page.evaluate(() => window.scrollTo(0, 0))
   await page.screenshot({ path: path.join(SCREENSHOT_DIR, `${name}.png`), fullPage: true })
+  if (scrolled) await page.evaluate((y) => window.scrollTo(0, y), scrolled)
 }
 
 /** Signs in through the sign-in form, as a person would. */
