@@ -4,13 +4,14 @@ import type { Knex } from 'knex'
 // few hundred small rows instead of a student's whole history (see DEVELOPERS.md, "Statistics").
 // instrument_key: the instrument id, NONE for attempts without one, ALL for every instrument.
 // drill: the drill id, or '*' for every drill.
-const NONE = "'00000000-0000-0000-0000-000000000000'::uuid"
-const ALL = "'ffffffff-ffff-ffff-ffff-ffffffffffff'::uuid"
-const RECENT = 50 // answers kept per place for "how you play now" (accuracy, median, p90)
+// The constants and the first steps are exported for later migrations that replace the function.
+export const NONE = "'00000000-0000-0000-0000-000000000000'::uuid"
+export const ALL = "'ffffffff-ffff-ffff-ffff-ffffffffffff'::uuid"
+export const RECENT = 50 // answers kept per place for "how you play now" (accuracy, median, p90)
 const IDLE_CAP_MS = 120_000 // a pause longer than this inside a session is not practice time
 
 // Each new attempt with its player's local day and the active time it adds to its session.
-const NEW_ATTEMPTS = `
+export const NEW_ATTEMPTS = `
   n as (
     select a.user_id, coalesce(a.instrument_id, ${NONE}) as ikey, a.drill, a.session_id,
       coalesce(a.string, -1)::smallint as string, coalesce(a.fret, -1)::smallint as fret,
@@ -20,10 +21,8 @@ const NEW_ATTEMPTS = `
     from new_rows a left join user_time_zones z on z.user_id = a.user_id
   )`
 
-const ROLLUP_FUNCTION = `
-create function progress_rollup() returns trigger language plpgsql as $fn$
-begin
-  with ${NEW_ATTEMPTS},
+// Each new attempt with the active time it adds (gaps capped), and the sessions' rows brought up to date.
+export const ACTIVE_TIME_AND_SESSIONS = `
   t as (
     select n.*, least(${IDLE_CAP_MS}, case
         when coalesce(n.prev_at, s.last_at) is null or n.created_at <= coalesce(n.prev_at, s.last_at)
@@ -41,7 +40,13 @@ begin
     on conflict (user_id, session_id) do update set
       first_at = least(s.first_at, excluded.first_at), last_at = greatest(s.last_at, excluded.last_at),
       attempts = s.attempts + excluded.attempts, active_ms = s.active_ms + excluded.active_ms
-  ),
+  ),`
+
+export const ROLLUP_FUNCTION = `
+create function progress_rollup() returns trigger language plpgsql as $fn$
+begin
+  with ${NEW_ATTEMPTS},
+${ACTIVE_TIME_AND_SESSIONS}
   days as (
     insert into progress_days as d
       (user_id, instrument_key, drill, day, attempts, correct, active_ms, recall_ms, first_at, last_at)

@@ -53,7 +53,7 @@ const toRow = (userId: string, a: AttemptInput) => ({
   correct: a.correct,
   response_ms: a.responseMs,
   created_at: a.createdAt,
-  detail: JSON.stringify(a.detail),
+  detail: a.detail,
   plan_item_id: a.planItemId,
 })
 
@@ -78,13 +78,20 @@ export async function assignedPlanItemIds(db: Db, userId: string, ids: string[])
   return new Set(rows.map((r) => r.id))
 }
 
-/** Inserts the attempts whose ids are new; ids already stored (by anyone) are left untouched. */
+const INSERTED_COLUMNS = Object.keys(toRow('', {} as AttemptInput)).join(', ')
+
+/**
+ * Inserts the attempts whose ids are new; ids already stored (by anyone) are left untouched. The
+ * batch travels as one JSON parameter (not one binding per field), which keeps a 200-answer batch a
+ * single small statement for PostgreSQL to plan and the API to build.
+ */
 export async function insertNewAttempts(db: Db, userId: string, attempts: AttemptInput[]) {
-  const rows: AttemptRow[] = await db('attempts')
-    .insert(attempts.map((a) => toRow(userId, a)))
-    .onConflict('id')
-    .ignore()
-    .returning('*')
+  const { rows } = await db.raw<{ rows: AttemptRow[] }>(
+    `insert into attempts (${INSERTED_COLUMNS})
+     select ${INSERTED_COLUMNS} from json_populate_recordset(null::attempts, ?::json)
+     on conflict (id) do nothing returning *`,
+    [JSON.stringify(attempts.map((a) => toRow(userId, a)))],
+  )
   return rows
 }
 

@@ -11,6 +11,10 @@ import * as repo from './attempts-repository'
 // are remembered so a batch with an unchanged zone costs no extra query.
 const knownZones = new Map<string, boolean>()
 const savedZones = new Map<string, string>()
+// An instrument never changes hands, so "this player owns it" stays true once read; one deleted since
+// is caught by the foreign key at insert time. Bounded: forgotten wholesale past the limit.
+const ownedInstruments = new Set<string>()
+const OWNED_LIMIT = 50_000
 
 async function usableTimeZone(ctx: AppContext, zone: string | undefined) {
   if (!zone) return null
@@ -48,6 +52,18 @@ async function keepAssignedPlanItems(
   return { ...batch, attempts }
 }
 
+/** Which of these instrument ids the player owns (ids seen before cost no query). */
+async function ownInstruments(ctx: AppContext, userId: string, ids: string[]) {
+  const key = (id: string) => `${userId}/${id}`
+  const unknown = ids.filter((id) => !ownedInstruments.has(key(id)))
+  if (unknown.length) {
+    if (ownedInstruments.size > OWNED_LIMIT) ownedInstruments.clear()
+    for (const id of await repo.ownedInstrumentIds(ctx.db, userId, unknown))
+      ownedInstruments.add(key(id))
+  }
+  return new Set(ids.filter((id) => ownedInstruments.has(key(id))))
+}
+
 /** A foreign-key violation on the instrument (deleted while the batch was on its way). */
 const isMissingInstrument = (e: unknown) =>
   (e as { code?: string; constraint?: string }).code === '23503' &&
@@ -69,7 +85,7 @@ export async function recordAttempts(
   const instrumentIds = [
     ...new Set(batch.attempts.flatMap((a) => (a.instrumentId ? [a.instrumentId] : []))),
   ]
-  assertOwnInstruments(batch, await repo.ownedInstrumentIds(ctx.db, user.id, instrumentIds))
+  assertOwnInstruments(batch, await ownInstruments(ctx, user.id, instrumentIds))
   const zone = await usableTimeZone(ctx, batch.timeZone)
   if (zone && savedZones.get(user.id) !== zone) {
     await repo.saveTimeZone(ctx.db, user.id, zone)

@@ -202,6 +202,23 @@ describe('who the attempts belong to', () => {
     expect(fieldsOf(res)).toEqual(['attempts.0.instrumentId'])
   })
 
+  it('when an instrument used before is deleted, then a later batch naming it gets 400 and nothing is stored', async () => {
+    const s = await student()
+    const created = await s.agent
+      .post('/api/instruments')
+      .send({ name: 'Spare bass', tuning: BASS, frets: 20, scaleLengthMm: 864 })
+    const spareId = created.body.instrument.id as string
+    expect((await post(s.agent, { attempts: [attempt(spareId)] })).status).toBe(201)
+    expect((await s.agent.delete(`/api/instruments/${spareId}`)).status).toBe(204)
+
+    const late = attempt(spareId)
+    const res = await post(s.agent, { attempts: [late] })
+
+    expect(res.status).toBe(400)
+    expect(res.body.error.message).toMatch(/no longer exists/)
+    expect(await countOf([late.id])).toBe(0)
+  })
+
   it('when an attempt has no instrument, then it is stored with none', async () => {
     const s = await student()
     const a = attempt(null)
