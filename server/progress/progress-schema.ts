@@ -180,6 +180,8 @@ export interface RosterStudent {
   weakestPositions: {
     instrumentId: string
     string: number
+    /** "low E", "A": the string's name on that instrument */
+    stringName: string
     fret: number
     pitch: number
     answers: number

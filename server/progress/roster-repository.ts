@@ -76,6 +76,8 @@ export interface WeakRow {
   answers: number
   recent_accuracy: number
   recent_median_ms: number | null
+  /** The instrument's open strings, null when it has been deleted since. */
+  tuning: number[] | null
 }
 
 /**
@@ -88,7 +90,7 @@ export async function weakestPlaces(
   limit: number,
 ): Promise<WeakRow[]> {
   const { rows } = await db.raw(
-    `select s.id as user_id, w.* from unnest(?::uuid[]) as s(id)
+    `select s.id as user_id, w.*, ins.tuning from unnest(?::uuid[]) as s(id)
      cross join lateral (
        select i.instrument_key, i.string, i.fret, i.pitch, cardinality(i.recent_correct) as answers,
          i.recent_accuracy, i.recent_median_ms
@@ -97,7 +99,8 @@ export async function weakestPlaces(
          and cardinality(i.recent_correct) >= 3
        order by i.recent_accuracy, i.recent_median_ms desc nulls last, i.string, i.fret
        limit ?
-     ) as w`,
+     ) as w
+     left join instruments ins on ins.id = w.instrument_key`,
     [studentIds, ALL_DRILLS, NO_INSTRUMENT, limit],
   )
   return rows

@@ -11,9 +11,10 @@
 //     medianRecallMsPrev7d: number | null, // the same for the 7 days before
 //     recallTrend: { change: number | null, direction: 'faster' | 'slower' | 'steady' | null },
 //                                        // change = this week's median / last week's − 1 (−0.1 = 10 % faster)
-//     weakestPositions: [{ instrumentId, string, fret, pitch, answers, accuracy, medianMs }] // ≤ 3,
+//     weakestPositions: [{ instrumentId, string, stringName, fret, pitch, answers, accuracy, medianMs }] // ≤ 3,
 //                                        // lowest recent accuracy first (latest 50 answers per place)
 //   }
+import { pitchClassName, stringNames } from '../../src/theory'
 import type { AppContext } from '../context'
 import type { RosterStudent } from './progress-schema'
 import {
@@ -54,9 +55,22 @@ function weekPart(w: WeekRow | undefined) {
   }
 }
 
+/** "low E", "A": the string's name on its instrument, told apart from a twin (see stringNames). */
+function stringNameOf(r: WeakRow): string {
+  const open = r.pitch - r.fret
+  try {
+    if (r.tuning)
+      return stringNames(r.tuning.map(Number), 'flat')[r.string] ?? pitchClassName(open, 'flat')
+  } catch {
+    // a tuning the theory core refuses: fall through to the open string's note
+  }
+  return pitchClassName(open, 'flat')
+}
+
 const toWeak = (r: WeakRow) => ({
   instrumentId: r.instrument_key,
   string: r.string,
+  stringName: stringNameOf(r),
   fret: r.fret,
   pitch: r.pitch,
   answers: r.answers,

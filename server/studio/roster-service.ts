@@ -1,5 +1,5 @@
 // The teacher's roster: each student's practice figures, plan progress, weak spots and a status.
-import { pitchClassName, pitchName } from '../../src/theory'
+import { pitchName } from '../../src/theory'
 import { assertCanReadStudent } from '../access/student-access'
 import type { AppContext } from '../context'
 import { listAssignmentRows } from '../plans/assignments-repository'
@@ -12,8 +12,7 @@ import type { RosterRow, RosterStatus, WeakSpot } from './studio-schema'
 const DAY_MS = 24 * 3600 * 1000
 
 function weakSpotOf(place: RosterStudent['weakestPositions'][number]): WeakSpot {
-  const open = place.pitch - place.fret
-  const label = `${pitchClassName(open, 'flat')} string, fret ${place.fret} (${pitchName(place.pitch, 'flat')})`
+  const label = `${place.stringName} string, fret ${place.fret} (${pitchName(place.pitch, 'flat')})`
   return {
     string: place.string,
     fret: place.fret,

@@ -512,6 +512,7 @@ describe('roster summary', () => {
     ])
     expect(a.weakestPositions[0]).toMatchObject({
       instrumentId: ada.instrumentId,
+      stringName: 'A', // string 1 of E1 A1 D2 G2
       answers: 5,
       accuracy: 0.8,
       medianMs: 1700,
@@ -526,6 +527,44 @@ describe('roster summary', () => {
       weakestPositions: [],
     })
     expect(b.recallTrend).toEqual({ change: null, direction: null })
+  })
+
+  it('when a guitarist is weak on both E strings, then the roster tells the low one from the high one', async () => {
+    const teacher = await practiser(app, 'teacher')
+    const guitarist = await practiser(app)
+    const [studio] = await api.ctx
+      .db('studios')
+      .insert({ teacher_id: teacher.user.id, name: 'Guitar studio' })
+      .returning('id')
+    await api.ctx
+      .db('studio_members')
+      .insert({ studio_id: studio.id, student_id: guitarist.user.id })
+    const tuning = [40, 45, 50, 55, 59, 64] // E2 A2 D3 G3 B3 E4, common practice
+    const guitar = await guitarist.agent
+      .post('/api/instruments')
+      .send({ name: 'Guitar', tuning, frets: 22, scaleLengthMm: 648 })
+    const day = utcDay(1)
+    // Fret 1 on string 0 (F2) and string 5 (F4): three misses each.
+    const misses = [0, 5].flatMap((string) =>
+      [0, 1, 2].map((i) => ({
+        string,
+        fret: 1,
+        correct: false,
+        ms: 3000,
+        at: at(day, `12:0${string}:0${i}`),
+      })),
+    )
+    await practise({ ...guitarist, instrumentId: guitar.body.instrument.id, tuning }, misses)
+
+    const res = await teacher.agent.get('/api/progress/roster-summary')
+
+    const names = res.body.students[0].weakestPositions.map(
+      (w: { string: number; stringName: string }) => [w.string, w.stringName],
+    )
+    expect(names).toEqual([
+      [0, 'low E'],
+      [5, 'high E'],
+    ])
   })
 
   it('when a teacher has no studio, then the roster is empty', async () => {
