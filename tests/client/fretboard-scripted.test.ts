@@ -100,6 +100,18 @@ describe('board export', () => {
     expect(svg.querySelectorAll('.fb-hit')).toHaveLength(4 * 6)
   })
 
+  it('carries the given @font-face rules in a style element, so a picture keeps the typeface', () => {
+    const { svg } = drawnBoard()
+    const css =
+      "@font-face{font-family:Roboto;font-weight:700;src:url(data:font/woff2;base64,AAAA) format('woff2')}"
+    const doc = new DOMParser().parseFromString(
+      boardSvgMarkup(svg, '#ffffff', css),
+      'image/svg+xml',
+    )
+    expect(doc.querySelector('style')?.textContent).toBe(css)
+    expect(doc.querySelectorAll('.fb-label').length).toBe(4 * 6)
+  })
+
   it('gives an SVG blob for the svg format', async () => {
     const { svg } = drawnBoard()
     const blob = await exportBoardImage(svg, { format: 'svg' })

@@ -102,6 +102,14 @@ describe('instruments', () => {
     )
     expect(png.readUInt32BE(16)).toBe(Math.round(boardWidth * 2))
     copyFileSync(file, path.join(SCREENSHOT_DIR, 'exported-board.png'))
+    // Export image → SVG: Roboto travels inside it (base64 of the WOFF2 signature "wOF2", W3C WOFF2)
+    const svgDownload = page.waitForEvent('download')
+    await page.getByRole('button', { name: 'Export image' }).click()
+    await page.getByText('SVG drawing').click()
+    const svgText = readFileSync((await (await svgDownload).path())!, 'utf8')
+    expect(svgText).toMatch(
+      /@font-face\{font-family:Roboto;[^}]*font-weight:700;src:url\(data:font\/woff2;base64,d09GMg/,
+    )
 
     await page.getByRole('button', { name: `Use ${created.name} for practice` }).click()
     await expect

@@ -1,6 +1,8 @@
 // Turns the drawn board into a stand-alone image (SVG, or PNG through a canvas): theme colours
 // resolved from the page and written onto each element, a background, interaction-only parts removed.
 import { SVG, type Svg } from '@svgdotjs/svg.js'
+import roboto400 from '@fontsource/roboto/files/roboto-latin-400-normal.woff2?url'
+import roboto700 from '@fontsource/roboto/files/roboto-latin-700-normal.woff2?url'
 
 export interface ExportOptions {
   format: 'svg' | 'png'
@@ -47,8 +49,49 @@ function surfaceColour(svgElement: SVGSVGElement): string {
   return value ? `rgb(${value})` : '#ffffff'
 }
 
-/** A copy of the board as SVG markup with everything it needs to look the same on its own. */
-export function boardSvgMarkup(svgElement: SVGSVGElement, background?: string): string {
+// An image drawn from SVG cannot reach the page's fonts: the board's two weights travel inside the
+// file (600 on the board resolves to 700, as on the page). Fetched from our own origin, once.
+const FONT_FACES: [weight: number, url: string][] = [
+  [400, roboto400],
+  [700, roboto700],
+]
+let fontCss: Promise<string> | null = null
+
+async function dataUrl(url: string): Promise<string> {
+  const blob = await (await fetch(url)).blob()
+  return new Promise((resolve, reject) => {
+    const reader = new FileReader()
+    reader.onload = () => resolve(String(reader.result).replace(/^data:[^;]*;/, 'data:font/woff2;'))
+    reader.onerror = () => reject(reader.error)
+    reader.readAsDataURL(blob)
+  })
+}
+
+/** @font-face rules for Roboto with the fonts inlined ('' when they cannot be read: system font). */
+export function embeddedFontCss(): Promise<string> {
+  fontCss ??= Promise.all(
+    FONT_FACES.map(
+      async ([weight, url]) =>
+        `@font-face{font-family:Roboto;font-style:normal;font-weight:${weight};src:url(${await dataUrl(url)}) format('woff2')}`,
+    ),
+  )
+    .then((rules) => rules.join(''))
+    .catch(() => {
+      fontCss = null
+      return ''
+    })
+  return fontCss
+}
+
+/**
+ * A copy of the board as SVG markup with everything it needs to look the same on its own; `fontCss`
+ * (see embeddedFontCss) goes into a style element so the labels keep their typeface.
+ */
+export function boardSvgMarkup(
+  svgElement: SVGSVGElement,
+  background?: string,
+  fontCss = '',
+): string {
   const copy = svgElement.cloneNode(true) as SVGSVGElement
   inlineStyles(svgElement, copy)
   copy.querySelectorAll(INTERACTIVE_ONLY).forEach((element) => element.remove())
@@ -59,6 +102,7 @@ export function boardSvgMarkup(svgElement: SVGSVGElement, background?: string): 
     .rect(width, height)
     .fill(background ?? surfaceColour(svgElement))
     .back()
+  if (fontCss) board.element('style').words(fontCss).back()
   return board.svg()
 }
 
@@ -90,7 +134,7 @@ export async function exportBoardImage(
   svgElement: SVGSVGElement,
   options: ExportOptions,
 ): Promise<Blob> {
-  const markup = boardSvgMarkup(svgElement, options.background)
+  const markup = boardSvgMarkup(svgElement, options.background, await embeddedFontCss())
   if (options.format === 'svg') return new Blob([markup], { type: 'image/svg+xml' })
   const [, , width = 0, height = 0] = (svgElement.getAttribute('viewBox') ?? '')
     .split(' ')
