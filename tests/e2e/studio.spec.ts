@@ -57,10 +57,14 @@ async function invitationLink(email: string): Promise<string> {
 /** Answers as a drill view would send them to POST /api/attempts (three right, one wrong, fast). */
 async function practise(page: Page, planItemId: string) {
   const sessionId = randomUUID()
+  // A new account starts with a 4-string bass in standard tuning (E1 A1 D2 G2).
+  const mine = await (await page.request.get('/api/instruments')).json()
+  const bass = mine.instruments[0] as { id: string; tuning: number[] }
+  expect(bass.tuning).toEqual([28, 33, 38, 43])
   const attempts = [true, true, false, true].map((correct, i) => ({
     id: randomUUID(),
-    instrumentId: null,
-    tuning: [28, 33, 38, 43],
+    instrumentId: bass.id,
+    tuning: bass.tuning,
     drill: 'recall',
     sessionId,
     string: 1,
@@ -164,9 +168,24 @@ describe('teacher studio', () => {
     await student
       .getByTestId(`recording-file-${planItemId}`)
       .setInputFiles({ name: 'take-1.wav', mimeType: 'audio/wav', buffer: wavFile(4000) })
-    await expect
-      .poll(() => student.getByTestId(`recordings-${planItemId}`).locator('audio').count())
-      .toBe(1)
+    const recordings = student.getByTestId(`recordings-${planItemId}`)
+    await expect.poll(() => recordings.locator('audio').count()).toBe(1)
+    // A take recorded in the browser (MediaRecorder on Chromium's synthetic microphone): stored as
+    // WebM, whose files begin with the EBML magic 1A 45 DF A3 (Matroska/WebM specification).
+    await recordings.getByRole('button', { name: /^Record / }).click()
+    await expect.poll(() => recordings.getByRole('button', { name: /^Stop / }).count()).toBe(1)
+    await student.waitForTimeout(1500)
+    await recordings.getByRole('button', { name: /^Stop / }).click()
+    await expect.poll(() => recordings.locator('audio').count()).toBe(2)
+    const sources = await recordings
+      .locator('audio')
+      .evaluateAll((players) => players.map((p) => p.getAttribute('src') ?? ''))
+    const heads = await Promise.all(
+      sources.map(async (src) => [
+        ...(await (await student.request.get(src)).body()).subarray(0, 4),
+      ]),
+    )
+    expect(heads).toContainEqual([0x1a, 0x45, 0xdf, 0xa3])
   })
 
   it('the teacher sees the target met on the student page and leaves a comment', async () => {
@@ -177,9 +196,9 @@ describe('teacher studio', () => {
     await expect.poll(() => row.textContent()).toContain('Target met')
     expect(await row.textContent()).toContain('4 of 4 answers · 75 % right')
     const audio = row.locator('audio')
-    expect(await audio.count()).toBe(1)
-    // The teacher's browser can fetch the take: the player's request gets the audio back.
-    const src = (await audio.getAttribute('src')) ?? ''
+    expect(await audio.count()).toBe(2) // the uploaded take and the one recorded in the browser
+    // The teacher's browser can fetch a take: the player's request gets the audio back.
+    const src = (await audio.first().getAttribute('src')) ?? ''
     expect((await teacher.request.get(src, { headers: { range: 'bytes=0-3' } })).status()).toBe(206)
     await teacher.getByText('Comments (0)').click()
     await teacher

@@ -19,6 +19,9 @@ const CHROMIUM_ARGS = [
   '--disable-component-update',
   '--disable-sync',
   '--autoplay-policy=no-user-gesture-required',
+  // A synthetic microphone (a beep), allowed without a prompt: recording in the browser is tested.
+  '--use-fake-device-for-media-stream',
+  '--use-fake-ui-for-media-stream',
 ]
 
 export function launchBrowser(): Promise<Browser> {
