@@ -61,3 +61,20 @@ export function nearestSample(
 export function playbackFrequency(pitch: number, referenceHz: number): number {
   return pitchToFrequency(pitch, referenceHz)
 }
+
+/** Where a sample is trimmed: this far before its onset, so the pluck's attack is kept whole. */
+export const ONSET_PREROLL_S = 0.002
+
+/**
+ * The index of the first sample louder than `fraction` of the peak: where the note starts. MP3
+ * encoding puts ~25 ms of silence (encoder delay) in front of every note and the SoundFont's attack
+ * adds a few ms more; trimming to the onset makes a note sound when it is asked for.
+ * @example onsetIndex(new Float32Array([0, 0.001, 0.5, -1])) // 2
+ */
+export function onsetIndex(samples: Float32Array, fraction = 0.01): number {
+  let peak = 0
+  for (const v of samples) peak = Math.max(peak, Math.abs(v))
+  if (peak === 0) return 0
+  const index = samples.findIndex((v) => Math.abs(v) > peak * fraction)
+  return Math.max(0, index)
+}

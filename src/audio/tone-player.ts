@@ -7,6 +7,8 @@ import type { PitchPlayer } from './pitch-player'
 import {
   MAX_REPITCH,
   nearestSample,
+  ONSET_PREROLL_S,
+  onsetIndex,
   playbackFrequency,
   SAMPLE_BASE_URL,
   SAMPLE_SETS,
@@ -32,15 +34,27 @@ function createClick(output: Tone.ToneAudioNode) {
   }).connect(output)
 }
 
+/** The sample from just before its onset (see onsetIndex): no encoder silence in front of it. */
+function trimmed(buffer: Tone.ToneAudioBuffer): Tone.ToneAudioBuffer {
+  const onsetS = onsetIndex(buffer.getChannelData(0)) / buffer.sampleRate
+  const startS = Math.max(0, onsetS - ONSET_PREROLL_S)
+  return startS > 0 ? buffer.slice(startS) : buffer
+}
+
 function loadSampler(voice: SampleVoice, output: Tone.ToneAudioNode): Promise<Tone.Sampler> {
-  return new Promise((resolve, reject) => {
-    const sampler: Tone.Sampler = new Tone.Sampler({
-      urls: sampleUrls(voice),
+  const urls = sampleUrls(voice)
+  return new Promise<Tone.ToneAudioBuffers>((resolve, reject) => {
+    const buffers: Tone.ToneAudioBuffers = new Tone.ToneAudioBuffers({
+      urls,
       baseUrl: `${SAMPLE_BASE_URL}/${voice}/`,
-      release: 0.25,
-      onload: () => resolve(sampler),
+      onload: () => resolve(buffers),
       onerror: (error) => reject(error),
-    }).connect(output)
+    })
+  }).then((buffers) => {
+    const notes = Object.fromEntries(
+      Object.keys(urls).map((pitch) => [pitch, trimmed(buffers.get(pitch))]),
+    )
+    return new Tone.Sampler({ urls: notes, release: 0.25 }).connect(output)
   })
 }
 

@@ -3,6 +3,7 @@ import { describe, expect, it } from 'vitest'
 import {
   MAX_REPITCH,
   nearestSample,
+  onsetIndex,
   playbackFrequency,
   SAMPLE_SETS,
   sampleUrls,
@@ -70,5 +71,23 @@ describe('voices', () => {
     expect(BASS.at(-1)).toBeGreaterThanOrEqual(67)
     expect(SAMPLE_SETS.guitar.pitches[0]).toBeLessThanOrEqual(35)
     expect(SAMPLE_SETS.guitar.pitches.at(-1)! + 2).toBeGreaterThanOrEqual(88)
+  })
+})
+
+describe('onsetIndex', () => {
+  it('finds the first sample above 1 % of the peak, after 25 ms of encoder silence at 44.1 kHz', () => {
+    // 1,102 zero samples (25 ms × 44.1 kHz = 1,102.5) and low noise, then a decaying pluck.
+    const samples = new Float32Array(4000)
+    for (let i = 0; i < 1102; i++) samples[i] = i % 2 ? 0.004 : -0.004 // 0.4 % of the peak
+    for (let i = 1102; i < 4000; i++) samples[i] = Math.sin(i / 5) * Math.exp(-(i - 1102) / 800)
+    const peak = Math.max(...samples.map(Math.abs))
+    const expected = samples.findIndex((v, i) => i >= 1102 && Math.abs(v) > peak / 100)
+    expect(onsetIndex(samples)).toBe(expected)
+    expect(expected).toBeGreaterThanOrEqual(1102)
+    expect(expected).toBeLessThan(1110)
+  })
+
+  it('keeps a silent buffer whole', () => {
+    expect(onsetIndex(new Float32Array(100))).toBe(0)
   })
 })
