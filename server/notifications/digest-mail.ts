@@ -42,10 +42,12 @@ export function digestMail(
   teacher: { email: string; name: string },
   rows: RosterRow[],
   week: string,
+  onRequest = false,
 ): OutgoingMail {
   return {
     to: teacher.email,
-    subject: `Your studio this week (${week})`,
+    // A digest an admin sends now says so, so a second one in a week is not a puzzle.
+    subject: `Your studio this week (${week})${onRequest ? ', sent on request' : ''}`,
     text: [
       `Hello ${teacher.name},`,
       '',

@@ -58,7 +58,7 @@ export async function sendWeeklyDigests(
   for (const teacher of await studioTeachers(ctx.db)) {
     const rows = await rosterRows(ctx, teacher.id, now)
     if (!rows.length) continue
-    const mail = digestMail(ctx.config, teacher, rows, week)
+    const mail = digestMail(ctx.config, teacher, rows, week, options.force)
     const key = options.force
       ? `${teacher.id}:${week}:now:${now.toISOString()}`
       : `${teacher.id}:${week}`
