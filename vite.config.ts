@@ -38,6 +38,9 @@ export default defineConfig({
           include: ['tests/client/**/*.test.ts'],
           setupFiles: ['tests/helpers/client-setup.ts'],
           server: { deps: { inline: ['vuetify'] } },
+          // A first mount of a drill view transforms Vuetify and the theory core on demand; on two
+          // cores shared with the server and browser tests that has taken over 5 s.
+          testTimeout: 20_000,
         },
       },
       {

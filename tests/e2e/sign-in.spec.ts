@@ -81,7 +81,8 @@ describe('signing in', () => {
   it('an unknown address shows the 404 page', async () => {
     const { page, context } = await newPage(browser, LAPTOP)
     await page.goto('/no/such/page')
-    expect(await page.textContent('body')).toContain('This page is off the neck')
+    // The page is a lazily loaded route: it may appear a moment after the load event.
+    await expect.poll(() => page.textContent('body')).toContain('This page is off the neck')
     await context.close()
   })
 })
