@@ -3,38 +3,11 @@ import { flushPromises, mount } from '@vue/test-utils'
 import { createPinia, setActivePinia } from 'pinia'
 import { afterEach, describe, expect, it, vi } from 'vitest'
 import { defineComponent, h, nextTick } from 'vue'
-import { getPitchPlayer, setPitchPlayer, useSound, type PitchPlayer } from '../../src/audio'
+import { getPitchPlayer, setPitchPlayer, useSound } from '../../src/audio'
 import { createLazyPlayer } from '../../src/audio/lazy-player'
 import { useInstrumentStore } from '../../src/stores/instruments'
 import type { Instrument } from '../../src/api/instruments'
-
-function fakePlayer() {
-  const calls: [string, ...unknown[]][] = []
-  const record =
-    (name: string) =>
-    (...args: unknown[]) =>
-      void calls.push([name, ...args])
-  const player: PitchPlayer = {
-    start: async () => void calls.push(['start']),
-    play: record('play'),
-    playSequence: record('playSequence'),
-    startClick: record('startClick'),
-    stopClick: record('stopClick'),
-    setVolume: record('setVolume'),
-    setReferenceHz: record('setReferenceHz'),
-    setTuning: record('setTuning'),
-    voice: 'synth',
-  }
-  return {
-    player,
-    calls,
-    last: (name: string) =>
-      calls
-        .filter(([n]) => n === name)
-        .at(-1)
-        ?.slice(1),
-  }
-}
+import { fakePlayer } from './drill-test-kit'
 
 const BASS: Instrument = {
   id: '00000000-0000-4000-8000-000000000001',

@@ -36,11 +36,8 @@ export function fakePlayer() {
     setTuning: record('setTuning'),
     voice: 'synth',
   }
-  return {
-    player,
-    calls,
-    named: (name: string) => calls.filter(([n]) => n === name).map((call) => call.slice(1)),
-  }
+  const named = (name: string) => calls.filter(([n]) => n === name).map((call) => call.slice(1))
+  return { player, calls, named, last: (name: string) => named(name).at(-1) }
 }
 
 const json = (body: unknown, status = 200) =>

@@ -10,7 +10,7 @@ import { locateMarks } from '../engine/locate-marks'
 import { saveSettings } from '../engine/remembered-settings'
 import { limitsOf } from '../engine/session'
 import { useDrillNeck } from '../engine/useDrillNeck'
-import { useDrillSession } from '../engine/useDrillSession'
+import { attemptContext, useDrillSession } from '../engine/useDrillSession'
 import { useDrillSettings } from '../engine/useDrillSettings'
 import { useDrillSound } from '../engine/useDrillSound'
 import { usePlanItem } from '../engine/usePlanItem'
@@ -55,11 +55,7 @@ export function useWindowCycle() {
   const session = useDrillSession<CycleQuestion, PickedCell>({
     drill: 'cycle',
     grader: () => cycleGrader(neck.value),
-    context: () => ({
-      instrumentId: neck.value.instrumentId,
-      tuning: neck.value.tuning,
-      planItemId: plan.planItemId.value,
-    }),
+    context: attemptContext(neck, plan),
     autoAdvanceMs: 400,
   })
   const starting = ref(false)

@@ -1,13 +1,22 @@
 // Wires the pure session engine to Vue: the clock (performance.now()), the time limit, automatic
 // moving on after a right answer, and recording every counted answer through the attempts store.
-import { computed, onBeforeUnmount, ref, shallowRef } from 'vue'
+import { computed, onBeforeUnmount, ref, shallowRef, type Ref } from 'vue'
 import type { DrillId } from '../drill-settings'
 import { useBreakReminder } from '../../composables/useBreakReminder'
 import { useAttemptsStore } from '../../stores/attempts'
 import * as engine from './session'
 import { retryQuestions, summarize } from './summary'
 import type { AnswerRecord, DrillGrader, DrillQuestion } from './types'
+import type { DrillNeck } from './useDrillNeck'
 import { toAttempt, type AttemptContext } from './to-attempt'
+
+/** What every drill records with an answer: the instrument of the moment and the plan item, if any. */
+export const attemptContext =
+  (neck: Ref<DrillNeck>, plan: { planItemId: Ref<string | null> }) => (): AttemptContext => ({
+    instrumentId: neck.value.instrumentId,
+    tuning: neck.value.tuning,
+    planItemId: plan.planItemId.value,
+  })
 
 export interface DrillSessionOptions<Q extends DrillQuestion, A> {
   drill: DrillId

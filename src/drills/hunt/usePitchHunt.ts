@@ -9,7 +9,7 @@ import { locateMarks } from '../engine/locate-marks'
 import { saveSettings } from '../engine/remembered-settings'
 import { limitsOf } from '../engine/session'
 import { useDrillNeck } from '../engine/useDrillNeck'
-import { useDrillSession } from '../engine/useDrillSession'
+import { attemptContext, useDrillSession } from '../engine/useDrillSession'
 import { useDrillSettings } from '../engine/useDrillSettings'
 import { useDrillSound } from '../engine/useDrillSound'
 import { useFocus } from '../engine/useFocus'
@@ -35,11 +35,7 @@ export function usePitchHunt() {
   const session = useDrillSession<HuntQuestion, PickedCell>({
     drill: 'hunt',
     grader: () => huntGrader(neck.value, settings.value.findAll),
-    context: () => ({
-      instrumentId: neck.value.instrumentId,
-      tuning: neck.value.tuning,
-      planItemId: plan.planItemId.value,
-    }),
+    context: attemptContext(neck, plan),
     autoAdvanceMs: 900,
     onQuestion: (question) => sound.play(question.expectedPitch),
   })

@@ -8,7 +8,7 @@ import { useFrameProps } from '../engine/frame-props'
 import { saveSettings } from '../engine/remembered-settings'
 import { limitsOf } from '../engine/session'
 import { useDrillNeck, type DrillNeck } from '../engine/useDrillNeck'
-import { useDrillSession } from '../engine/useDrillSession'
+import { attemptContext, useDrillSession } from '../engine/useDrillSession'
 import { useDrillSettings } from '../engine/useDrillSettings'
 import { useFocus } from '../engine/useFocus'
 import { usePlanItem } from '../engine/usePlanItem'
@@ -64,11 +64,7 @@ export function useNeckRecall() {
         keyLabel: keyLabel.value,
         accidentals: neck.value.accidentals,
       }),
-    context: () => ({
-      instrumentId: neck.value.instrumentId,
-      tuning: neck.value.tuning,
-      planItemId: plan.planItemId.value,
-    }),
+    context: attemptContext(neck, plan),
   })
   const starting = ref(false)
 

@@ -10,7 +10,7 @@ import { locateMarks } from '../engine/locate-marks'
 import { saveSettings } from '../engine/remembered-settings'
 import { limitsOf } from '../engine/session'
 import { useDrillNeck } from '../engine/useDrillNeck'
-import { useDrillSession } from '../engine/useDrillSession'
+import { attemptContext, useDrillSession } from '../engine/useDrillSession'
 import { useDrillSettings } from '../engine/useDrillSettings'
 import { useDrillSound } from '../engine/useDrillSound'
 import { useFocus } from '../engine/useFocus'
@@ -100,11 +100,7 @@ export function useRangeRuns() {
   const session = useDrillSession<RunsQuestion, PickedCell>({
     drill: 'runs',
     grader: () => runsGrader(neck.value),
-    context: () => ({
-      instrumentId: neck.value.instrumentId,
-      tuning: neck.value.tuning,
-      planItemId: plan.planItemId.value,
-    }),
+    context: attemptContext(neck, plan),
     autoAdvanceMs: 250,
   })
   const starting = ref(false)

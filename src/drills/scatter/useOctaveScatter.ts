@@ -10,7 +10,7 @@ import { locateMarks } from '../engine/locate-marks'
 import { saveSettings } from '../engine/remembered-settings'
 import { limitsOf } from '../engine/session'
 import { useDrillNeck } from '../engine/useDrillNeck'
-import { useDrillSession } from '../engine/useDrillSession'
+import { attemptContext, useDrillSession } from '../engine/useDrillSession'
 import { useDrillSettings } from '../engine/useDrillSettings'
 import { useDrillSound } from '../engine/useDrillSound'
 import { useFocus } from '../engine/useFocus'
@@ -46,11 +46,7 @@ export function useOctaveScatter() {
   const session = useDrillSession<ScatterQuestion, PickedCell>({
     drill: 'scatter',
     grader: () => scatterGrader(neck.value),
-    context: () => ({
-      instrumentId: neck.value.instrumentId,
-      tuning: neck.value.tuning,
-      planItemId: plan.planItemId.value,
-    }),
+    context: attemptContext(neck, plan),
     autoAdvanceMs: 500,
   })
   const starting = ref(false)
