@@ -28,6 +28,8 @@ export default defineConfig({
           // Pure modules: one module graph for all files saves re-importing tonal per file.
           isolate: false,
           include: ['src/**/*.test.ts', 'tests/unit/**/*.test.ts'],
+          // Property-based theory checks run hundreds of cases; a busy machine must not fail them.
+          testTimeout: 30_000,
         },
       },
       {

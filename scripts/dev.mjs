@@ -3,7 +3,7 @@
 // the API in watch mode on :${API_PORT:-3000}; Vite proxies /api to it.
 import { ensureDependencies, prepareDatabase } from './lib/setup.mjs'
 import { log, startService, stopService } from './lib/proc.mjs'
-import { APP_DATABASE, databaseUrl } from './lib/paths.mjs'
+import { APP_DATABASE, DATA_DIR, databaseUrl, localSecret } from './lib/paths.mjs'
 
 const API_PORT = Number(process.env.API_PORT ?? 3000)
 const VITE_PORT = Number(process.env.VITE_PORT ?? 5173)
@@ -16,6 +16,8 @@ await prepareDatabase(APP_DATABASE)
 const env = {
   ...process.env,
   DATABASE_URL: databaseUrl(APP_DATABASE),
+  JWT_SECRET: process.env.JWT_SECRET ?? localSecret('jwt'),
+  AMBITUS_DATA_DIR: DATA_DIR,
   PORT: String(API_PORT),
   API_PORT: String(API_PORT),
   APP_URL: process.env.APP_URL ?? `http://127.0.0.1:${VITE_PORT}`,

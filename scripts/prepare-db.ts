@@ -2,11 +2,11 @@
 // Usage: node --import tsx scripts/prepare-db.ts [--no-seed]   (DATABASE_URL selects the database)
 import knex from 'knex'
 import path from 'node:path'
-import { knexConfig } from '../db/knexfile'
-import { ROOT } from './lib/paths.mjs'
+import { knexConfig } from '../db/knex-config'
+import { databaseUrl, ROOT } from './lib/paths.mjs'
 
 const withSeed = !process.argv.includes('--no-seed')
-const db = knex(knexConfig(process.env.DATABASE_URL))
+const db = knex(knexConfig(process.env.DATABASE_URL ?? databaseUrl()))
 try {
   const [, applied] = (await db.migrate.latest()) as [number, string[]]
   if (applied.length) console.log(`[db] applied ${applied.length} migration(s)`)

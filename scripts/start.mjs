@@ -3,7 +3,7 @@
 // SMTP sink and the app on http://127.0.0.1:${PORT:-3000}. Ctrl-C stops everything cleanly.
 import { ensureClientBuild, ensureDependencies, prepareDatabase } from './lib/setup.mjs'
 import { log, startService, stopService } from './lib/proc.mjs'
-import { APP_DATABASE, databaseUrl } from './lib/paths.mjs'
+import { APP_DATABASE, DATA_DIR, databaseUrl, localSecret } from './lib/paths.mjs'
 
 const PORT = Number(process.env.PORT ?? 3000)
 const SMTP_PORT = Number(process.env.SMTP_PORT ?? 2525)
@@ -36,6 +36,8 @@ try {
 const env = {
   ...process.env,
   DATABASE_URL: databaseUrl(APP_DATABASE),
+  JWT_SECRET: process.env.JWT_SECRET ?? localSecret('jwt'),
+  AMBITUS_DATA_DIR: DATA_DIR,
   PORT: String(PORT),
   SMTP_PORT: String(SMTP_PORT),
 }

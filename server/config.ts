@@ -1,19 +1,24 @@
-// Server configuration, read from the environment once and validated at start-up.
+// Server configuration, read from the environment once and validated at start-up. The launchers
+// (npm start, npm run dev, the tests) put the local database URL and session secret there.
 import path from 'node:path'
+import { fileURLToPath } from 'node:url'
 import { z } from 'zod'
-import { DATA_DIR, ROOT, databaseUrl, localSecret } from '../scripts/lib/paths.mjs'
+
+const ROOT = path.resolve(path.dirname(fileURLToPath(import.meta.url)), '..')
 
 const ConfigSchema = z.object({
   host: z.string().default('127.0.0.1'),
   port: z.coerce.number().int().min(0).max(65535).default(3000),
-  databaseUrl: z.string().min(1),
-  jwtSecret: z.string().min(32, 'JWT_SECRET must be at least 32 characters'),
+  databaseUrl: z.string('DATABASE_URL is required (npm start and npm run dev set it).').min(1),
+  jwtSecret: z
+    .string('JWT_SECRET is required (npm start and npm run dev set it).')
+    .min(32, 'JWT_SECRET must be at least 32 characters'),
   appUrl: z.url().optional(),
   smtpHost: z.string().default('127.0.0.1'),
   smtpPort: z.coerce.number().int().min(1).max(65535).default(2525),
   mailFrom: z.string().default('Ambitus <no-reply@ambitus.test>'),
   clientDist: z.string().default(path.join(ROOT, 'dist')),
-  dataDir: z.string().default(DATA_DIR),
+  dataDir: z.string().default(path.join(ROOT, '.data')),
   logLevel: z.enum(['fatal', 'error', 'warn', 'info', 'debug', 'trace', 'silent']).default('info'),
   bcryptCost: z.coerce.number().int().min(12).max(15).default(12),
   loginAttemptsPer15Min: z.coerce.number().int().min(1).default(10),
@@ -30,8 +35,8 @@ export function loadConfig(
   const parsed = ConfigSchema.safeParse({
     host: env.HOST,
     port: env.PORT,
-    databaseUrl: env.DATABASE_URL ?? databaseUrl(),
-    jwtSecret: env.JWT_SECRET ?? localSecret('jwt'),
+    databaseUrl: env.DATABASE_URL,
+    jwtSecret: env.JWT_SECRET,
     appUrl: env.APP_URL || undefined,
     smtpHost: env.SMTP_HOST,
     smtpPort: env.SMTP_PORT,

@@ -1,6 +1,6 @@
 /// <reference types="vite/client" />
 import 'vue-router'
-import type { Role } from '../server/users/users-schema'
+import type { Role } from './contract/users'
 
 declare module 'vue-router' {
   interface RouteMeta {

@@ -1,7 +1,7 @@
 // Demo practice plans for the Cedar Hollow studio: two starter plans assigned to the students, some
 // of Noor's recent answers counted toward the first, and a comment from Marta. Runs once.
 import type { Knex } from 'knex'
-import { STARTER_PLANS } from '../../server/plans/starter-plans'
+import { STARTER_PLANS } from '../../src/contract/starter-plans'
 
 const DAY_MS = 24 * 3600 * 1000
 

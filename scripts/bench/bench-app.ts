@@ -3,7 +3,7 @@
 import type { AddressInfo } from 'node:net'
 import type { Server } from 'node:http'
 import knex from 'knex'
-import { knexConfig } from '../../db/knexfile'
+import { knexConfig } from '../../db/knex-config'
 import { createApp } from '../../server/app'
 import { signSession, SESSION_COOKIE } from '../../server/auth/session-token'
 import { loadConfig } from '../../server/config'
@@ -12,7 +12,7 @@ import { createLogger } from '../../server/lib/logger'
 import { createMailer } from '../../server/lib/mail'
 import { findUserById } from '../../server/users/users-repository'
 import { createDatabase, dropDatabase, startCluster } from '../db.mjs'
-import { databaseUrl } from '../lib/paths.mjs'
+import { databaseUrl, localSecret } from '../lib/paths.mjs'
 
 export const BENCH_DATABASE = process.env.BENCH_DATABASE ?? 'ambitus_bench'
 
@@ -39,6 +39,7 @@ export interface BenchApp {
 export async function startBenchApp(databaseUrl: string, poolMax = 10): Promise<BenchApp> {
   const config = loadConfig(process.env, {
     databaseUrl,
+    jwtSecret: localSecret('jwt'),
     logLevel: 'silent',
     clientDist: '/nonexistent',
   })

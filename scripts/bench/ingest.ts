@@ -6,10 +6,11 @@ import { availableParallelism, loadavg } from 'node:os'
 import { randomUUID } from 'node:crypto'
 import autocannon from 'autocannon'
 import knex from 'knex'
-import { knexConfig } from '../../db/knexfile'
+import { knexConfig } from '../../db/knex-config'
 import { signSession, SESSION_COOKIE } from '../../server/auth/session-token'
 import { loadConfig } from '../../server/config'
 import { findUserById } from '../../server/users/users-repository'
+import { localSecret } from '../lib/paths.mjs'
 import { freePort, startService, stopService } from '../lib/proc.mjs'
 import { BENCH_DATABASE, freshBenchDatabase } from './bench-app'
 import { BASS, createBass, createPlayer } from './bench-seed'
@@ -138,7 +139,7 @@ async function rawRun(url: string, players: Player[], table = 'attempts') {
 }
 
 const url = await freshBenchDatabase(`${BENCH_DATABASE}_ingest`)
-const config = loadConfig({ ...process.env, DATABASE_URL: url })
+const config = loadConfig({ ...process.env, DATABASE_URL: url, JWT_SECRET: localSecret('jwt') })
 const db = knex(knexConfig(url))
 const players: Player[] = []
 for (let i = 0; i < PLAYERS; i++) {
@@ -157,6 +158,7 @@ const port = await freePort()
 const env = {
   ...process.env,
   DATABASE_URL: url,
+  JWT_SECRET: config.jwtSecret,
   PORT: String(port),
   LOG_LEVEL: 'silent',
   SMTP_PORT: String(await freePort()),

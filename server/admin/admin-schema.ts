@@ -12,15 +12,4 @@ export const MailIdParamsSchema = z.object({
   id: z.coerce.number().int().positive('Not a valid message id.'),
 })
 
-export interface MailSummary {
-  id: number
-  sender: string
-  recipients: string[]
-  subject: string
-  receivedAt: string
-}
-
-export interface MailMessage extends MailSummary {
-  text: string
-  html: string | null
-}
+export type { MailMessage, MailSummary } from '../../src/contract/mail-log'

@@ -1,6 +1,7 @@
 // Reads the mail captured by the local SMTP sink.
 import type { Db } from '../lib/db'
-import type { MailListQuery, MailMessage, MailSummary } from './admin-schema'
+import type { MailListQuery } from './admin-schema'
+import type { MailMessage, MailSummary } from '../../src/contract/mail-log'
 
 interface MailRow {
   id: string

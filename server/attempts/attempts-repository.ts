@@ -1,6 +1,6 @@
 // attempts table access: idempotent inserts, instrument ownership, the player's time zone.
 import type { Db } from '../lib/db'
-import type { AttemptInput, StoredAttempt } from './attempts-schema'
+import type { AttemptInput, StoredAttempt } from '../../src/contract/attempts'
 
 export interface AttemptRow {
   id: string

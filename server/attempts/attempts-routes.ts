@@ -3,7 +3,7 @@ import { Router } from 'express'
 import { requireAuth } from '../auth/auth-middleware'
 import type { AppContext } from '../context'
 import { parse } from '../lib/validate'
-import { AttemptBatchSchema } from './attempts-schema'
+import { AttemptBatchSchema } from '../../src/contract/attempts'
 import { recordAttempts } from './attempts-service'
 
 export function attemptsRoutes(ctx: AppContext): Router {

@@ -4,7 +4,7 @@ import type { AppContext } from '../context'
 import { badRequest, type FieldErrors } from '../lib/errors'
 import { reviewStoredAttempts } from '../focus/focus-service'
 import type { PublicUser } from '../users/users-schema'
-import type { AttemptBatch, AttemptBatchResult } from './attempts-schema'
+import type { AttemptBatch, AttemptBatchResult } from '../../src/contract/attempts'
 import * as repo from './attempts-repository'
 
 // PostgreSQL's list of zones is fixed for the life of the process; zones already saved per player

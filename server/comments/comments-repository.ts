@@ -1,6 +1,6 @@
 // The plan_comments table.
 import type { Db } from '../lib/db'
-import type { PlanComment } from './comments-schema'
+import type { PlanComment } from '../../src/contract/assignments'
 
 interface CommentRow {
   id: string

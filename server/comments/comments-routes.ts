@@ -3,11 +3,8 @@ import { Router } from 'express'
 import { requireAuth } from '../auth/auth-middleware'
 import type { AppContext } from '../context'
 import { parse, parseRequest } from '../lib/validate'
-import {
-  AssignmentIdParamsSchema,
-  CommentIdParamsSchema,
-  CommentInputSchema,
-} from './comments-schema'
+import { AssignmentIdParamsSchema, CommentIdParamsSchema } from './comments-schema'
+import { CommentInputSchema } from '../../src/contract/assignments'
 import { postComment, removeComment, threadOf } from './comments-service'
 
 export function commentRoutes(ctx: AppContext): Router {

@@ -1,21 +1,8 @@
 // Which keys and hand regions hold the player's weak places, so Range Runs, Octave Scatter and
 // Window Cycle can prefer them. Pure.
 import { scalePitchClasses, scalePitchNames, TONICS } from '../../src/theory'
+import type { KeyFocus, RegionFocus } from '../../src/contract/focus'
 import type { ScoredCandidate } from './focus-types'
-
-export interface KeyFocus {
-  tonic: string
-  scale: string
-  score: number
-  reason: string
-}
-
-export interface RegionFocus {
-  lowFret: number
-  highFret: number
-  score: number
-  reason: string
-}
 
 /** A place counts as weak when its score is in the top fifth of the board (and above 0.3). */
 function weakThreshold(items: readonly ScoredCandidate[]) {

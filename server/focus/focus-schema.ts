@@ -1,8 +1,7 @@
-// Focus API: the query (zod) and the answer shape the drills import.
+// Focus API query (zod); the answer is in src/contract/focus.ts.
 import { z } from 'zod'
-import { DrillIdSchema, type DrillId } from '../../src/drills/drill-settings'
+import { DrillIdSchema } from '../../src/contract/drills'
 import { scaleTypeName } from '../../src/theory'
-import type { KeyFocus, RegionFocus } from './focus-keys'
 
 const Count = (max: number, what: string) =>
   z.coerce.number(`Use a ${what} number.`).int(`Use a whole ${what} number.`).min(0).max(max)
@@ -51,25 +50,3 @@ export const FocusQuerySchema = z
     message: 'The region ends before it starts.',
   })
 export type FocusQuery = z.infer<typeof FocusQuerySchema>
-
-/** A question the drill should ask, with the reason shown to the student. */
-export interface FocusItem {
-  string: number
-  fret: number
-  pitch: number
-  /** Weakness 0..1 (higher = weaker). */
-  score: number
-  /** When spaced review wants this place again (ISO), null if never practised. */
-  due: string | null
-  reason: string
-}
-
-export interface FocusAnswer {
-  instrumentId: string
-  drill: DrillId
-  items: FocusItem[]
-  /** Runs, scatter and cycle: keys of `scale` ranked by the weak places they use. */
-  keys?: KeyFocus[]
-  /** Runs: 5-fret hand regions ranked by the weak places inside. */
-  regions?: RegionFocus[]
-}

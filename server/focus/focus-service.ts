@@ -1,13 +1,14 @@
 // Focus use cases: the next questions for a drill (weak places first, with reasons), and keeping
 // every place's spaced-review card current as attempts arrive.
 import { randomInt } from 'node:crypto'
+import { drillContract } from '../../src/contract/drills'
 import { createRandom } from '../../src/theory'
 import type { AttemptRow } from '../attempts/attempts-repository'
 import type { AppContext } from '../context'
 import type { Db } from '../lib/db'
 import { badRequest, type FieldErrors } from '../lib/errors'
 import { listInstruments } from '../instruments/instruments-repository'
-import type { Instrument } from '../instruments/instruments-schema'
+import type { Instrument } from '../../src/contract/instruments'
 import { ALL_DRILLS, itemRows, NO_INSTRUMENT, type ItemRow } from '../progress/progress-repository'
 import type { PublicUser } from '../users/users-schema'
 import { reviewCard } from './focus-cards'
@@ -22,13 +23,13 @@ import {
   type CellAnswer,
   type PlacedCard,
 } from './focus-repository'
-import type { FocusAnswer, FocusQuery } from './focus-schema'
+import type { FocusAnswer } from '../../src/contract/focus'
+import type { FocusQuery } from './focus-schema'
 import { scoreAll, selectFocus } from './focus-selector'
 import type { FocusCandidate, FocusPick, ReviewCard } from './focus-types'
 
 /** How many past answers rebuild the cards of attempts stored without them (seeded history). */
 const REBUILD_LIMIT = 5000
-const KEY_DRILLS = new Set(['runs', 'scatter', 'cycle'])
 
 /** Applies answers (oldest first) to the cards they concern; returns the changed cards. */
 export function applyAnswers(
@@ -181,9 +182,10 @@ export async function focusFor(
     drill: q.drill,
     items: selectFocus(candidates, { n: q.n, now, random }).map(toItem),
   }
-  if (!KEY_DRILLS.has(q.drill)) return answer
+  const extras = drillContract(q.drill).focus
+  if (!extras.keys && !extras.regions) return answer
   const scored = scoreAll(candidates, now)
-  answer.keys = rankKeys(scored, q.scale)
-  if (q.drill === 'runs') answer.regions = rankRegions(scored, region.lowFret, region.highFret)
+  if (extras.keys) answer.keys = rankKeys(scored, q.scale)
+  if (extras.regions) answer.regions = rankRegions(scored, region.lowFret, region.highFret)
   return answer
 }

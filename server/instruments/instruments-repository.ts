@@ -1,7 +1,7 @@
 // Instruments table access: the only place that knows its columns.
 import type { Knex } from 'knex'
 import type { Db } from '../lib/db'
-import type { Instrument, InstrumentInput, InstrumentPatch } from './instruments-schema'
+import type { Instrument, InstrumentInput, InstrumentPatch } from '../../src/contract/instruments'
 
 interface InstrumentRow {
   id: string

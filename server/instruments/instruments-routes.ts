@@ -3,11 +3,8 @@ import { Router } from 'express'
 import { requireAuth } from '../auth/auth-middleware'
 import type { AppContext } from '../context'
 import { parse, parseRequest } from '../lib/validate'
-import {
-  InstrumentIdParamsSchema,
-  InstrumentInputSchema,
-  InstrumentPatchSchema,
-} from './instruments-schema'
+import { InstrumentIdParamsSchema } from './instruments-schema'
+import { InstrumentInputSchema, InstrumentPatchSchema } from '../../src/contract/instruments'
 import {
   activateInstrument,
   createInstrument,

@@ -18,7 +18,7 @@ import {
   type InstrumentInput,
   type InstrumentPatch,
   type InstrumentPreset,
-} from './instruments-schema'
+} from '../../src/contract/instruments'
 
 const MM_PER_INCH = 25.4
 const DEFAULT_PRESET_ID = 'bass-4'

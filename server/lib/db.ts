@@ -1,6 +1,6 @@
 // The Knex instance for the configured database (the only place server code opens a pool).
 import knex, { type Knex } from 'knex'
-import { knexConfig } from '../../db/knexfile'
+import { knexConfig } from '../../db/knex-config'
 
 export type Db = Knex
 

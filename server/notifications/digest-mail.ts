@@ -1,7 +1,7 @@
 // Text of the weekly digest: who practised, who is behind or quiet, the biggest weak spots.
 import { publicUrl, type Config } from '../config'
 import type { OutgoingMail } from '../lib/mail'
-import type { RosterRow } from '../studio/studio-schema'
+import type { RosterRow } from '../../src/contract/roster'
 
 const pct = (v: number | null) => (v === null ? '–' : `${Math.round(v * 100)} %`)
 const minutes = (m: number) => (m > 0 && m < 1 ? '< 1' : String(Math.round(m)))

@@ -14,7 +14,8 @@ import {
   type AssignmentRow,
 } from './assignments-repository'
 import { itemsOfPlans } from './plans-repository'
-import type { Assignment, PlanItem } from './plans-schema'
+import type { Assignment } from '../../src/contract/assignments'
+import type { PlanItem } from '../../src/contract/plans'
 import { evaluateTarget, type ItemAttempt } from './target-progress'
 
 interface Loaded {

@@ -1,8 +1,9 @@
 // Texts of the plan e-mails: a plan was assigned, a plan is due soon.
 import { publicUrl, type Config } from '../config'
 import type { OutgoingMail } from '../lib/mail'
-import { describePreset, describeTarget } from '../../src/plans/plan-text'
-import type { PlanItem } from './plans-schema'
+import { describePreset } from '../../src/contract/drills'
+import { describeTarget } from '../../src/contract/targets'
+import type { PlanItem } from '../../src/contract/plans'
 
 const dateText = (due: Date | string | null) =>
   due ? new Date(due).toUTCString().replace(/:\d\d GMT$/, ' UTC') : 'no due date'

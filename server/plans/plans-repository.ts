@@ -1,8 +1,15 @@
 // Plans, their items and assignments: the only place that knows these tables.
 import type { Knex } from 'knex'
-import type { DrillPreset, PracticeTarget } from '../../src/drills/drill-settings'
+import type { DrillPreset } from '../../src/contract/drills'
+import type { PracticeTarget } from '../../src/contract/targets'
 import type { Db } from '../lib/db'
-import type { Plan, PlanAssignee, PlanItem, PlanItemInput, PlanUpdateInput } from './plans-schema'
+import type {
+  Plan,
+  PlanAssignee,
+  PlanItem,
+  PlanItemInput,
+  PlanUpdateInput,
+} from '../../src/contract/plans'
 
 interface PlanRow {
   id: string

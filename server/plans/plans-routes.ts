@@ -5,14 +5,8 @@ import { requireAuth, requireRole } from '../auth/auth-middleware'
 import type { AppContext } from '../context'
 import { parse, parseRequest } from '../lib/validate'
 import { assignmentsOfStudent } from './assignments-service'
-import {
-  AssignSchema,
-  PlanCreateSchema,
-  PlanIdParamsSchema,
-  PlanItemIdParamsSchema,
-  PlanStudentParamsSchema,
-  PlanUpdateSchema,
-} from './plans-schema'
+import { AssignSchema, PlanCreateSchema, PlanUpdateSchema } from '../../src/contract/plans'
+import { PlanIdParamsSchema, PlanItemIdParamsSchema, PlanStudentParamsSchema } from './plans-schema'
 import * as plans from './plans-service'
 
 export function planRoutes(ctx: AppContext): Router {

@@ -21,8 +21,13 @@ import {
   type PlanRecord,
 } from './plans-repository'
 import { planAssignedMail } from './plans-mail'
-import type { Plan, PlanCreateInput, PlanItemContext, PlanUpdateInput } from './plans-schema'
-import { STARTER_PLANS } from './starter-plans'
+import type {
+  Plan,
+  PlanCreateInput,
+  PlanItemContext,
+  PlanUpdateInput,
+} from '../../src/contract/plans'
+import { STARTER_PLANS } from '../../src/contract/starter-plans'
 
 export const listPlans = (ctx: AppContext, teacherId: string) => listTeacherPlans(ctx.db, teacherId)
 export const starterPlans = () => STARTER_PLANS

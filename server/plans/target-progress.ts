@@ -1,7 +1,8 @@
 // Progress toward a plan item's target, computed from the student's attempts of that item. Pure:
 // plain data in, plain data out, so the rules are unit-tested with hand-computed cases.
-import { customCycle, cycleTonics, pitchClassOf } from '../../src/theory'
-import type { DrillPreset, PracticeTarget } from '../../src/drills/drill-settings'
+import type { DrillPreset } from '../../src/contract/drills'
+import { presetKeys, type PracticeTarget, type TargetProgress } from '../../src/contract/targets'
+import { pitchClassOf } from '../../src/theory'
 
 /** One graded answer practised for a plan item (the fields the targets look at). */
 export interface ItemAttempt {
@@ -13,23 +14,6 @@ export interface ItemAttempt {
   /** detail.key of the attempt (the key being played in a Window Cycle), when there is one. */
   key: string | null
 }
-
-interface Progress {
-  met: boolean
-  /** 0–1: how far along the slowest criterion is (1 when met). */
-  ratio: number
-}
-
-export type TargetProgress =
-  | (Progress & {
-      kind: 'accuracy'
-      attempts: number
-      needed: number
-      accuracy: number | null
-      medianMs: number | null
-    })
-  | (Progress & { kind: 'sessions'; sessions: number; needed: number })
-  | (Progress & { kind: 'all-keys'; keysPlayed: string[]; keysMissing: string[] })
 
 /** Median of a list of numbers (mean of the two middle values for an even count); null when empty. */
 export function median(values: readonly number[]): number | null {
@@ -91,17 +75,6 @@ function sessionsProgress(
   }
 }
 
-/** The keys a Window Cycle preset plays, in order; empty for other drills or an unusable cycle. */
-export function presetKeys(preset: DrillPreset): string[] {
-  if (preset.drill !== 'cycle') return []
-  const { cycle, customTonics, scale } = preset.settings
-  try {
-    return cycle === 'custom' ? customCycle(customTonics) : cycleTonics(cycle, { scale })
-  } catch {
-    return []
-  }
-}
-
 const pitchClassOrNull = (name: string | null) => {
   if (!name) return null
   try {
@@ -111,11 +84,13 @@ const pitchClassOrNull = (name: string | null) => {
   }
 }
 
-/** Every key of the cycle appears in a correct Window Cycle attempt (compared by pitch class). */
+/** Every key of the preset appears in a correct attempt of its drill (compared by pitch class). */
 function allKeysProgress(preset: DrillPreset, attempts: readonly ItemAttempt[]): TargetProgress {
   const keys = presetKeys(preset)
   const played = new Set(
-    attempts.filter((a) => a.correct && a.drill === 'cycle').map((a) => pitchClassOrNull(a.key)),
+    attempts
+      .filter((a) => a.correct && a.drill === preset.drill)
+      .map((a) => pitchClassOrNull(a.key)),
   )
   const keysPlayed = keys.filter((key) => played.has(pitchClassOf(key)))
   const keysMissing = keys.filter((key) => !played.has(pitchClassOf(key)))

@@ -19,15 +19,13 @@ import {
 import * as repo from './progress-repository'
 import type {
   FingeringsAnswer,
-  FingeringsQuery,
   NotesAnswer,
   PositionsAnswer,
   ProgressInstrument,
-  ProgressScope,
-  RangeQuery,
   SummaryAnswer,
   TimelineAnswer,
-} from './progress-schema'
+} from '../../src/contract/progress'
+import type { FingeringsQuery, ProgressScope, RangeQuery } from './progress-schema'
 
 const { ALL_DRILLS, ALL_INSTRUMENTS } = repo
 const DEFAULT_TIMELINE_DAYS = 30

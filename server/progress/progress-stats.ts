@@ -7,7 +7,7 @@ import type {
   PracticeTotals,
   Streak,
   TimelinePoint,
-} from './progress-schema'
+} from '../../src/contract/progress'
 
 const round1 = (x: number) => Math.round(x * 10) / 10
 const ratio = (part: number, whole: number) => (whole > 0 ? part / whole : null)

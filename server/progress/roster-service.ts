@@ -16,7 +16,6 @@
 //   }
 import { pitchClassName, stringNames } from '../../src/theory'
 import type { AppContext } from '../context'
-import type { RosterStudent } from './progress-schema'
 import {
   teacherMembers,
   weakestPlaces,
@@ -25,7 +24,31 @@ import {
   type WeekRow,
 } from './roster-repository'
 
-export type { RosterStudent }
+/** One student of a teacher's roster (the meaning of each field is above). */
+export interface RosterStudent {
+  studentId: string
+  name: string
+  email: string
+  studios: { id: string; name: string }[]
+  lastPracticeAt: string | null
+  attempts7d: number
+  minutes7d: number
+  accuracy7d: number | null
+  medianRecallMs7d: number | null
+  medianRecallMsPrev7d: number | null
+  recallTrend: { change: number | null; direction: 'faster' | 'slower' | 'steady' | null }
+  weakestPositions: {
+    instrumentId: string
+    string: number
+    /** "low E", "A": the string's name on that instrument */
+    stringName: string
+    fret: number
+    pitch: number
+    answers: number
+    accuracy: number
+    medianMs: number | null
+  }[]
+}
 
 /** Below this relative change in median recall time the trend is "steady". */
 export const TREND_THRESHOLD = 0.05

@@ -1,6 +1,6 @@
 // The recordings table: metadata of each uploaded take; the bytes are in recording storage.
 import type { Db } from '../lib/db'
-import type { RecordingSummary } from '../plans/plans-schema'
+import type { RecordingSummary } from '../../src/contract/assignments'
 
 interface RecordingRow {
   id: string

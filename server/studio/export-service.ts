@@ -1,5 +1,5 @@
 // CSV exports: the roster (with the table's filters and sort) and one student's graded answers.
-import { DRILLS, type DrillId } from '../../src/drills/drill-settings'
+import { drillName } from '../../src/contract/drills'
 import { pitchName } from '../../src/theory'
 import type { AppContext } from '../context'
 import { findUserById } from '../users/users-repository'
@@ -98,7 +98,7 @@ export async function resultsCsv(
   const rows = await studentResults(ctx.db, studentId, teacher.id, from, to)
   const body = rows.map((r) => [
     r.created_at.toISOString(),
-    DRILLS[r.drill as DrillId]?.name ?? r.drill,
+    drillName(r.drill),
     r.string === null ? null : r.string + 1,
     r.fret,
     pitchName(r.expected_pitch, 'flat'),

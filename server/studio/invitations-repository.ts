@@ -1,7 +1,7 @@
 // Studio invitations: only the SHA-256 of each token is stored; a token works once, until it expires.
 import type { Knex } from 'knex'
 import type { Db } from '../lib/db'
-import type { Invitation, InvitationStatus } from './studio-schema'
+import type { Invitation, InvitationStatus } from '../../src/contract/studios'
 
 interface InvitationRow {
   id: string

@@ -20,7 +20,8 @@ import {
 } from './invitations-repository'
 import { invitationMail } from './invitations-mail'
 import { addMember, isMemberEmail } from './studio-repository'
-import type { AcceptInvitationInput, InvitationPreview } from './studio-schema'
+import type { AcceptInvitationInput } from './studio-schema'
+import type { InvitationPreview } from '../../src/contract/studios'
 import { ownStudio } from './studio-service'
 
 export const INVITATION_TTL_MS = 7 * 24 * 3600 * 1000

@@ -1,12 +1,6 @@
 // Filtering, sorting and paging the roster rows (pure, so the rules are easy to test).
-import type {
-  RosterFilter,
-  RosterPage,
-  RosterQuery,
-  RosterRow,
-  RosterSortKey,
-  RosterStatus,
-} from './studio-schema'
+import type { RosterFilter, RosterQuery } from './studio-schema'
+import type { RosterPage, RosterRow, RosterSortKey, RosterStatus } from '../../src/contract/roster'
 
 const STATUS_ORDER: Record<RosterStatus, number> = { behind: 0, inactive: 1, 'on-track': 2 }
 

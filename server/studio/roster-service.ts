@@ -4,10 +4,10 @@ import { assertCanReadStudent } from '../access/student-access'
 import type { AppContext } from '../context'
 import { listAssignmentRows } from '../plans/assignments-repository'
 import { buildAssignments } from '../plans/assignments-service'
-import type { Assignment } from '../plans/plans-schema'
+import type { Assignment } from '../../src/contract/assignments'
 import { rosterSummary, type RosterStudent } from '../progress/roster-service'
 import type { PublicUser } from '../users/users-schema'
-import type { RosterRow, RosterStatus, WeakSpot } from './studio-schema'
+import type { RosterRow, RosterStatus, WeakSpot } from '../../src/contract/roster'
 
 const DAY_MS = 24 * 3600 * 1000
 

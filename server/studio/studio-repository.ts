@@ -1,7 +1,8 @@
 // Studios, their members, and the roster figures read from attempts.
 import type { Knex } from 'knex'
 import type { Db } from '../lib/db'
-import type { Membership, Studio, StudioStudent } from './studio-schema'
+import type { Membership, Studio } from '../../src/contract/studios'
+import type { StudioStudent } from '../../src/contract/roster'
 
 interface RosterRow {
   id: string

@@ -1,9 +1,9 @@
-// User shapes shared by the API and the client.
+// User input schemas (e-mail, password, name, role changes); roles and the public user shape come
+// from the contract and are re-exported for the server's own modules.
 import { z } from 'zod'
+import { RoleSchema } from '../../src/contract/users'
 
-export const ROLES = ['student', 'teacher', 'admin'] as const
-export const RoleSchema = z.enum(ROLES)
-export type Role = z.infer<typeof RoleSchema>
+export { ROLES, RoleSchema, type PublicUser, type Role } from '../../src/contract/users'
 
 export const EmailSchema = z
   .string()
@@ -22,15 +22,6 @@ export const NameSchema = z
   .trim()
   .min(1, 'Enter your name.')
   .max(80, 'Use at most 80 characters.')
-
-/** A user as the API returns it (never the password hash). */
-export interface PublicUser {
-  id: string
-  email: string
-  name: string
-  role: Role
-  createdAt: string
-}
 
 export const UserIdParamsSchema = z.object({ id: z.uuid('Not a valid user id.') })
 

@@ -1,6 +1,6 @@
 // /api/admin endpoints.
-import type { MailMessage, MailSummary } from '../../server/admin/admin-schema'
-import type { PublicUser, Role } from '../../server/users/users-schema'
+import type { MailMessage, MailSummary } from '../contract/mail-log'
+import type { PublicUser, Role } from '../contract/users'
 import { http } from './http'
 
 export type { MailMessage, MailSummary }

@@ -1,9 +1,5 @@
 // /api/attempts endpoints.
-import type {
-  AttemptBatchResult,
-  AttemptInput,
-  StoredAttempt,
-} from '../../server/attempts/attempts-schema'
+import type { AttemptBatchResult, AttemptInput, StoredAttempt } from '../contract/attempts'
 import { http } from './http'
 
 export type { AttemptBatchResult, AttemptInput, StoredAttempt }

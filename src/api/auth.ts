@@ -1,5 +1,5 @@
 // /api/auth endpoints.
-import type { PublicUser } from '../../server/users/users-schema'
+import type { PublicUser } from '../contract/users'
 import { http } from './http'
 
 export type { PublicUser }

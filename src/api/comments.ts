@@ -1,5 +1,5 @@
 // /api/assignments/:id/comments endpoints: the thread of one assigned plan.
-import type { PlanComment } from '../../server/comments/comments-schema'
+import type { PlanComment } from '../contract/assignments'
 import { http } from './http'
 
 export type { PlanComment }

@@ -1,7 +1,7 @@
 // /api/focus endpoint: the next questions for a drill, weakest places first, each with its reason.
-import type { FocusAnswer, FocusItem } from '../../server/focus/focus-schema'
-import type { KeyFocus, RegionFocus } from '../../server/focus/focus-keys'
-import type { DrillId } from '../drills/drill-settings'
+import type { FocusAnswer, FocusItem } from '../contract/focus'
+import type { KeyFocus, RegionFocus } from '../contract/focus'
+import type { DrillId } from '../contract/drills'
 import { http } from './http'
 
 export type { FocusAnswer, FocusItem, KeyFocus, RegionFocus }

@@ -4,7 +4,7 @@ import type {
   InstrumentInput,
   InstrumentPatch,
   InstrumentPreset,
-} from '../../server/instruments/instruments-schema'
+} from '../contract/instruments'
 import { http } from './http'
 
 export type { Instrument, InstrumentInput, InstrumentPatch, InstrumentPreset }

@@ -1,21 +1,18 @@
 // /api/plans endpoints: teachers' plans and the starter library, a student's assigned plans, and
 // the plan item a drill view opens.
+import type { Assignment } from '../contract/assignments'
 import type {
-  Assignment,
   Plan,
   PlanCreateInput,
   PlanItemContext,
   PlanUpdateInput,
   StarterPlan,
-} from '../../server/plans/plans-schema'
+} from '../contract/plans'
 import { http } from './http'
 
 export type { Assignment, Plan, PlanItemContext, StarterPlan }
-export type {
-  AssignedItem,
-  RecordingSummary,
-  TargetProgress,
-} from '../../server/plans/plans-schema'
+export type { AssignedItem, RecordingSummary } from '../contract/assignments'
+export type { TargetProgress } from '../contract/targets'
 
 /** Plan bodies as the client sends them (defaults are filled in by the server). */
 export type PlanBody = Omit<PlanUpdateInput, 'notes' | 'dueAt'> &

@@ -1,31 +1,15 @@
-// /api/progress endpoints: a student's statistics (own, or `student` for their teachers) and the roster.
+// /api/progress endpoints: a student's statistics (own, or `student` for their teachers).
+import type { DrillId } from '../contract/drills'
 import type {
   FingeringsAnswer,
-  ItemFigures,
   NotesAnswer,
-  PositionFigures,
   PositionsAnswer,
-  ProgressInstrument,
-  RosterStudent,
   SummaryAnswer,
   TimelineAnswer,
-  TimelinePoint,
-} from '../../server/progress/progress-schema'
-import type { DrillId } from '../drills/drill-settings'
+} from '../contract/progress'
 import { http } from './http'
 
-export type {
-  FingeringsAnswer,
-  ItemFigures,
-  NotesAnswer,
-  PositionFigures,
-  PositionsAnswer,
-  ProgressInstrument,
-  RosterStudent,
-  SummaryAnswer,
-  TimelineAnswer,
-  TimelinePoint,
-}
+export type * from '../contract/progress'
 
 /** Whose progress (omit for your own), on which instrument and drill, over which days (YYYY-MM-DD). */
 export interface ProgressFilter {
@@ -46,8 +30,6 @@ export const fetchNotes = (f: ProgressFilter) =>
   http.get<NotesAnswer>('/progress/notes', { query: scope(f) })
 export const fetchTimeline = (f: ProgressFilter) =>
   http.get<TimelineAnswer>('/progress/timeline', { query: { ...f } })
-export const fetchRosterSummary = () =>
-  http.get<{ students: RosterStudent[] }>('/progress/roster-summary')
 
 export interface FingeringsParams {
   student?: string

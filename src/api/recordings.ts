@@ -1,5 +1,5 @@
 // /api/recordings endpoints: upload a take for a plan item, delete it, and the URL the player streams.
-import type { RecordingSummary } from '../../server/plans/plans-schema'
+import type { RecordingSummary } from '../contract/assignments'
 import { http } from './http'
 
 export type { RecordingSummary }

@@ -1,17 +1,14 @@
 // /api/studio and /api/invitations endpoints: studios, invitations, the roster and student pages.
+import type { Invitation, InvitationPreview, Membership, Studio } from '../contract/studios'
 import type {
-  Invitation,
-  InvitationPreview,
-  Membership,
   RosterPage,
   RosterRow,
   RosterSortKey,
   RosterStatus,
-  Studio,
   StudioStudent,
-} from '../../server/studio/studio-schema'
-import type { Assignment } from '../../server/plans/plans-schema'
-import type { PublicUser } from '../../server/users/users-schema'
+} from '../contract/roster'
+import type { Assignment } from '../contract/assignments'
+import type { PublicUser } from '../contract/users'
 import { http } from './http'
 
 export type {

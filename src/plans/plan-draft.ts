@@ -1,11 +1,7 @@
 // A plan being edited in the browser: conversion from a saved plan or a starter, checks before it
 // is sent (the shared zod schemas), and the body the API takes.
-import {
-  DrillPresetSchema,
-  PracticeTargetSchema,
-  type DrillPreset,
-  type PracticeTarget,
-} from '../drills/drill-settings'
+import { DrillPresetSchema, type DrillPreset } from '../contract/drills'
+import { PracticeTargetSchema, type PracticeTarget } from '../contract/targets'
 import { defaultPreset } from './preset-fields'
 
 export interface DraftItem {

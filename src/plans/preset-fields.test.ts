@@ -1,7 +1,7 @@
 // The plan editor's drill forms: defaults come from the shared drill schemas; every field points at
 // a setting the schema has.
 import { describe, expect, it } from 'vitest'
-import { DRILL_IDS, DrillPresetSchema, type DrillPreset } from '../drills/drill-settings'
+import { DRILL_IDS, DrillPresetSchema, type DrillPreset } from '../contract/drills'
 import { DRILL_FIELDS, defaultPreset, fieldsFor, getPath, setPath } from './preset-fields'
 
 describe('plan editor drill forms', () => {

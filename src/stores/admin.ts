@@ -3,7 +3,7 @@ import { defineStore } from 'pinia'
 import { ref } from 'vue'
 import * as adminApi from '../api/admin'
 import { ApiError } from '../api/http'
-import type { PublicUser, Role } from '../../server/users/users-schema'
+import type { PublicUser, Role } from '../contract/users'
 
 export const useAdminStore = defineStore('admin', () => {
   const users = ref<PublicUser[]>([])

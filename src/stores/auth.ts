@@ -4,7 +4,7 @@ import { computed, ref } from 'vue'
 import * as authApi from '../api/auth'
 import { ApiError } from '../api/http'
 import type { PublicUser } from '../api/auth'
-import type { Role } from '../../server/users/users-schema'
+import type { Role } from '../contract/users'
 
 const HOME_BY_ROLE: Record<Role, string> = {
   student: 'practice',

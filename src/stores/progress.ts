@@ -11,7 +11,7 @@ import type {
   SummaryAnswer,
   TimelineAnswer,
 } from '../api/progress'
-import type { DrillId } from '../drills/drill-settings'
+import type { DrillId } from '../contract/drills'
 
 /** Date ranges offered by the filters, in days back from today. */
 export const RANGE_CHOICES = [7, 30, 90, 365] as const

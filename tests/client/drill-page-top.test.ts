@@ -1,12 +1,8 @@
 // The top of every drill page: when the instrument cannot be loaded, each drill says so and goes on
 // with a standard 4-string bass (before, only Neck Recall and Pitch Hunt did).
-import { flushPromises } from '@vue/test-utils'
 import { afterEach, describe, expect, it, vi } from 'vitest'
 import { setPitchPlayer } from '../../src/audio'
-import OctaveScatterView from '../../src/views/OctaveScatterView.vue'
-import RangeRunsView from '../../src/views/RangeRunsView.vue'
-import WindowCycleView from '../../src/views/WindowCycleView.vue'
-import { mountWithApp } from '../helpers/mount'
+import { mountRoute } from '../helpers/mount'
 import { fakePlayer, stubApi } from './drill-test-kit'
 
 afterEach(() => {
@@ -16,16 +12,15 @@ afterEach(() => {
 
 describe('DrillPageTop', () => {
   it.each([
-    ['Range Runs', RangeRunsView],
-    ['Octave Scatter', OctaveScatterView],
-    ['Window Cycle', WindowCycleView],
+    ['Range Runs', '/practice/runs'],
+    ['Octave Scatter', '/practice/scatter'],
+    ['Window Cycle', '/practice/cycle'],
   ])(
     'when the instruments cannot be loaded, %s warns and practises on a 4-string bass',
-    async (name, view) => {
+    async (name, path) => {
       setPitchPlayer(fakePlayer().player)
       stubApi({}) // every request answers 404
-      const { wrapper } = mountWithApp(view, { attachTo: document.body })
-      await flushPromises()
+      const { wrapper } = await mountRoute(path, { attachTo: document.body })
 
       expect(wrapper.find('h1').text()).toBe(name)
       const warning = wrapper.find('.v-alert')

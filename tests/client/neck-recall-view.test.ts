@@ -3,8 +3,7 @@
 import { flushPromises } from '@vue/test-utils'
 import { afterEach, beforeEach, describe, expect, it, vi } from 'vitest'
 import { setPitchPlayer } from '../../src/audio'
-import NeckRecallView from '../../src/views/NeckRecallView.vue'
-import { mountWithApp } from '../helpers/mount'
+import { mountRoute } from '../helpers/mount'
 import { ATTEMPTS_OK, fakePlayer, INSTRUMENT_ANSWERS, NOOR_BASS, stubApi } from './drill-test-kit'
 
 // The A string (A1 = 33), frets 5–6: D2 (38) and Eb2 (39) (arithmetic).
@@ -43,8 +42,7 @@ async function startSession() {
     'GET /api/focus': FOCUS,
     'POST /api/attempts': ATTEMPTS_OK,
   })
-  const { wrapper } = mountWithApp(NeckRecallView, { attachTo: document.body })
-  await flushPromises()
+  const { wrapper } = await mountRoute('/practice/recall', { attachTo: document.body })
   await wrapper.find('[data-testid="start-session"]').trigger('click')
   await flushPromises()
   return { api, wrapper }
@@ -112,8 +110,7 @@ describe('NeckRecallView', () => {
 
   it('when the focus API fails, then the session still starts in the usual order and says why', async () => {
     stubApi({ ...INSTRUMENT_ANSWERS, 'POST /api/attempts': ATTEMPTS_OK })
-    const { wrapper } = mountWithApp(NeckRecallView, { attachTo: document.body })
-    await flushPromises()
+    const { wrapper } = await mountRoute('/practice/recall', { attachTo: document.body })
     await wrapper.find('[data-testid="start-session"]').trigger('click')
     await flushPromises()
     expect(wrapper.find('[data-testid="question"]').exists()).toBe(true)
@@ -148,9 +145,9 @@ describe('NeckRecallView with a plan item', () => {
       [`GET /api/plans/items/${PLAN_ITEM.id}`]: PLAN_ITEM,
       'POST /api/attempts': ATTEMPTS_OK,
     })
-    const { wrapper, router } = mountWithApp(NeckRecallView, { attachTo: document.body })
-    await router.push(`/practice/recall?planItem=${PLAN_ITEM.id}`)
-    await flushPromises()
+    const { wrapper } = await mountRoute(`/practice/recall?planItem=${PLAN_ITEM.id}`, {
+      attachTo: document.body,
+    })
     const banner = wrapper.find('[data-testid="plan-item-banner"]')
     expect(banner.text()).toContain('Week 3: the first five frets')
     expect(banner.text()).toContain('3 practice sessions')
@@ -179,9 +176,9 @@ describe('NeckRecallView with a plan item', () => {
         preset: { drill: 'hunt', settings: {} },
       },
     })
-    const { wrapper, router } = mountWithApp(NeckRecallView, { attachTo: document.body })
-    await router.push(`/practice/recall?planItem=${PLAN_ITEM.id}`)
-    await flushPromises()
+    const { wrapper } = await mountRoute(`/practice/recall?planItem=${PLAN_ITEM.id}`, {
+      attachTo: document.body,
+    })
     expect(wrapper.find('[data-testid="plan-item-error"]').text()).toContain(
       'for Pitch Hunt, not Neck Recall',
     )
@@ -202,8 +199,7 @@ describe('NeckRecallView defaults', () => {
       'GET /api/instruments': { instruments: [guitar] },
       'GET /api/instruments/presets': { presets: [] },
     })
-    const { wrapper } = mountWithApp(NeckRecallView, { attachTo: document.body })
-    await flushPromises()
+    const { wrapper } = await mountRoute('/practice/recall', { attachTo: document.body })
     const setup = wrapper.find('[data-testid="drill-setup"]').text()
     expect(setup).toContain('low E string')
     expect(setup).toContain('high E string')

@@ -4,8 +4,7 @@ import { flushPromises } from '@vue/test-utils'
 import { afterEach, beforeEach, describe, expect, it, vi } from 'vitest'
 import { setPitchPlayer } from '../../src/audio'
 import { positionsOf } from '../../src/theory'
-import PitchHuntView from '../../src/views/PitchHuntView.vue'
-import { mountWithApp } from '../helpers/mount'
+import { mountRoute } from '../helpers/mount'
 import { ATTEMPTS_OK, fakePlayer, INSTRUMENT_ANSWERS, NOOR_BASS, stubApi } from './drill-test-kit'
 
 // Pitches from frets 0–2 only; one question; the name hidden (heard only).
@@ -33,8 +32,7 @@ afterEach(() => {
 
 async function startSession() {
   const api = stubApi({ ...INSTRUMENT_ANSWERS, 'POST /api/attempts': ATTEMPTS_OK })
-  const { wrapper } = mountWithApp(PitchHuntView, { attachTo: document.body })
-  await flushPromises()
+  const { wrapper } = await mountRoute('/practice/hunt', { attachTo: document.body })
   await wrapper.find('[data-testid="start-session"]').trigger('click')
   await flushPromises()
   const pitch = Number(wrapper.find('[data-testid="question"]').attributes('data-pitch'))

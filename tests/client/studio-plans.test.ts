@@ -3,9 +3,8 @@ import { flushPromises } from '@vue/test-utils'
 import { afterEach, describe, expect, it, vi } from 'vitest'
 import AssignedPlans from '../../src/components/plans/AssignedPlans.vue'
 import PlanEditorDialog from '../../src/components/plans/PlanEditorDialog.vue'
-import InvitationAcceptView from '../../src/views/InvitationAcceptView.vue'
 import { defaultPreset } from '../../src/plans/preset-fields'
-import { mountWithApp } from '../helpers/mount'
+import { mountRoute, mountWithApp } from '../helpers/mount'
 
 afterEach(() => {
   vi.unstubAllGlobals()
@@ -170,9 +169,7 @@ describe('InvitationAcceptView', () => {
         },
       }),
     })
-    const { wrapper, router } = mountWithApp(InvitationAcceptView)
-    await router.push('/invitations/accept?token=abcdefghijklmnopqrstuvwxyz')
-    await flushPromises()
+    const { wrapper } = await mountRoute('/invitations/accept?token=abcdefghijklmnopqrstuvwxyz')
     expect(wrapper.text()).toContain('Marta Ilves invites you to Cedar Hollow')
     expect(wrapper.find('input[name="name"]').exists()).toBe(true)
     expect(wrapper.text()).toContain('Create my account and join')

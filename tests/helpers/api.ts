@@ -1,5 +1,5 @@
 // The real app in-process against the real test database, with its own SMTP sink on a free port.
-import { randomUUID } from 'node:crypto'
+import { randomBytes, randomUUID } from 'node:crypto'
 import path from 'node:path'
 import { TEST_OUTPUT_DIR } from '../../scripts/lib/paths.mjs'
 import request from 'supertest'
@@ -17,6 +17,8 @@ import { SESSION_COOKIE, signSession } from '../../server/auth/session-token'
 import { insertUser, toPublicUser } from '../../server/users/users-repository'
 
 export const TEST_PASSWORD = 'correct horse battery'
+// One session key per test process (the app under test signs and checks cookies with it).
+const TEST_JWT_SECRET = randomBytes(32).toString('hex')
 
 export interface TestApi {
   app: Express
@@ -34,6 +36,7 @@ export async function startTestApi(
     logLevel: 'silent',
     clientDist: '/nonexistent',
     dataDir: path.join(TEST_OUTPUT_DIR, 'api-data'), // recordings uploaded by tests stay out of .data
+    jwtSecret: TEST_JWT_SECRET,
     ...overrides,
   })
   const db = createDb(base.databaseUrl)

@@ -1,6 +1,7 @@
 // End-to-end tests: a throwaway seeded database, a fresh client build, the SMTP sink and the API
 // server as real processes on free loopback ports. Tests read the URL with inject('baseUrl').
 import type { ChildProcess } from 'node:child_process'
+import { randomBytes } from 'node:crypto'
 import path from 'node:path'
 import type { TestProject } from 'vitest/node'
 import { createDatabase, dropDatabase, startCluster } from '../../scripts/db.mjs'
@@ -43,8 +44,9 @@ export default async function setup(project: TestProject) {
     PORT: String(port),
     SMTP_PORT: String(smtpPort),
     CLIENT_DIST: DIST,
-    // Recordings and the session secret of the e2e server stay in the test output folder.
+    // Recordings of the e2e server stay in the test output folder; its session secret is per run.
     AMBITUS_DATA_DIR: path.join(TEST_OUTPUT_DIR, 'data'),
+    JWT_SECRET: randomBytes(32).toString('hex'),
     LOG_LEVEL: 'warn',
     APP_URL: `http://127.0.0.1:${port}`,
   }

@@ -1,12 +1,13 @@
 // Roster rules: filtering, sorting and paging; the behind / inactive / on-track status; ISO weeks
 // for the digest (source: ISO 8601 week dates; the dates are checked against a printed calendar).
 import { describe, expect, it } from 'vitest'
-import type { Assignment } from '../../server/plans/plans-schema'
+import type { Assignment } from '../../src/contract/assignments'
 import { isoWeek, digestDue } from '../../server/notifications/digest-service'
 import { pageRoster, sortRoster } from '../../server/studio/roster-query'
 import { rosterStatus } from '../../server/studio/roster-service'
-import { RosterQuerySchema, type RosterRow } from '../../server/studio/studio-schema'
-import { STARTER_PLANS } from '../../server/plans/starter-plans'
+import { RosterQuerySchema } from '../../server/studio/studio-schema'
+import { type RosterRow } from '../../src/contract/roster'
+import { STARTER_PLANS } from '../../src/contract/starter-plans'
 
 function row(name: string, over: Partial<RosterRow> = {}): RosterRow {
   return {

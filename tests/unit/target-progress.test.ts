@@ -1,17 +1,10 @@
 // Target evaluation of plan items, on hand-computed attempt sets (source: arithmetic, shown beside
 // each case; the key list of the cycle of fourths is the one in PRODUCT.md's domain rules).
 import { describe, expect, it } from 'vitest'
-import {
-  evaluateTarget,
-  median,
-  presetKeys,
-  type ItemAttempt,
-} from '../../server/plans/target-progress'
-import {
-  DrillPresetSchema,
-  PracticeTargetSchema,
-  type DrillPreset,
-} from '../../src/drills/drill-settings'
+import { evaluateTarget, median, type ItemAttempt } from '../../server/plans/target-progress'
+import { presetKeys } from '../../src/contract/targets'
+import { DrillPresetSchema, type DrillPreset } from '../../src/contract/drills'
+import { PracticeTargetSchema } from '../../src/contract/targets'
 
 const T0 = Date.parse('2026-03-02T10:00:00Z')
 let clock = 0

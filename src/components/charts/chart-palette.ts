@@ -1,22 +1,18 @@
 // Our chart colours, one hue per series with a matching point shape and dash, so lines stay apart
 // for colour-blind readers and in print; a lighter set for the dark theme.
-import type { DrillId } from '@/drills/drill-settings'
+import type { DrillId } from '@/contract/drills'
+import type { SeriesStyle } from '@/drills/drill-definition'
+import { DRILLS } from '@/drills/registry'
 
 export type SeriesKey = DrillId | 'all'
 
-interface SeriesStyle {
-  light: string
-  dark: string
-  point: 'circle' | 'triangle' | 'rect' | 'rectRot' | 'star' | 'crossRot'
-}
-
+/** "All drills" first, then each drill's own colour from its definition. */
 export const SERIES_STYLES: Record<SeriesKey, SeriesStyle> = {
   all: { light: '#1E4D6B', dark: '#8CC0E0', point: 'circle' },
-  recall: { light: '#A85A24', dark: '#E8A36B', point: 'triangle' },
-  hunt: { light: '#2F7A6F', dark: '#7FC4B9', point: 'rect' },
-  runs: { light: '#6E4A8A', dark: '#C7A6DE', point: 'rectRot' },
-  scatter: { light: '#6A6A1C', dark: '#CFCF72', point: 'star' },
-  cycle: { light: '#4F5B69', dark: '#B9C2CE', point: 'crossRot' },
+  ...(Object.fromEntries(Object.values(DRILLS).map((d) => [d.id, d.accent])) as Record<
+    DrillId,
+    SeriesStyle
+  >),
 }
 
 export const colourOf = (key: SeriesKey, dark: boolean) =>

@@ -1,6 +1,7 @@
 // Formatting of progress figures for people: percentages, seconds, days, note names.
 import { pitchClassName, toUnicode, type AccidentalPreference } from '@/theory'
-import { DRILLS, type DrillId } from '@/drills/drill-settings'
+import { DRILLS } from '@/drills/registry'
+import { type DrillId } from '@/contract/drills'
 
 export const percent = (v: number | null | undefined) =>
   v === null || v === undefined ? '–' : `${Math.round(v * 100)} %`

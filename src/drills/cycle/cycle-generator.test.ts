@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest'
-import { CycleSettingsSchema } from '../drill-settings'
+import { CycleSettingsSchema } from '../../contract/drills'
 import {
   cycleKeys,
   cycleQuestions,

@@ -10,7 +10,7 @@ import {
   type ScaleTone,
   type WindowKey,
 } from '../../theory'
-import type { CycleSettings } from '../drill-settings'
+import type { CycleSettings } from '../../contract/drills'
 import type { DrillQuestion } from '../engine/types'
 
 export interface CycleQuestion extends DrillQuestion {

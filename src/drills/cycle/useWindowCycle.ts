@@ -3,7 +3,7 @@
 import { computed, onBeforeUnmount, ref, watch } from 'vue'
 import type { CellMark } from '../../components/fretboard/fretboard-types'
 import { instrumentRange, toUnicode, widenWindow } from '../../theory'
-import { CycleSettingsSchema } from '../drill-settings'
+import { CycleSettingsSchema } from '../../contract/drills'
 import { useFrameProps } from '../engine/frame-props'
 import type { PickedCell } from '../engine/locate'
 import { locateMarks } from '../engine/locate-marks'

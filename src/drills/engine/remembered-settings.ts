@@ -1,6 +1,6 @@
 // The settings a student last used for a drill, kept in this browser so the next visit starts there.
 import type { z } from 'zod'
-import type { DrillId } from '../drill-settings'
+import type { DrillId } from '../../contract/drills'
 
 const storageKey = (drill: DrillId) => `ambitus.drill.${drill}`
 

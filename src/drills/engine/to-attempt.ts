@@ -1,6 +1,6 @@
 // One graded answer as the attempts API stores it (server/attempts/attempts-schema.ts).
-import type { AttemptInput } from '../../../server/attempts/attempts-schema'
-import type { DrillId } from '../drill-settings'
+import type { AttemptInput } from '../../contract/attempts'
+import type { DrillId } from '../../contract/drills'
 import type { AnswerRecord, DrillQuestion } from './types'
 
 export interface AttemptContext {

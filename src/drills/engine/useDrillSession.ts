@@ -1,14 +1,14 @@
 // Wires the pure session engine to Vue: the clock (performance.now()), the time limit, automatic
 // moving on after a right answer, and recording every counted answer through the attempts store.
-import { computed, onBeforeUnmount, ref, shallowRef, type Ref } from 'vue'
-import type { DrillId } from '../drill-settings'
+import { computed, onBeforeUnmount, ref, shallowRef, type Ref, type ShallowRef } from 'vue'
+import type { DrillId } from '../../contract/drills'
 import { useBreakReminder } from '../../composables/useBreakReminder'
 import { useAttemptsStore } from '../../stores/attempts'
 import * as engine from './session'
 import { retryQuestions, summarize } from './summary'
-import type { AnswerRecord, DrillGrader, DrillQuestion } from './types'
-import type { DrillNeck } from './useDrillNeck'
 import { toAttempt, type AttemptContext } from './to-attempt'
+import type { AnswerRecord, DrillGrader, DrillQuestion, Grade } from './types'
+import type { DrillNeck } from './useDrillNeck'
 
 /** What every drill records with an answer: the instrument of the moment and the plan item, if any. */
 export const attemptContext =
@@ -30,146 +30,158 @@ export interface DrillSessionOptions<Q extends DrillQuestion, A> {
 }
 
 const CLOCK_MS = 250
+const AUTO_ADVANCE_MS = 700
 
-export function useDrillSession<Q extends DrillQuestion, A>(options: DrillSessionOptions<Q, A>) {
-  const attempts = useAttemptsStore()
-  const breaks = useBreakReminder()
-  const state = shallowRef<engine.SessionState<Q> | null>(null)
-  const sessionId = ref<string>(crypto.randomUUID())
-  const now = ref(performance.now())
-  let clock: ReturnType<typeof setInterval> | undefined
-  let advance: ReturnType<typeof setTimeout> | undefined
+// The session's moving parts, shared by the small functions below.
+interface Core<Q extends DrillQuestion, A> {
+  options: DrillSessionOptions<Q, A>
+  state: ShallowRef<engine.SessionState<Q> | null>
+  sessionId: Ref<string>
+  now: Ref<number>
+  timers: { clock?: ReturnType<typeof setInterval>; advance?: ReturnType<typeof setTimeout> }
+  record(entry: AnswerRecord<Q>): void
+  flush(): void
+}
 
-  const status = computed(() => state.value?.status ?? 'ready')
-  const current = computed(() => (state.value ? engine.currentQuestion(state.value) : null))
-  const summary = computed(() =>
-    state.value?.status === 'finished' ? summarize(state.value) : null,
-  )
+function stopTimers(timers: Core<DrillQuestion, unknown>['timers']) {
+  clearInterval(timers.clock)
+  clearTimeout(timers.advance)
+}
+
+/** Moves to a new state: a finished session is flushed, a newly shown question announced. */
+function update<Q extends DrillQuestion, A>(core: Core<Q, A>, next: engine.SessionState<Q>) {
+  const before = core.state.value
+  core.state.value = next
+  if (next.status === 'finished' && before?.status !== 'finished') {
+    stopTimers(core.timers)
+    core.flush()
+  }
+  const question = engine.currentQuestion(next)
+  const moved =
+    !before ||
+    before.status === 'ready' ||
+    before.status === 'finished' ||
+    before.index !== next.index
+  if (question && next.status === 'asking' && moved) core.options.onQuestion?.(question)
+}
+
+function start<Q extends DrillQuestion, A>(
+  core: Core<Q, A>,
+  questions: readonly Q[],
+  limits: engine.SessionLimits = { timeLimitMs: null },
+) {
+  stopTimers(core.timers)
+  core.sessionId.value = crypto.randomUUID()
+  core.now.value = performance.now()
+  update(core, engine.startSession(engine.createSession(questions, limits), core.now.value))
+  core.timers.clock = setInterval(() => {
+    core.now.value = performance.now()
+    if (core.state.value) update(core, engine.tick(core.state.value, core.now.value))
+  }, CLOCK_MS)
+}
+
+function goNext<Q extends DrillQuestion, A>(core: Core<Q, A>) {
+  clearTimeout(core.timers.advance)
+  if (core.state.value) update(core, engine.nextQuestion(core.state.value, performance.now()))
+}
+
+/** Grades the current question with a grade from the grader; `at` is when the answer was given. */
+function applyGrade<Q extends DrillQuestion, A>(
+  core: Core<Q, A>,
+  gradeOf: (grader: DrillGrader<Q, A>, question: Q, picks: readonly Grade[]) => Grade,
+  at?: number,
+) {
+  const s = core.state.value
+  const question = s ? engine.currentQuestion(s) : null
+  if (!s || s.status !== 'asking' || !question) return
+  const grade = gradeOf(core.options.grader(), question, s.picks)
+  const next = engine.answerQuestion(s, grade, Math.min(at ?? Infinity, performance.now()))
+  if (grade.counted) core.record(next.records[next.records.length - 1] as AnswerRecord<Q>)
+  update(core, next)
+  const pause = core.options.autoAdvanceMs ?? AUTO_ADVANCE_MS
+  if (next.status === 'feedback' && grade.correct && pause > 0)
+    core.timers.advance = setTimeout(() => goNext(core), pause)
+}
+
+/** A new session from the misses of the finished one; false when there were none. */
+function retryMisses<Q extends DrillQuestion, A>(core: Core<Q, A>): boolean {
+  const s = core.state.value
+  if (!s || s.status !== 'finished') return false
+  const questions = retryQuestions(s)
+  if (questions.length === 0) return false
+  start(core, questions, { timeLimitMs: null })
+  return true
+}
+
+function sessionViews<Q extends DrillQuestion, A>(core: Core<Q, A>) {
+  const { state } = core
   const elapsedMs = computed(() => {
     const s = state.value
-    if (!s || s.startedAt === null) return 0
-    return (s.finishedAt ?? now.value) - s.startedAt
+    return !s || s.startedAt === null ? 0 : (s.finishedAt ?? core.now.value) - s.startedAt
   })
-  const remainingMs = computed(() => {
-    const limit = state.value?.limits.timeLimitMs ?? null
-    return limit === null ? null : Math.max(0, limit - elapsedMs.value)
-  })
-  const answered = computed(() => state.value?.records.length ?? 0)
-  const correct = computed(() => state.value?.records.filter((r) => r.grade.correct).length ?? 0)
-
-  function update(next: engine.SessionState<Q>) {
-    const before = state.value
-    state.value = next
-    if (next.status === 'finished' && before?.status !== 'finished') onFinished()
-    const question = engine.currentQuestion(next)
-    const moved =
-      !before ||
-      before.status === 'ready' ||
-      before.status === 'finished' ||
-      before.index !== next.index
-    if (question && next.status === 'asking' && moved) options.onQuestion?.(question)
-  }
-
-  function onFinished() {
-    clearInterval(clock)
-    clearTimeout(advance)
-    void attempts.flush()
-  }
-
-  function record(entry: AnswerRecord<Q>) {
-    breaks.markActivity()
-    attempts.record(toAttempt(options.drill, sessionId.value, entry, options.context()))
-  }
-
-  /** Starts a new session with these questions (a fresh session id). */
-  function start(questions: readonly Q[], limits: engine.SessionLimits = { timeLimitMs: null }) {
-    clearTimeout(advance)
-    clearInterval(clock)
-    sessionId.value = crypto.randomUUID()
-    now.value = performance.now()
-    update(engine.startSession(engine.createSession(questions, limits), now.value))
-    clock = setInterval(() => {
-      now.value = performance.now()
-      if (state.value) update(engine.tick(state.value, now.value))
-    }, CLOCK_MS)
-  }
-
-  /** Grades an answer; `at` (performance.now()) is when the student gave it, if before now. */
-  function answer(given: A, at?: number) {
-    const s = state.value
-    const question = current.value
-    if (!s || s.status !== 'asking' || !question) return
-    applyGrade(options.grader().grade(question, given, s.picks), at)
-  }
-
-  /** "Show me": a miss that reveals the answer. */
-  function reveal() {
-    const s = state.value
-    const question = current.value
-    if (!s || s.status !== 'asking' || !question) return
-    applyGrade(options.grader().reveal(question, s.picks))
-  }
-
-  function applyGrade(grade: ReturnType<DrillGrader<Q, A>['grade']>, at?: number) {
-    const s = state.value
-    if (!s) return
-    const next = engine.answerQuestion(s, grade, Math.min(at ?? Infinity, performance.now()))
-    if (grade.counted) record(next.records[next.records.length - 1] as AnswerRecord<Q>)
-    update(next)
-    if (next.status === 'feedback' && grade.correct && (options.autoAdvanceMs ?? 700) > 0) {
-      advance = setTimeout(goNext, options.autoAdvanceMs ?? 700)
-    }
-  }
-
-  function goNext() {
-    clearTimeout(advance)
-    if (state.value) update(engine.nextQuestion(state.value, performance.now()))
-  }
-
-  /** The student ends the session early (answers so far are kept). */
-  function stop() {
-    if (state.value) update(engine.finishSession(state.value, performance.now(), 'stopped'))
-  }
-
-  /** A new session from the misses of the finished one; false when there were none. */
-  function retryMisses(): boolean {
-    const s = state.value
-    if (!s || s.status !== 'finished') return false
-    const questions = retryQuestions(s)
-    if (questions.length === 0) return false
-    start(questions, { timeLimitMs: null })
-    return true
-  }
-
-  /** Back to the setup (no session). */
-  function reset() {
-    if (state.value && state.value.status !== 'finished') stop()
-    state.value = null
-  }
-
-  onBeforeUnmount(() => {
-    clearInterval(clock)
-    clearTimeout(advance)
-    if (state.value?.records.length) void attempts.flush()
-  })
-
   return {
-    state,
-    sessionId,
-    status,
-    current,
-    summary,
+    status: computed(() => state.value?.status ?? 'ready'),
+    current: computed(() => (state.value ? engine.currentQuestion(state.value) : null)),
+    summary: computed(() => (state.value?.status === 'finished' ? summarize(state.value) : null)),
     elapsedMs,
-    remainingMs,
-    answered,
-    correct,
-    start,
-    answer,
-    reveal,
-    next: goNext,
-    stop,
-    retryMisses,
-    reset,
+    remainingMs: computed(() => {
+      const limit = state.value?.limits.timeLimitMs ?? null
+      return limit === null ? null : Math.max(0, limit - elapsedMs.value)
+    }),
+    answered: computed(() => state.value?.records.length ?? 0),
+    correct: computed(() => state.value?.records.filter((r) => r.grade.correct).length ?? 0),
+  }
+}
+
+function createCore<Q extends DrillQuestion, A>(options: DrillSessionOptions<Q, A>): Core<Q, A> {
+  const attempts = useAttemptsStore()
+  const breaks = useBreakReminder()
+  const sessionId = ref<string>(crypto.randomUUID())
+  return {
+    options,
+    state: shallowRef(null),
+    sessionId,
+    now: ref(performance.now()),
+    timers: {},
+    record(entry) {
+      breaks.markActivity()
+      attempts.record(toAttempt(options.drill, sessionId.value, entry, options.context()))
+    },
+    flush: () => void attempts.flush(),
+  }
+}
+
+export function useDrillSession<Q extends DrillQuestion, A>(options: DrillSessionOptions<Q, A>) {
+  const core = createCore(options)
+  onBeforeUnmount(() => {
+    stopTimers(core.timers)
+    if (core.state.value?.records.length) core.flush()
+  })
+  const finish = (reason: 'stopped') => {
+    if (core.state.value)
+      update(core, engine.finishSession(core.state.value, performance.now(), reason))
+  }
+  return {
+    state: core.state,
+    sessionId: core.sessionId,
+    ...sessionViews(core),
+    /** Starts a new session with these questions (a fresh session id). */
+    start: (questions: readonly Q[], limits?: engine.SessionLimits) =>
+      start(core, questions, limits),
+    /** Grades an answer; `at` (performance.now()) is when the student gave it, if before now. */
+    answer: (given: A, at?: number) =>
+      applyGrade(core, (g, q, picks) => g.grade(q, given, picks), at),
+    /** "Show me": a miss that reveals the answer. */
+    reveal: () => applyGrade(core, (g, q, picks) => g.reveal(q, picks)),
+    next: () => goNext(core),
+    /** The student ends the session early (answers so far are kept). */
+    stop: () => finish('stopped'),
+    retryMisses: () => retryMisses(core),
+    /** Back to the setup (no session). */
+    reset: () => {
+      if (core.state.value && core.state.value.status !== 'finished') finish('stopped')
+      core.state.value = null
+    },
   }
 }
 

@@ -2,7 +2,7 @@
 // this browser, else defaults made for the player's instrument once it has loaded (remembered
 // settings that do not fit this instrument are replaced by those defaults too).
 import { ref, watch, type Ref } from 'vue'
-import { DRILL_SETTINGS_SCHEMAS, type DrillId, type DrillSettings } from '../drill-settings'
+import { drillContract, type DrillId, type DrillSettings } from '../../contract/drills'
 import { copySettings, loadSettings } from './remembered-settings'
 import type { DrillNeck } from './useDrillNeck'
 import type { LoadedPlanItem } from './usePlanItem'
@@ -22,7 +22,7 @@ export function useDrillSettings<D extends DrillId>(
   options: DrillSettingsOptions<D>,
 ): Ref<DrillSettings[D]> {
   const { drill, neck } = options
-  const remembered = loadSettings(drill, DRILL_SETTINGS_SCHEMAS[drill]) as DrillSettings[D] | null
+  const remembered = loadSettings(drill, drillContract(drill).settings) as DrillSettings[D] | null
   const settings = ref(remembered ?? options.defaults(neck.value)) as Ref<DrillSettings[D]>
 
   let checked = false // only when the instrument first arrives; later changes are the student's

@@ -1,6 +1,6 @@
 // Sound for a drill: the app's pitch player (useSound) with an unlock that never holds a session up
 // (a browser that refuses audio leaves the drill silent, not stuck).
-import { ref } from 'vue'
+import { computed, ref } from 'vue'
 import { useSound } from '../../audio'
 
 const UNLOCK_WAIT_MS = 1500
@@ -32,3 +32,17 @@ export function useDrillSound() {
 }
 
 export type DrillSound = ReturnType<typeof useDrillSound>
+
+/** The sound of a drill that plays no notes: nothing is loaded, nothing sounds. */
+export function silentSound(): DrillSound {
+  const nothing = () => undefined
+  return {
+    enabled: computed(() => false),
+    failed: ref(false),
+    unlock: async () => undefined,
+    play: nothing,
+    playSequence: nothing,
+    startClick: nothing,
+    stopClick: nothing,
+  }
+}

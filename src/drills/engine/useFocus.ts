@@ -2,7 +2,7 @@
 // keys for the other drills. Any failure falls back to the drill's own order, and says so.
 import { ref } from 'vue'
 import { fetchFocus } from '../../api/focus'
-import type { DrillId } from '../drill-settings'
+import type { DrillId } from '../../contract/drills'
 import type { FocusCell } from '../recall/recall-generator'
 
 export interface FocusRequest {

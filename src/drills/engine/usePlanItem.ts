@@ -1,12 +1,12 @@
 // A drill opened from a practice plan (/practice/<drill>?planItem=<id>): loads the item, checks it is
 // for this drill, and gives its settings, title and target; every attempt then carries its id.
-import { computed, ref, watch } from 'vue'
+import { computed, ref, watch, type Ref } from 'vue'
 import { useRoute } from 'vue-router'
 import { ApiError } from '../../api/http'
 import { fetchPlanItem } from '../../api/plans'
-import { describeTarget } from '../../plans/plan-text'
-import { DRILL_SETTINGS_SCHEMAS, DRILLS, type DrillId, type DrillSettings } from '../drill-settings'
-import type { PracticeTarget } from '../drill-settings'
+import { describeTarget } from '../../contract/targets'
+import { drillContract, drillName, type DrillId, type DrillSettings } from '../../contract/drills'
+import type { PracticeTarget } from '../../contract/targets'
 
 export interface LoadedPlanItem<D extends DrillId> {
   id: string
@@ -19,7 +19,7 @@ export interface LoadedPlanItem<D extends DrillId> {
 
 export function usePlanItem<D extends DrillId>(drill: D) {
   const route = useRoute()
-  const item = ref<LoadedPlanItem<D> | null>(null)
+  const item = ref(null) as Ref<LoadedPlanItem<D> | null>
   const isLoading = ref(false)
   const error = ref<string | null>(null)
   const requestedId = computed(() =>
@@ -34,7 +34,7 @@ export function usePlanItem<D extends DrillId>(drill: D) {
     try {
       const context = await fetchPlanItem(id)
       if (context.preset.drill !== drill) {
-        error.value = `This plan item is for ${DRILLS[context.preset.drill].name}, not ${DRILLS[drill].name}.`
+        error.value = `This plan item is for ${drillName(context.preset.drill)}, not ${drillName(drill)}.`
         return
       }
       item.value = {
@@ -44,7 +44,7 @@ export function usePlanItem<D extends DrillId>(drill: D) {
         targetText: describeTarget(context.target),
         dueAt: context.dueAt,
         // parsed again: fills defaults added since the plan was saved
-        settings: DRILL_SETTINGS_SCHEMAS[drill].parse(context.preset.settings) as DrillSettings[D],
+        settings: drillContract(drill).settings.parse(context.preset.settings) as DrillSettings[D],
       }
     } catch (e) {
       error.value = e instanceof ApiError ? e.message : 'The plan item could not be loaded.'

@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest'
-import { HuntSettingsSchema } from '../drill-settings'
+import { HuntSettingsSchema } from '../../contract/drills'
 import { huntCells, huntQuestions, type HuntPlan } from './hunt-generator'
 
 const BASS = [28, 33, 38, 43] // E1 A1 D2 G2 (common practice)

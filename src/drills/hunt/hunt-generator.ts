@@ -6,7 +6,7 @@ import {
   type FrettedNote,
   type Position,
 } from '../../theory'
-import type { HuntSettings } from '../drill-settings'
+import type { HuntSettings } from '../../contract/drills'
 import type { DrillQuestion } from '../engine/types'
 import type { FocusCell } from '../recall/recall-generator'
 

@@ -1,7 +1,7 @@
 // Pitch Hunt on the page: a pitch is played (and optionally named), the student finds it on the neck.
 import { computed, ref } from 'vue'
 import type { CellMark } from '../../components/fretboard/fretboard-types'
-import { HuntSettingsSchema } from '../drill-settings'
+import { HuntSettingsSchema } from '../../contract/drills'
 import { notePitch } from '../drill-format'
 import { useFrameProps } from '../engine/frame-props'
 import type { PickedCell } from '../engine/locate'

@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest'
-import { RecallSettingsSchema } from '../drill-settings'
+import { RecallSettingsSchema } from '../../contract/drills'
 import { clipRegion, recallQuestions, regionCells, type RecallPlan } from './recall-generator'
 
 const BASS = [28, 33, 38, 43] // E1 A1 D2 G2 (common practice)

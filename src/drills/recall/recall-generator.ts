@@ -9,7 +9,7 @@ import {
   type FrettedNote,
   type Position,
 } from '../../theory'
-import type { RecallSettings } from '../drill-settings'
+import type { RecallSettings } from '../../contract/drills'
 import type { DrillQuestion } from '../engine/types'
 
 export interface RecallQuestion extends DrillQuestion {

@@ -3,7 +3,7 @@
 import { computed, ref } from 'vue'
 import type { CellMark } from '../../components/fretboard/fretboard-types'
 import { toUnicode } from '../../theory'
-import { RecallSettingsSchema, type RecallSettings } from '../drill-settings'
+import { RecallSettingsSchema, type RecallSettings } from '../../contract/drills'
 import { useFrameProps } from '../engine/frame-props'
 import { saveSettings } from '../engine/remembered-settings'
 import { limitsOf } from '../engine/session'

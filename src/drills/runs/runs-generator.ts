@@ -8,7 +8,7 @@ import {
   type Fingering,
   type Position,
 } from '../../theory'
-import type { RunsSettings } from '../drill-settings'
+import type { RunsSettings } from '../../contract/drills'
 import type { DrillQuestion } from '../engine/types'
 
 /** Above this many fingerings only the count is shown (listing them all would stall the page). */

@@ -2,7 +2,7 @@
 // can offer the one practised least. Without it (no history, or a failure) the list keeps its order.
 import { ref, watch, type Ref } from 'vue'
 import { fetchFingerings } from '../../api/progress'
-import type { RunsSettings } from '../drill-settings'
+import type { RunsSettings } from '../../contract/drills'
 import type { DrillNeck } from '../engine/useDrillNeck'
 import type { PatternPractice } from './runs-generator'
 

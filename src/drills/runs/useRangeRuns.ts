@@ -3,7 +3,7 @@
 import { computed, ref, watch } from 'vue'
 import type { CellMark } from '../../components/fretboard/fretboard-types'
 import { toUnicode, type Fingering } from '../../theory'
-import { RunsSettingsSchema, type RunsSettings } from '../drill-settings'
+import { RunsSettingsSchema, type RunsSettings } from '../../contract/drills'
 import { useFrameProps } from '../engine/frame-props'
 import type { PickedCell } from '../engine/locate'
 import { locateMarks } from '../engine/locate-marks'

@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest'
-import { ScatterSettingsSchema } from '../drill-settings'
+import { ScatterSettingsSchema } from '../../contract/drills'
 import { scatterQuestions, scatterWindow, sequenceSeed } from './scatter-generator'
 
 const NECK = { tuning: [28, 33, 38, 43], frets: 20 } // E1 A1 D2 G2: range E1 (28) to Eb4 (63), arithmetic

@@ -1,6 +1,6 @@
 // Octave Scatter: root-to-root scales whose notes land in random octaves, reproducible from a seed.
 import { instrumentRange, octaveScatter, type PitchWindow, type Scatter } from '../../theory'
-import type { ScatterSettings } from '../drill-settings'
+import type { ScatterSettings } from '../../contract/drills'
 import type { DrillQuestion } from '../engine/types'
 
 export interface ScatterQuestion extends DrillQuestion {

@@ -3,7 +3,7 @@
 import { computed, ref, watch } from 'vue'
 import type { CellMark } from '../../components/fretboard/fretboard-types'
 import { instrumentRange, toUnicode } from '../../theory'
-import { ScatterSettingsSchema, type ScatterSettings } from '../drill-settings'
+import { ScatterSettingsSchema, type ScatterSettings } from '../../contract/drills'
 import { useFrameProps } from '../engine/frame-props'
 import type { PickedCell } from '../engine/locate'
 import { locateMarks } from '../engine/locate-marks'

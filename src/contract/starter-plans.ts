@@ -1,7 +1,9 @@
 // The starter library: ready-made plans a teacher copies and adapts. Settings are parsed through the
 // shared drill schemas at load time, so every default is filled in and a bad entry fails loudly.
-import { DrillPresetSchema, PracticeTargetSchema } from '../../src/drills/drill-settings'
-import type { StarterPlan } from './plans-schema'
+// Both sides read it: the API serves it to teachers and the demo seed assigns two of its plans.
+import { DrillPresetSchema } from './drills'
+import type { StarterPlan } from './plans'
+import { PracticeTargetSchema } from './targets'
 
 interface StarterInput {
   key: string

@@ -1,6 +1,7 @@
 // One graded answer of a drill, as the client sends it in batches (the contract for POST /api/attempts).
+// The server stores any flat `detail`; what each drill puts there is typed per drill (DrillAttempt).
 import { z } from 'zod'
-import { DrillIdSchema } from '../../src/drills/drill-settings'
+import { DrillIdSchema, type DrillDetail, type DrillId } from './drills'
 
 export const MAX_ATTEMPT_BATCH = 200
 
@@ -28,6 +29,12 @@ export const AttemptInputSchema = z.strictObject({
   planItemId: z.uuid().nullable().default(null),
 })
 export type AttemptInput = z.infer<typeof AttemptInputSchema>
+
+/** An attempt of one drill, with the detail that drill's contract describes. */
+export type DrillAttempt<D extends DrillId> = Omit<AttemptInput, 'drill' | 'detail'> & {
+  drill: D
+  detail: DrillDetail[D]
+}
 
 /** How far ahead of the server's clock an answer may be dated (devices' clocks drift). */
 export const MAX_CLOCK_SKEW_MS = 24 * 3600 * 1000

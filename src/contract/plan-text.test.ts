@@ -1,7 +1,9 @@
 // Plain-language plan items, as e-mails, the plan editor and the drill banner show them.
 import { describe, expect, it } from 'vitest'
-import { DrillPresetSchema, PracticeTargetSchema } from '../drills/drill-settings'
-import { describePreset, describeTarget } from './plan-text'
+import { DrillPresetSchema } from './drills'
+import { PracticeTargetSchema } from './targets'
+import { describePreset } from './drills'
+import { describeTarget } from './targets'
 
 describe('describeTarget', () => {
   it.each([

@@ -1,0 +1,76 @@
+// The teacher's roster: one row per student with the week's practice, plan progress, weak spots and
+// a status; and GET /api/studio/students, one row per studio membership (a contract outside checks use).
+
+/** GET /api/studio/students: one row per studio membership. */
+export interface StudioStudent {
+  id: string
+  name: string
+  email: string
+  studioId: string
+  studioName: string
+  joinedAt: string
+  lastPracticeAt: string | null
+  accuracy: number | null
+}
+
+export const ROSTER_STATUSES = ['behind', 'on-track', 'inactive'] as const
+export type RosterStatus = (typeof ROSTER_STATUSES)[number]
+
+export const ROSTER_SORT_KEYS = [
+  'name',
+  'email',
+  'lastPracticeAt',
+  'minutesThisWeek',
+  'accuracy',
+  'recallTrend',
+  'planCompletion',
+  'status',
+] as const
+export type RosterSortKey = (typeof ROSTER_SORT_KEYS)[number]
+
+export interface WeakSpot {
+  string: number
+  fret: number
+  /** e.g. "A string, fret 7 (E2)" */
+  label: string
+  accuracy: number
+  attempts: number
+}
+
+export interface RecallTrend {
+  /** Median response of correct answers in the last 7 days, and in the 7 days before. */
+  medianMs: number | null
+  previousMedianMs: number | null
+  /** this week's median / last week's − 1: negative when recall got faster (−0.1 = 10 % faster). */
+  change: number | null
+  direction: 'faster' | 'slower' | 'steady' | null
+}
+
+export interface RosterRow {
+  id: string
+  name: string
+  email: string
+  studios: { id: string; name: string }[]
+  lastPracticeAt: string | null
+  minutesThisWeek: number
+  attemptsThisWeek: number
+  /** Share of correct answers over the last 7 days. */
+  accuracy: number | null
+  recall: RecallTrend
+  plans: {
+    assigned: number
+    complete: number
+    overdue: number
+    targetsMet: number
+    targetsTotal: number
+  }
+  /** targetsMet / targetsTotal over assigned plans; null with none assigned. */
+  planCompletion: number | null
+  weakSpots: WeakSpot[]
+  status: RosterStatus
+}
+
+export interface RosterPage {
+  total: number
+  items: RosterRow[]
+}
