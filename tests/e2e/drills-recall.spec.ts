@@ -21,9 +21,12 @@ describe('practice page', () => {
         await expect.poll(() => page.getByTestId(`drill-card-${drill}`).isVisible()).toBe(true)
       }
       expect(await page.getByTestId('drill-card-hunt').textContent()).toContain('Hear a pitch')
+      // The student's plans load above the cards: click once the page has stopped moving.
+      await page.locator('[data-testid="assigned-plans"][data-ready="true"]').waitFor()
       await screenshot(page, `drills-practice-${name}`)
       await page.getByTestId('drill-card-recall').click()
-      await page.waitForURL('**/practice/recall')
+      await page.getByRole('heading', { level: 1, name: 'Neck Recall' }).waitFor()
+      expect(new URL(page.url()).pathname).toBe('/practice/recall')
       await context.close()
     }
   })

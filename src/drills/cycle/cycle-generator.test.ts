@@ -1,12 +1,6 @@
 import { describe, expect, it } from 'vitest'
-import { CycleSettingsSchema } from '../../contract/drills'
-import {
-  cycleKeys,
-  cycleQuestions,
-  defaultWindow,
-  lowestToneOf,
-  planCycle,
-} from './cycle-generator'
+import { cycleKeys, CycleSettingsSchema } from '../../contract/drills'
+import { cycleQuestions, defaultWindow, lowestToneOf, planCycle } from './cycle-generator'
 
 const BASS = { tuning: [28, 33, 38, 43], frets: 20 } // E1 A1 D2 G2 (common practice)
 const settings = (extra: object = {}) => CycleSettingsSchema.parse({ low: 36, high: 48, ...extra })

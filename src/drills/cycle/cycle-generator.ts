@@ -1,7 +1,5 @@
 // Window Cycle: the keys of a cycle played root to octave inside a low/high window.
 import {
-  customCycle,
-  cycleTonics,
   instrumentRange,
   keyCycleInWindow,
   lowestScaleTone,
@@ -10,7 +8,7 @@ import {
   type ScaleTone,
   type WindowKey,
 } from '../../theory'
-import type { CycleSettings } from '../../contract/drills'
+import { cycleKeys, type CycleSettings } from '../../contract/drills'
 import type { DrillQuestion } from '../engine/types'
 
 export interface CycleQuestion extends DrillQuestion {
@@ -29,14 +27,6 @@ export interface CycleQuestion extends DrillQuestion {
 export interface CycleNeck {
   tuning: readonly number[]
   frets: number
-}
-
-/** The tonics of the chosen cycle (spelled for the scale), starting on C, or the custom list. */
-export function cycleKeys(
-  settings: Pick<CycleSettings, 'cycle' | 'customTonics' | 'scale'>,
-): string[] {
-  if (settings.cycle === 'custom') return customCycle(settings.customTonics)
-  return cycleTonics(settings.cycle, { scale: settings.scale })
 }
 
 /** A first window for a new student: the first four frets of the neck, else the lowest octave. */

@@ -3,7 +3,7 @@
 // question's cell (skipping places already found).
 import { positionsOf, type Position } from '../../theory'
 import { nearestPlace, sameCell, type PickedCell } from './locate'
-import type { Grade } from './types'
+import type { DrillQuestion, Grade } from './types'
 
 /** Where `pitch` sounds on this neck nearest `near`; null when the neck cannot play it. */
 export function placeOfPitch(
@@ -21,3 +21,13 @@ export function placeOfPitch(
 /** The places this question's right picks already found. */
 export const foundCells = (picks: readonly Grade[]): Position[] =>
   picks.flatMap((grade) => (grade.correct && grade.pick ? [grade.pick] : []))
+
+/** How a drill answered on the board takes its answers: a pick as it is, a played note at its place. */
+export const LOCATE_ANSWERS = {
+  picked: (cell: PickedCell) => cell,
+  heard: (
+    pitch: number,
+    question: DrillQuestion,
+    context: { neck: { tuning: readonly number[]; frets: number }; picks: readonly Grade[] },
+  ) => placeOfPitch(context.neck, pitch, question.cell, foundCells(context.picks)),
+}

@@ -9,7 +9,8 @@ import {
   type Position,
 } from '../../theory'
 import { sameCell } from './locate'
-import type { Grade } from './types'
+import type { SessionState } from './session'
+import type { DrillQuestion, Grade } from './types'
 
 export interface LocateMarkOptions {
   tuning: readonly number[]
@@ -40,4 +41,22 @@ export function locateMarks(options: LocateMarkOptions): CellMark[] {
       marks.push({ ...cell, kind: 'hint', label: options.expectedLabel })
   }
   return marks
+}
+
+/** The marks of the current question's picks, for a session answered on the board. */
+export function currentPickMarks<Q extends DrillQuestion>(
+  session: { current: { value: Q | null }; state: { value: SessionState<Q> | null } },
+  neck: { tuning: readonly number[]; accidentals: AccidentalPreference },
+  expectedLabel: (question: Q) => string,
+): CellMark[] {
+  const question = session.current.value
+  const state = session.state.value
+  if (!question || !state) return []
+  return locateMarks({
+    tuning: neck.tuning,
+    accidentals: neck.accidentals,
+    picks: state.picks,
+    answered: state.status === 'feedback',
+    expectedLabel: expectedLabel(question),
+  })
 }

@@ -98,6 +98,8 @@ export function useDrill<D extends DrillId, Q extends DrillQuestion, A, R = void
     ...parts,
     canStart: computed(() => !problem.value && !plan.isLoading.value),
     begin: (request?: R) => begin(parts, setup, context, request),
+    /** An answer given on the page (a typed or picked note name); `at` is when it was given. */
+    answer: (given: A, at?: number) => answerWith(parts, given, at),
     pick: (cell: PickedCell) => answerWith(parts, setup.picked?.(cell) ?? null, undefined, cell),
     answerPitch: (pitch: number, timing: NoteTiming) => {
       const question = session.current.value

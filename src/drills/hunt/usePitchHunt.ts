@@ -1,116 +1,53 @@
-// Pitch Hunt on the page: a pitch is played (and optionally named), the student finds it on the neck.
-import { computed, ref } from 'vue'
-import type { CellMark } from '../../components/fretboard/fretboard-types'
-import { HuntSettingsSchema } from '../../contract/drills'
+// Pitch Hunt on the page: a pitch is played (and optionally named), the student finds it on the
+// neck; weak spots are asked first.
+import { computed } from 'vue'
 import { notePitch } from '../drill-format'
-import { useFrameProps } from '../engine/frame-props'
-import type { PickedCell } from '../engine/locate'
-import { locateMarks } from '../engine/locate-marks'
-import { saveSettings } from '../engine/remembered-settings'
-import { limitsOf } from '../engine/session'
-import { useDrillNeck } from '../engine/useDrillNeck'
-import { attemptContext, useDrillSession } from '../engine/useDrillSession'
-import { useDrillSettings } from '../engine/useDrillSettings'
-import { useDrillSound } from '../engine/useDrillSound'
-import { useFocus } from '../engine/useFocus'
-import { usePlanItem } from '../engine/usePlanItem'
+import { LOCATE_ANSWERS } from '../engine/heard-pitch'
+import { currentPickMarks } from '../engine/locate-marks'
+import { useDrill, type DrillContext } from '../engine/useDrill'
+import type { useFocus } from '../engine/useFocus'
+import { huntDrill } from './definition'
 import { huntGrader } from './hunt-grader'
 import { huntQuestions, type HuntQuestion } from './hunt-generator'
 
+async function prepare(context: DrillContext<'hunt'> & { focus: ReturnType<typeof useFocus> }) {
+  const { neck, focus } = context
+  const chosen = {
+    ...context.settings,
+    highFret: Math.min(context.settings.highFret, neck.frets),
+  }
+  const region = { lowFret: Math.min(chosen.lowFret, chosen.highFret), highFret: chosen.highFret }
+  const n = Math.min(chosen.questionCount ?? 24, 50)
+  const instrumentId = neck.instrumentId
+  const weak = chosen.focus ? await focus.weakCells({ drill: 'hunt', instrumentId, n, region }) : []
+  const seed = Math.floor(Math.random() * 2 ** 31)
+  const { tuning, frets } = neck
+  const questions = huntQuestions({ tuning, frets, settings: chosen, seed, focus: weak })
+  return { questions, remember: chosen }
+}
+
 export function usePitchHunt() {
-  const { neck, ready, settled, error: instrumentError } = useDrillNeck()
-  const plan = usePlanItem('hunt')
-  const focus = useFocus()
-  const sound = useDrillSound()
-  const settings = useDrillSettings({
-    drill: 'hunt',
-    neck,
-    ready,
-    planItem: plan.item,
-    defaults: () => HuntSettingsSchema.parse({}),
-  })
+  const drill = useDrill<'hunt', HuntQuestion, ReturnType<typeof LOCATE_ANSWERS.picked>>(
+    huntDrill,
+    {
+      ...LOCATE_ANSWERS,
+      grader: ({ neck, settings }) => huntGrader(neck, settings.findAll),
+      prepare,
+      autoAdvanceMs: 900,
+      onQuestion: (question) => drill.sound.play(question.expectedPitch),
+    },
+  )
+  const { session, neck, sound } = drill
   // Without sound the pitch can only be read: show its name whatever the setting says.
-  const showName = computed(() => settings.value.showName || !sound.enabled.value)
-
-  const session = useDrillSession<HuntQuestion, PickedCell>({
-    drill: 'hunt',
-    grader: () => huntGrader(neck.value, settings.value.findAll),
-    context: attemptContext(neck, plan),
-    autoAdvanceMs: 900,
-    onQuestion: (question) => sound.play(question.expectedPitch),
-  })
-  const starting = ref(false)
-
-  async function begin() {
-    starting.value = true
-    await sound.unlock()
-    const chosen = {
-      ...settings.value,
-      highFret: Math.min(settings.value.highFret, neck.value.frets),
-    }
-    if (!plan.item.value) saveSettings('hunt', chosen)
-    const count = chosen.questionCount ?? 24
-    const region = { lowFret: Math.min(chosen.lowFret, chosen.highFret), highFret: chosen.highFret }
-    const weak = chosen.focus
-      ? await focus.weakCells({
-          drill: 'hunt',
-          instrumentId: neck.value.instrumentId,
-          n: Math.min(count, 50),
-          region,
-        })
-      : []
-    const seed = Math.floor(Math.random() * 2 ** 31)
-    session.start(
-      huntQuestions({
-        tuning: neck.value.tuning,
-        frets: neck.value.frets,
-        settings: chosen,
-        seed,
-        focus: weak,
-      }),
-      limitsOf(chosen),
-    )
-    starting.value = false
-  }
-
-  function pick(cell: PickedCell) {
-    if (session.status.value !== 'asking') return
-    sound.play(cell.pitch)
-    session.answer(cell)
-  }
-
+  const showName = computed(() => drill.settings.value.showName || !sound.enabled.value)
   const replay = () => {
     const question = session.current.value
     if (question) sound.play(question.expectedPitch)
   }
-
-  const marks = computed<CellMark[]>(() => {
-    const question = session.current.value
-    if (!question) return []
-    return locateMarks({
-      tuning: neck.value.tuning,
-      accidentals: neck.value.accidentals,
-      picks: session.state.value?.picks ?? [],
-      answered: session.status.value === 'feedback',
-      expectedLabel: notePitch(question.expectedPitch, neck.value.accidentals),
-    })
-  })
-
-  return {
-    neck,
-    instrumentError,
-    settled,
-    plan,
-    focus,
-    sound,
-    settings,
-    showName,
-    session,
-    starting,
-    begin,
-    pick,
-    replay,
-    marks,
-    frame: useFrameProps(session, neck),
-  }
+  const marks = computed(() =>
+    currentPickMarks(session, neck.value, (q) =>
+      notePitch(q.expectedPitch, neck.value.accidentals),
+    ),
+  )
+  return { ...drill, showName, replay, marks }
 }
