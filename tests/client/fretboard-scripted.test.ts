@@ -1,6 +1,6 @@
 // Scripted SVG on a drawn board: the run marker (animateRun) and the exported image (boardSvgMarkup).
 import { mount } from '@vue/test-utils'
-import { afterEach, describe, expect, it } from 'vitest'
+import { afterEach, describe, expect, it, vi } from 'vitest'
 import { animateRun } from '../../src/components/fretboard/animate-run'
 import { boardSvgMarkup, exportBoardImage } from '../../src/components/fretboard/board-export'
 import FretboardBoard from '../../src/components/fretboard/FretboardBoard.vue'
@@ -27,38 +27,42 @@ function centreOf(svg: SVGSVGElement, string: number, fret: number) {
 }
 
 afterEach(() => {
+  vi.useRealTimers()
   document.body.innerHTML = ''
 })
 
 describe('animateRun', () => {
   it('moves a marker through the cells in order, then removes it', async () => {
+    // The animation's clock is faked and stepped: what is checked never depends on the machine's speed.
+    vi.useFakeTimers({
+      toFake: ['requestAnimationFrame', 'cancelAnimationFrame', 'performance', 'setTimeout'],
+    })
     const { svg } = drawnBoard()
     const cells = [
       { string: 0, fret: 3 },
       { string: 1, fret: 0 },
       { string: 1, fret: 2 },
     ]
+    // 600 BPM: a beat is 100 ms; each step glides for 35 % of a beat, then rests on the cell.
     const run = animateRun(svg, cells, { bpm: 600 })
     const marker = svg.querySelector('.fb-run-marker')!
-    const start = centreOf(svg, 0, 3)
-    expect(Number(marker.getAttribute('cx'))).toBeCloseTo(start.x, 3)
-    expect(Number(marker.getAttribute('cy'))).toBeCloseTo(start.y, 3)
-    const seen: { x: number; y: number }[] = []
-    const watch = setInterval(
-      () =>
-        seen.push({ x: Number(marker.getAttribute('cx')), y: Number(marker.getAttribute('cy')) }),
-      5,
-    )
+    const at = () => ({
+      x: Number(marker.getAttribute('cx')),
+      y: Number(marker.getAttribute('cy')),
+    })
+    const expectAt = (cell: { string: number; fret: number }) => {
+      const centre = centreOf(svg, cell.string, cell.fret)
+      expect(at().x).toBeCloseTo(centre.x, 1)
+      expect(at().y).toBeCloseTo(centre.y, 1)
+    }
+    expectAt(cells[0]!)
+    await vi.advanceTimersByTimeAsync(170) // resting on the second cell (glide 100–135 ms)
+    expectAt(cells[1]!)
+    await vi.advanceTimersByTimeAsync(100) // resting on the third (glide 200–235 ms)
+    expectAt(cells[2]!)
+    expect(svg.querySelector('.fb-run-marker')).not.toBeNull()
+    await vi.advanceTimersByTimeAsync(200) // past the last beat
     await run.finished
-    clearInterval(watch)
-    const end = centreOf(svg, 1, 2)
-    const last = seen.at(-1)!
-    expect(last.x).toBeCloseTo(end.x, 1)
-    expect(last.y).toBeCloseTo(end.y, 1)
-    const middle = centreOf(svg, 1, 0)
-    expect(seen.some((p) => Math.abs(p.x - middle.x) < 0.5 && Math.abs(p.y - middle.y) < 0.5)).toBe(
-      true,
-    )
     expect(svg.querySelector('.fb-run-marker')).toBeNull()
   })
 

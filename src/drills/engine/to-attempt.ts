@@ -1,6 +1,7 @@
-// One graded answer as the attempts API stores it (server/attempts/attempts-schema.ts).
-import type { AttemptInput } from '../../contract/attempts'
-import type { DrillId } from '../../contract/drills'
+// One graded answer as the attempts API stores it (src/contract/attempts.ts), with the detail its
+// drill's contract describes (question detail and grade detail together).
+import type { DrillAttempt } from '../../contract/attempts'
+import type { DrillDetail, DrillId } from '../../contract/drills'
 import type { AnswerRecord, DrillQuestion } from './types'
 
 export interface AttemptContext {
@@ -11,13 +12,13 @@ export interface AttemptContext {
 
 const MAX_RESPONSE_MS = 600_000
 
-export function toAttempt<Q extends DrillQuestion>(
-  drill: DrillId,
+export function toAttempt<D extends DrillId, Q extends DrillQuestion>(
+  drill: D,
   sessionId: string,
   entry: AnswerRecord<Q>,
   context: AttemptContext,
   createdAt: Date = new Date(),
-): AttemptInput {
+): DrillAttempt<D> {
   const { question, grade } = entry
   return {
     id: crypto.randomUUID(),
@@ -32,7 +33,7 @@ export function toAttempt<Q extends DrillQuestion>(
     correct: grade.correct,
     responseMs: Math.min(MAX_RESPONSE_MS, Math.max(0, Math.round(entry.responseMs))),
     createdAt: createdAt.toISOString(),
-    detail: { ...question.detail, ...grade.detail },
+    detail: { ...question.detail, ...grade.detail } as DrillDetail[D],
     planItemId: context.planItemId,
   }
 }
