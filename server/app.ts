@@ -15,12 +15,12 @@ import { apiNotFound, errorHandler } from './lib/errors'
 import { attemptsRoutes } from './attempts/attempts-routes'
 import { focusRoutes } from './focus/focus-routes'
 import { progressRoutes } from './progress/progress-routes'
-import { studioRoutes } from './studio/studio-routes'
-import { invitationRoutes } from './studio/invitation-routes'
+import { mountAssignments } from './assignments/assignments-routes'
+import { mountDigests } from './digests/digest-routes'
+import { mountInvitations } from './invitations/invitations-routes'
 import { planRoutes } from './plans/plans-routes'
-import { commentRoutes } from './comments/comments-routes'
-import { recordingRoutes } from './recordings/recordings-routes'
-import { digestRoutes } from './notifications/digest-routes'
+import { mountRoster } from './roster/roster-routes'
+import { mountStudios } from './studios/studios-routes'
 
 // Same-origin only; blob: for recorded audio, audio worklets and exported board images.
 const CSP_DIRECTIVES = {
@@ -37,13 +37,13 @@ function apiRouter(ctx: AppContext) {
   api.use(express.json({ limit: '256kb' }))
   api.use('/health', healthRoutes(ctx))
   api.use('/auth', authRoutes(ctx))
+  mountDigests(api, ctx) // under /admin/digests: before the admin router's own guard
   api.use('/admin', adminRoutes(ctx))
-  api.use('/studio', studioRoutes(ctx))
-  api.use('/invitations', invitationRoutes(ctx))
+  mountInvitations(api, ctx) // its invite route lies under a studio's path
+  mountStudios(api, ctx)
+  mountRoster(api, ctx)
   api.use('/plans', planRoutes(ctx))
-  api.use('/assignments', commentRoutes(ctx))
-  api.use('/recordings', recordingRoutes(ctx))
-  api.use('/admin/digests', digestRoutes(ctx))
+  mountAssignments(api, ctx)
   api.use('/instruments', instrumentsRoutes(ctx))
   api.use('/attempts', attemptsRoutes(ctx))
   api.use('/progress', progressRoutes(ctx))

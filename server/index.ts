@@ -4,7 +4,7 @@ import { loadConfig } from './config'
 import { createDb } from './lib/db'
 import { createLogger } from './lib/logger'
 import { createMailer } from './lib/mail'
-import { startScheduler } from './notifications/scheduler'
+import { startScheduler } from './digests/scheduler'
 
 const config = loadConfig()
 const logger = createLogger(config.logLevel)

@@ -202,7 +202,7 @@ try {
       await sql(q.raw, heavy, BASELINE_RUNS),
     )
   }
-  const { weekFigures } = await import('../../server/progress/roster-repository')
+  const { weekFigures } = await import('../../server/roster/roster-repository')
   compare(
     `roster weeks (${ROSTER_STUDENTS} students)`,
     await timeIt(() => weekFigures(app.db, students), RUNS, 1),

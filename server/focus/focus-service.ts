@@ -3,7 +3,6 @@
 import { randomInt } from 'node:crypto'
 import { drillContract } from '../../src/contract/drills'
 import { createRandom } from '../../src/theory'
-import type { AttemptRow } from '../attempts/attempts-repository'
 import type { AppContext } from '../context'
 import type { Db } from '../lib/db'
 import { badRequest, type FieldErrors } from '../lib/errors'
@@ -47,8 +46,18 @@ export function applyAnswers(
   return [...changed.values()]
 }
 
+/** The fields of a stored attempt that move its place's review card. */
+export interface ReviewedAnswer {
+  instrument_id: string | null
+  string: number | null
+  fret: number | null
+  correct: boolean
+  response_ms: number
+  created_at: Date
+}
+
 /** Updates the cards of newly stored attempts (called right after they are inserted). */
-export async function reviewStoredAttempts(db: Db, userId: string, rows: AttemptRow[]) {
+export async function reviewStoredAttempts(db: Db, userId: string, rows: ReviewedAnswer[]) {
   const placed = rows.filter((r) => r.string !== null && r.fret !== null)
   const keys = [...new Set(placed.map((r) => r.instrument_id ?? NO_INSTRUMENT))]
   for (const key of keys) {

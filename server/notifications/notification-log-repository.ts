@@ -20,14 +20,3 @@ export async function claimNotification(
 export async function releaseNotification(db: Db, kind: string, key: string) {
   await db('notification_log').where({ kind, key }).delete()
 }
-
-/** Teachers who own at least one studio. */
-export async function studioTeachers(
-  db: Db,
-): Promise<{ id: string; name: string; email: string }[]> {
-  return db('users as u')
-    .whereExists(db('studios as s').whereRaw('s.teacher_id = u.id'))
-    .where('u.role', 'teacher')
-    .select('u.id', 'u.name', 'u.email')
-    .orderBy('u.name')
-}

@@ -165,36 +165,6 @@ export async function deletePlan(db: Db, planId: string) {
   await db('plans').where({ id: planId }).delete()
 }
 
-/** Assigns a plan; returns only the students newly assigned (re-assigning is a no-op). */
-export async function insertAssignments(
-  db: Db,
-  planId: string,
-  studentIds: string[],
-): Promise<string[]> {
-  if (!studentIds.length) return []
-  const rows: { student_id: string }[] = await db('plan_assignments')
-    .insert(studentIds.map((student_id) => ({ plan_id: planId, student_id })))
-    .onConflict(['plan_id', 'student_id'])
-    .ignore()
-    .returning('student_id')
-  return rows.map((r) => r.student_id)
-}
-
-export async function findAssignmentId(
-  db: Db,
-  planId: string,
-  studentId: string,
-): Promise<string | null> {
-  const row = await db('plan_assignments')
-    .where({ plan_id: planId, student_id: studentId })
-    .first('id')
-  return (row as { id: string } | undefined)?.id ?? null
-}
-
-export async function deleteAssignments(db: Db, assignmentIds: string[]) {
-  if (assignmentIds.length) await db('plan_assignments').whereIn('id', assignmentIds).delete()
-}
-
 /** The item, its plan and the plan's teacher; null when there is no such item. */
 export async function findItemWithPlan(db: Db, itemId: string) {
   const row = (await db('plan_items as i')

@@ -3,18 +3,20 @@
 import type { AppContext } from '../context'
 import { forbidden, notFound } from '../lib/errors'
 import type { PublicUser } from '../users/users-schema'
-import { recordingStorage } from '../recordings/recording-storage'
-import { storageKeysOf } from '../recordings/recordings-repository'
-import { notify } from '../notifications/notify'
-import { teacherStudents } from '../studio/studio-repository'
+import { teacherStudents } from '../access/access-repository'
 import {
-  deleteAssignments,
+  assignmentOf,
+  assignStudents,
+  dropRecordingFiles,
+  purgeAssignments,
+  recordingKeys,
+} from '../assignments/assignments-service'
+import { notify } from '../notifications/notify'
+import {
   deletePlan as removePlan,
-  findAssignmentId,
   findItemWithPlan,
   findPlan,
   findPlanRecord,
-  insertAssignments,
   insertPlan,
   listTeacherPlans,
   updatePlan as replacePlan,
@@ -45,18 +47,6 @@ async function loadPlan(ctx: AppContext, planId: string): Promise<Plan> {
   return plan
 }
 
-/** Deletes recording files after their rows are gone; a missing file is not an error. */
-async function dropFiles(ctx: AppContext, keys: string[]) {
-  const storage = recordingStorage(ctx)
-  await Promise.all(
-    keys.map((key) =>
-      storage
-        .delete(key)
-        .catch((err: unknown) => ctx.logger.warn({ err }, 'recording delete failed')),
-    ),
-  )
-}
-
 /** Assigns the plan to students of the teacher's studios and mails the ones newly assigned. */
 async function assign(ctx: AppContext, teacher: PublicUser, planId: string, studentIds: string[]) {
   const students = await teacherStudents(ctx.db, teacher.id)
@@ -64,7 +54,7 @@ async function assign(ctx: AppContext, teacher: PublicUser, planId: string, stud
   if (studentIds.some((id) => !byId.has(id))) {
     throw forbidden('Plans can only be assigned to students of your studios.')
   }
-  const added = await insertAssignments(ctx.db, planId, [...new Set(studentIds)])
+  const added = await assignStudents(ctx, planId, [...new Set(studentIds)])
   const plan = await loadPlan(ctx, planId)
   await notify(
     ctx,
@@ -93,9 +83,9 @@ export async function updatePlan(
   const current = await getPlan(ctx, teacherId, planId)
   const sent = new Set(input.items.map((item) => item.id))
   const removed = current.items.filter((item) => !sent.has(item.id)).map((item) => item.id)
-  const keys = await storageKeysOf(ctx.db, { itemIds: removed })
+  const keys = await recordingKeys(ctx, { itemIds: removed })
   await ctx.db.transaction((trx) => replacePlan(trx, planId, input))
-  await dropFiles(ctx, keys)
+  await dropRecordingFiles(ctx, keys)
   return loadPlan(ctx, planId)
 }
 
@@ -114,9 +104,9 @@ export async function copyPlan(ctx: AppContext, teacherId: string, planId: strin
 
 export async function deletePlan(ctx: AppContext, teacherId: string, planId: string) {
   await ownPlan(ctx, teacherId, planId)
-  const keys = await storageKeysOf(ctx.db, { planId })
+  const keys = await recordingKeys(ctx, { planId })
   await removePlan(ctx.db, planId)
-  await dropFiles(ctx, keys)
+  await dropRecordingFiles(ctx, keys)
 }
 
 export async function assignPlan(
@@ -137,17 +127,10 @@ export async function unassignPlan(
   studentId: string,
 ) {
   await ownPlan(ctx, teacherId, planId)
-  const assignmentId = await findAssignmentId(ctx.db, planId, studentId)
+  const assignmentId = await assignmentOf(ctx, planId, studentId)
   if (!assignmentId) throw notFound('That assignment')
   await purgeAssignments(ctx, [assignmentId])
   return loadPlan(ctx, planId)
-}
-
-/** Deletes assignments (comments and recordings go with them) and their recording files. */
-export async function purgeAssignments(ctx: AppContext, assignmentIds: string[]) {
-  const keys = await storageKeysOf(ctx.db, { assignmentIds })
-  await deleteAssignments(ctx.db, assignmentIds)
-  await dropFiles(ctx, keys)
 }
 
 /** A plan item for a drill view: its student (when assigned) or its teacher may open it. */
@@ -159,7 +142,7 @@ export async function planItemContext(
   const found = await findItemWithPlan(ctx.db, itemId)
   if (!found) throw notFound('That plan item')
   const isTeacher = found.teacherId === user.id
-  const isStudent = !isTeacher && (await findAssignmentId(ctx.db, found.planId, user.id)) !== null
+  const isStudent = !isTeacher && (await assignmentOf(ctx, found.planId, user.id)) !== null
   if (!isTeacher && !isStudent) throw forbidden('This plan item is not assigned to you.')
   const { id, preset, target } = found.item
   return {

@@ -1,12 +1,10 @@
-// /api/progress: a student's statistics (own by default; `student=` for their teachers and admins)
-// and the signed-in teacher's roster summary.
+// /api/progress: a student's statistics (own by default; `student=` for their teachers and admins).
 import { Router } from 'express'
-import { requireAuth, requireRole } from '../auth/auth-middleware'
+import { requireAuth } from '../auth/auth-middleware'
 import type { AppContext } from '../context'
 import { parse } from '../lib/validate'
 import { FingeringsQuerySchema, ProgressScopeSchema, RangeQuerySchema } from './progress-schema'
 import { fingerings, notes, positions, summary, timeline } from './progress-service'
-import { rosterSummary } from './roster-service'
 
 export function progressRoutes(ctx: AppContext): Router {
   const router = Router()
@@ -32,8 +30,5 @@ export function progressRoutes(ctx: AppContext): Router {
     res.json(await fingerings(ctx, req.user!, parse(FingeringsQuerySchema, req, 'query')))
   })
 
-  router.get('/roster-summary', requireRole('teacher'), async (req, res) => {
-    res.json(await rosterSummary(ctx, req.user!.id))
-  })
   return router
 }

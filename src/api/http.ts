@@ -42,7 +42,8 @@ export interface RequestOptions {
   quiet401?: boolean
 }
 
-function withQuery(path: string, query: RequestOptions['query']) {
+/** The path with its query string (empty values left out). */
+export function withQuery(path: string, query: RequestOptions['query']) {
   const params = new URLSearchParams()
   for (const [k, v] of Object.entries(query ?? {}))
     if (v !== undefined && v !== '') params.set(k, String(v))

@@ -2,7 +2,7 @@
 import { defineStore } from 'pinia'
 import { ref } from 'vue'
 import * as adminApi from '../api/admin'
-import { ApiError } from '../api/http'
+import { useLoadState } from './load-state'
 import type { PublicUser, Role } from '../contract/users'
 
 export const useAdminStore = defineStore('admin', () => {
@@ -11,20 +11,7 @@ export const useAdminStore = defineStore('admin', () => {
   const mail = ref<adminApi.MailSummary[]>([])
   const mailTotal = ref(0)
   const openMessage = ref<adminApi.MailMessage | null>(null)
-  const isLoading = ref(false)
-  const error = ref<ApiError | null>(null)
-
-  async function track(work: () => Promise<void>) {
-    isLoading.value = true
-    error.value = null
-    try {
-      await work()
-    } catch (e) {
-      error.value = e instanceof ApiError ? e : new ApiError(0, 'unknown', String(e))
-    } finally {
-      isLoading.value = false
-    }
-  }
+  const { isLoading, error, load: track } = useLoadState()
 
   const loadUsers = (query: adminApi.PageQuery) =>
     track(async () => {

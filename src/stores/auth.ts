@@ -3,6 +3,7 @@ import { defineStore } from 'pinia'
 import { computed, ref } from 'vue'
 import * as authApi from '../api/auth'
 import { ApiError } from '../api/http'
+import { useLoadState } from './load-state'
 import type { PublicUser } from '../api/auth'
 import type { Role } from '../contract/users'
 
@@ -15,24 +16,10 @@ const HOME_BY_ROLE: Record<Role, string> = {
 export const useAuthStore = defineStore('auth', () => {
   const user = ref<PublicUser | null>(null)
   const loaded = ref(false)
-  const isLoading = ref(false)
-  const error = ref<ApiError | null>(null)
+  const { isLoading, error, track } = useLoadState()
 
   const isSignedIn = computed(() => user.value !== null)
   const homeRoute = computed(() => (user.value ? HOME_BY_ROLE[user.value.role] : 'sign-in'))
-
-  async function track<T>(work: () => Promise<T>): Promise<T> {
-    isLoading.value = true
-    error.value = null
-    try {
-      return await work()
-    } catch (e) {
-      error.value = e instanceof ApiError ? e : new ApiError(0, 'unknown', String(e))
-      throw error.value
-    } finally {
-      isLoading.value = false
-    }
-  }
 
   /** Loads the current session once (a 401 simply means nobody is signed in). */
   async function loadSession() {

@@ -2,7 +2,7 @@
 import { defineStore } from 'pinia'
 import { computed, ref } from 'vue'
 import * as api from '../api/instruments'
-import { ApiError } from '../api/http'
+import { useLoadState } from './load-state'
 import { useAuthStore } from './auth'
 import type {
   Instrument,
@@ -17,26 +17,12 @@ export const useInstrumentStore = defineStore('instruments', () => {
   const loaded = ref(false)
   // Whose instruments are loaded: another sign-in in the same tab loads afresh.
   const loadedFor = ref<string | null>(null)
-  const isLoading = ref(false)
-  const error = ref<ApiError | null>(null)
+  const { isLoading, error, track } = useLoadState()
 
   /** Never null after load() for a signed-in player: the server creates a default instrument. */
   const active = computed<Instrument | null>(
     () => instruments.value.find((i) => i.isActive) ?? instruments.value[0] ?? null,
   )
-
-  async function track<T>(work: () => Promise<T>): Promise<T> {
-    isLoading.value = true
-    error.value = null
-    try {
-      return await work()
-    } catch (e) {
-      error.value = e instanceof ApiError ? e : new ApiError(0, 'unknown', String(e))
-      throw error.value
-    } finally {
-      isLoading.value = false
-    }
-  }
 
   // Keep the server's order: active first, then oldest first.
   function sortActiveFirst(list: Instrument[]) {

@@ -4,6 +4,7 @@
 import type { Express } from 'express'
 import request from 'supertest'
 import { afterAll, beforeAll, describe, expect, it } from 'vitest'
+import { rosterSummary } from '../../server/roster/roster-summary'
 import { makeAdmin, startTestApi, type TestApi } from '../helpers/api'
 import { at, practise, practiser, utcDay, type Practiser } from '../helpers/practice'
 
@@ -454,6 +455,10 @@ describe('who may read progress', () => {
 })
 
 describe('roster summary', () => {
+  // The figures the roster is built on, as JSON (as the roster's routes send them).
+  const summaryOf = async (teacherId: string) =>
+    JSON.parse(JSON.stringify(await rosterSummary(api.ctx, teacherId)))
+
   it("when a teacher asks for the roster, then each student's week is summed by hand-checked figures", async () => {
     const teacher = await practiser(app, 'teacher')
     const ada = await practiser(app)
@@ -485,9 +490,8 @@ describe('roster summary', () => {
       { string: 1, fret: 3, correct: false, ms: 2000, at: at(yesterday, '12:00:20') },
     ])
 
-    const res = await teacher.agent.get('/api/progress/roster-summary')
+    const res = { body: await summaryOf(teacher.user.id) } // what the roster is built on
 
-    expect(res.status).toBe(200)
     const a = res.body.students.find((s: { studentId: string }) => s.studentId === ada.user.id)
     // Last 7 days: 3 answers, 2 right → 2/3; right times 1000, 1400 → median 1200. Active time
     // 1000 + 10 000 + 10 000 = 21 000 ms = 0.35 min → 0.4. The 7 days before: right times
@@ -527,6 +531,14 @@ describe('roster summary', () => {
       weakestPositions: [],
     })
     expect(b.recallTrend).toEqual({ change: null, direction: null })
+    // The roster page shows the same week for Ada.
+    const page = await teacher.agent.get('/api/studio/roster')
+    expect(page.status).toBe(200)
+    expect(page.body.items.find((r: { id: string }) => r.id === ada.user.id)).toMatchObject({
+      attemptsThisWeek: 3,
+      minutesThisWeek: 0.4,
+      recall: { medianMs: 1200, previousMedianMs: 1500, change: -0.2, direction: 'faster' },
+    })
   })
 
   it('when a guitarist is weak on both E strings, then the roster tells the low one from the high one', async () => {
@@ -556,7 +568,7 @@ describe('roster summary', () => {
     )
     await practise({ ...guitarist, instrumentId: guitar.body.instrument.id, tuning }, misses)
 
-    const res = await teacher.agent.get('/api/progress/roster-summary')
+    const res = { body: await summaryOf(teacher.user.id) }
 
     const names = res.body.students[0].weakestPositions.map(
       (w: { string: number; stringName: string }) => [w.string, w.stringName],
@@ -569,10 +581,11 @@ describe('roster summary', () => {
 
   it('when a teacher has no studio, then the roster is empty', async () => {
     const teacher = await practiser(app, 'teacher')
-    expect((await teacher.agent.get('/api/progress/roster-summary')).body).toEqual({ students: [] })
+    expect(await rosterSummary(api.ctx, teacher.user.id)).toEqual({ students: [] })
+    expect((await teacher.agent.get('/api/studio/roster')).body).toEqual({ total: 0, items: [] })
   })
 
   it('when a student asks for a roster, then 403', async () => {
-    expect((await noor.agent.get('/api/progress/roster-summary')).status).toBe(403)
+    expect((await noor.agent.get('/api/studio/roster')).status).toBe(403)
   })
 })

@@ -188,17 +188,21 @@ const ROUTES: [string, (f: Fixture) => Call, Expected][] = [
   [
     'POST recording',
     (f) => (c) =>
-      c.post('/api/recordings').field('planItemId', f.itemId).attach('file', wav, 'take.wav'),
+      c
+        .post(`/api/assignments/${f.assignmentId}/recordings`)
+        .field('planItemId', f.itemId)
+        .attach('file', wav, 'take.wav'),
     allow({ student: 201 }),
   ],
   [
     'GET recording audio',
-    (f) => (c) => c.get(`/api/recordings/${f.recordingId}/audio`),
+    (f) => (c) => c.get(`/api/assignments/${f.assignmentId}/recordings/${f.recordingId}/audio`),
     allow({ student: 200, teacher: 200 }),
   ],
   [
     'DELETE recording',
-    (f) => (c) => c.delete(`/api/recordings/${f.recordingToDeleteId}`),
+    (f) => (c) =>
+      c.delete(`/api/assignments/${f.assignmentId}/recordings/${f.recordingToDeleteId}`),
     allow({ student: 204 }),
   ],
   [
@@ -214,10 +218,10 @@ const ROUTES: [string, (f: Fixture) => Call, Expected][] = [
   ],
 ]
 
-async function upload(student: Agent, itemId: string) {
+async function upload(student: Agent, assignmentId: string, itemId: string) {
   return (
     await student.agent
-      .post('/api/recordings')
+      .post(`/api/assignments/${assignmentId}/recordings`)
       .field('planItemId', itemId)
       .attach('file', wav, 'take.wav')
   ).body.recording.id as string
@@ -270,8 +274,8 @@ beforeAll(async () => {
     itemId,
     assignmentId,
     commentId: comment.body.comment.id,
-    recordingId: await upload(student, itemId),
-    recordingToDeleteId: await upload(student, itemId),
+    recordingId: await upload(student, assignmentId, itemId),
+    recordingToDeleteId: await upload(student, assignmentId, itemId),
     invitationId: kept.id,
     invitationToRevokeId: revoked.id,
     token: previewed.token, // resending rotates kept's token

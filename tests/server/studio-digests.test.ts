@@ -2,8 +2,8 @@
 // recorded, so a restarted app does not resend), and the admin action "send digests now".
 import { afterAll, beforeAll, describe, expect, it } from 'vitest'
 import { latestMailTo } from '../../server/admin/mail-log-repository'
-import { runScheduledJobs } from '../../server/notifications/scheduler'
-import { digestDue, isoWeek } from '../../server/notifications/digest-service'
+import { runScheduledJobs } from '../../server/digests/scheduler'
+import { digestDue, isoWeek } from '../../server/digests/digest-service'
 import { makeAdmin, signedInAgent, startTestApi, waitForMail, type TestApi } from '../helpers/api'
 import {
   createPlan,

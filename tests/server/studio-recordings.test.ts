@@ -20,12 +20,15 @@ let dataDir: string
 let teacher: Agent & { studioId: string }
 let student: Agent
 let itemId: string
+let assignmentId: string
 beforeAll(async () => {
   dataDir = mkdtempSync(path.join(tmpdir(), 'ambitus-recordings-'))
   api = await startTestApi({ dataDir })
   teacher = await teacherWithStudio(api.app)
   student = await studentIn(api.app, api.ctx, teacher.studioId)
-  itemId = (await createPlan(teacher, { studentIds: [student.user.id] })).items[0]!.id
+  const plan = await createPlan(teacher, { studentIds: [student.user.id] })
+  itemId = plan.items[0]!.id
+  assignmentId = plan.assignees[0]!.assignmentId
 })
 afterAll(async () => {
   await api.close()
@@ -34,9 +37,11 @@ afterAll(async () => {
 
 const upload = (agent: Agent, bytes: Buffer, filename: string, planItemId = itemId) =>
   agent.agent
-    .post('/api/recordings')
+    .post(`/api/assignments/${assignmentId}/recordings`)
     .field('planItemId', planItemId)
     .attach('file', bytes, filename)
+
+const recordingPath = (id: string) => `/api/assignments/${assignmentId}/recordings/${id}`
 
 /** Collects a binary response body into a Buffer. */
 function binary(res: Response, done: (err: Error | null, body: Buffer) => void) {
@@ -99,7 +104,9 @@ describe('uploading', () => {
 
   it('when the file is empty or missing, then 400', async () => {
     expect((await upload(student, Buffer.alloc(0), 'empty.wav')).status).toBe(400)
-    const none = await student.agent.post('/api/recordings').field('planItemId', itemId)
+    const none = await student.agent
+      .post(`/api/assignments/${assignmentId}/recordings`)
+      .field('planItemId', itemId)
     expect(none.status).toBe(400)
     expect(none.body.error.fields.file).toBeDefined()
   })
@@ -121,7 +128,7 @@ describe('playing', () => {
 
   it('when the player asks for a byte range, then 206 with exactly those bytes and Content-Range', async () => {
     const res = await student.agent
-      .get(`/api/recordings/${id}/audio`)
+      .get(`${recordingPath(id)}/audio`)
       .set('Range', 'bytes=44-99')
       .buffer(true)
       .parse(binary)
@@ -133,11 +140,14 @@ describe('playing', () => {
   })
 
   it('when asked without a range, then 200 with the whole file; a range past the end is 416', async () => {
-    const res = await teacher.agent.get(`/api/recordings/${id}/audio`).buffer(true).parse(binary)
+    const res = await teacher.agent
+      .get(`${recordingPath(id)}/audio`)
+      .buffer(true)
+      .parse(binary)
     expect(res.status).toBe(200)
     expect(Buffer.compare(res.body as Buffer, wav)).toBe(0)
     const past = await student.agent
-      .get(`/api/recordings/${id}/audio`)
+      .get(`${recordingPath(id)}/audio`)
       .set('Range', `bytes=${wav.length + 10}-`)
     expect(past.status).toBe(416)
     expect(past.headers['content-range']).toBe(`bytes */${wav.length}`)
@@ -146,12 +156,12 @@ describe('playing', () => {
   it('when another teacher or student asks, then 403; the teacher may not delete it, the student may', async () => {
     const otherTeacher = await teacherWithStudio(api.app)
     const otherStudent = await signedInAgent(api.app)
-    expect((await otherTeacher.agent.get(`/api/recordings/${id}/audio`)).status).toBe(403)
-    expect((await otherStudent.agent.get(`/api/recordings/${id}/audio`)).status).toBe(403)
-    expect((await teacher.agent.delete(`/api/recordings/${id}`)).status).toBe(403)
+    expect((await otherTeacher.agent.get(`${recordingPath(id)}/audio`)).status).toBe(403)
+    expect((await otherStudent.agent.get(`${recordingPath(id)}/audio`)).status).toBe(403)
+    expect((await teacher.agent.delete(recordingPath(id))).status).toBe(403)
     const key = (await api.ctx.db('recordings').where({ id }).first()).storage_key as string
-    expect((await student.agent.delete(`/api/recordings/${id}`)).status).toBe(204)
+    expect((await student.agent.delete(recordingPath(id))).status).toBe(204)
     expect(existsSync(path.join(dataDir, 'recordings', key.slice(0, 2), key))).toBe(false)
-    expect((await student.agent.get(`/api/recordings/${id}/audio`)).status).toBe(404)
+    expect((await student.agent.get(`${recordingPath(id)}/audio`)).status).toBe(404)
   })
 })

@@ -1,7 +1,7 @@
 // CSV export: RFC 4180 quoting (fields with commas, quotes or line breaks are quoted; quotes
 // doubled), CRLF line ends, and spreadsheet formula injection defused (OWASP "CSV Injection").
 import { describe, expect, it } from 'vitest'
-import { csvFileName, toCsv } from '../../server/studio/csv'
+import { csvFileName, toCsv } from '../../server/roster/csv'
 
 describe('toCsv', () => {
   it('quotes only what needs quoting and doubles quotes (RFC 4180 §2.6–2.7)', () => {

@@ -2,10 +2,10 @@
 // for the digest (source: ISO 8601 week dates; the dates are checked against a printed calendar).
 import { describe, expect, it } from 'vitest'
 import type { Assignment } from '../../src/contract/assignments'
-import { isoWeek, digestDue } from '../../server/notifications/digest-service'
-import { pageRoster, sortRoster } from '../../server/studio/roster-query'
-import { rosterStatus } from '../../server/studio/roster-service'
-import { RosterQuerySchema } from '../../server/studio/studio-schema'
+import { isoWeek, digestDue } from '../../server/digests/digest-service'
+import { pageRoster, sortRoster } from '../../server/roster/roster-query'
+import { rosterStatus } from '../../server/roster/roster-service'
+import { RosterQuerySchema } from '../../server/roster/roster-schema'
 import { type RosterRow } from '../../src/contract/roster'
 import { STARTER_PLANS } from '../../src/contract/starter-plans'
 

@@ -1,5 +1,5 @@
 // How roster figures read in the table and on the student page.
-import type { RosterRow, RosterStatus } from '@/api/studio'
+import type { RosterRow, RosterStatus } from '@/api/roster'
 import { toUnicode } from '@/theory'
 
 export const STATUS_LABEL: Record<RosterStatus, { text: string; color: string }> = {

@@ -1,0 +1,31 @@
+// The routes of an assigned plan: its id, a comment's and a recording's; recording limits and the
+// audio formats accepted (checked by content, not by name). Bodies and answers: src/contract/assignments.ts.
+import { z } from 'zod'
+
+export const AssignmentIdParamsSchema = z.object({ id: z.uuid('Not a valid assignment id.') })
+export const CommentIdParamsSchema = z.object({
+  id: z.uuid('Not a valid assignment id.'),
+  commentId: z.uuid('Not a valid comment id.'),
+})
+
+export const MAX_RECORDING_BYTES = 20 * 1024 * 1024
+export const MAX_RECORDINGS_PER_ITEM = 10
+
+/** file-type's extension → the Content-Type the recording is served with. */
+export const ACCEPTED_AUDIO: Readonly<Record<string, string>> = {
+  webm: 'audio/webm',
+  ogg: 'audio/ogg',
+  oga: 'audio/ogg',
+  opus: 'audio/ogg',
+  mp3: 'audio/mpeg',
+  wav: 'audio/wav',
+  m4a: 'audio/mp4',
+  // Safari's MediaRecorder writes audio-only MP4 with a generic brand.
+  mp4: 'audio/mp4',
+}
+
+export const RecordingUploadSchema = z.object({ planItemId: z.uuid('Not a valid plan item id.') })
+export const RecordingParamsSchema = z.object({
+  id: z.uuid('Not a valid assignment id.'),
+  recordingId: z.uuid('Not a valid recording id.'),
+})

@@ -1,0 +1,210 @@
+// Invitation use cases: invite (or re-invite), resend, revoke, preview and accept.
+import { createHash, randomBytes } from 'node:crypto'
+import { hashPassword } from '../auth/password'
+import { publicUrl } from '../config'
+import type { AppContext } from '../context'
+import { AppError, badRequest, conflict, forbidden, notFound } from '../lib/errors'
+import { findUserByEmail, insertUser, type UserRecord } from '../users/users-repository'
+import type { PublicUser } from '../users/users-schema'
+import {
+  consumeInvitation,
+  findInvitation,
+  findInvitationByToken,
+  findOpenInvitation,
+  insertInvitation,
+  listInvitations as listRows,
+  renewInvitation,
+  revokeInvitation as revokeRow,
+  toInvitation,
+  type InvitationRecord,
+} from './invitations-repository'
+import { invitationMail } from './invitations-mail'
+import type { InvitationPreview } from '../../src/contract/studios'
+import { joinStudio, ownStudio, studioHasEmail } from '../studios/studios-service'
+import type { AcceptInvitationInput } from './invitations-schema'
+
+export const INVITATION_TTL_MS = 7 * 24 * 3600 * 1000
+const sha256 = (value: string) => createHash('sha256').update(value).digest('hex')
+
+function newToken() {
+  const token = randomBytes(32).toString('base64url')
+  return { token, tokenHash: sha256(token), expiresAt: new Date(Date.now() + INVITATION_TTL_MS) }
+}
+
+async function mailInvitation(
+  ctx: AppContext,
+  invitation: InvitationRecord,
+  token: string,
+  expiresAt: Date,
+) {
+  const link = `${publicUrl(ctx.config)}/invitations/accept?token=${encodeURIComponent(token)}`
+  await ctx.mailer.send(invitationMail(invitation.email, { ...invitation, link, expiresAt }))
+}
+
+async function reload(ctx: AppContext, id: string) {
+  const invitation = await findInvitation(ctx.db, id)
+  if (!invitation) throw notFound('That invitation')
+  return invitation
+}
+
+/** Invites an address to a studio; an address already invited gets a fresh link instead. */
+export async function invite(ctx: AppContext, teacherId: string, studioId: string, email: string) {
+  await ownStudio(ctx, teacherId, studioId)
+  if (await studioHasEmail(ctx, studioId, email)) {
+    throw conflict('This student is already in the studio.', {
+      email: ['Already a member of this studio.'],
+    })
+  }
+  const existing = await findUserByEmail(ctx.db, email)
+  if (existing && existing.role !== 'student') {
+    throw conflict('That address belongs to a teacher or admin account.', {
+      email: ['Invite a student account.'],
+    })
+  }
+  const open = await findOpenInvitation(ctx.db, studioId, email)
+  if (open) return { invitation: await resendInvitation(ctx, teacherId, open.id), resent: true }
+  const { token, tokenHash, expiresAt } = newToken()
+  const id = await insertInvitation(ctx.db, {
+    studioId,
+    email,
+    tokenHash,
+    invitedBy: teacherId,
+    expiresAt,
+  })
+  const invitation = await reload(ctx, id)
+  await mailInvitation(ctx, invitation, token, expiresAt)
+  return { invitation: toInvitation(invitation), resent: false }
+}
+
+async function ownInvitation(ctx: AppContext, teacherId: string, id: string) {
+  const invitation = await reload(ctx, id)
+  if (invitation.teacherId !== teacherId)
+    throw forbidden('This invitation belongs to another teacher.')
+  return invitation
+}
+
+/** A new link and a new week to accept it; the previous link stops working. */
+export async function resendInvitation(ctx: AppContext, teacherId: string, id: string) {
+  const invitation = await ownInvitation(ctx, teacherId, id)
+  const { token, tokenHash, expiresAt } = newToken()
+  if (!(await renewInvitation(ctx.db, id, tokenHash, expiresAt))) {
+    throw conflict(`This invitation was already ${invitation.status}; send a new one instead.`)
+  }
+  await mailInvitation(ctx, invitation, token, expiresAt)
+  return toInvitation(await reload(ctx, id))
+}
+
+export async function revokeInvitation(ctx: AppContext, teacherId: string, id: string) {
+  const invitation = await ownInvitation(ctx, teacherId, id)
+  if (!(await revokeRow(ctx.db, id)))
+    throw conflict(`This invitation was already ${invitation.status}.`)
+  return toInvitation(await reload(ctx, id))
+}
+
+export const listInvitations = (
+  ctx: AppContext,
+  teacherId: string,
+  q: { studio?: string; status: 'open' | 'all' },
+) => listRows(ctx.db, teacherId, { studioId: q.studio, openOnly: q.status === 'open' })
+
+const UNUSABLE: Record<string, string> = {
+  accepted: 'This invitation was already accepted.',
+  revoked: 'This invitation was withdrawn by the teacher.',
+  expired: 'This invitation has expired.',
+}
+
+/** The invitation behind a token, when it can still be accepted. */
+async function usableInvitation(ctx: AppContext, token: string) {
+  const invitation = await findInvitationByToken(ctx.db, sha256(token))
+  if (!invitation) throw notFound('That invitation')
+  const reason = UNUSABLE[invitation.status]
+  if (reason)
+    throw new AppError('invitation_unusable', `${reason} Ask your teacher to send a new one.`, 410)
+  return invitation
+}
+
+export async function previewInvitation(
+  ctx: AppContext,
+  token: string,
+): Promise<InvitationPreview> {
+  const invitation = await usableInvitation(ctx, token)
+  const { studioName, teacherName, email, expiresAt } = invitation
+  return {
+    studioName,
+    teacherName,
+    email,
+    expiresAt,
+    accountExists: Boolean(await findUserByEmail(ctx.db, email)),
+  }
+}
+
+async function newStudentAccount(
+  ctx: AppContext,
+  invitation: InvitationRecord,
+  input: AcceptInvitationInput,
+) {
+  if (!input.name || !input.password) {
+    throw badRequest('Sign in, or choose your name and a password to create your account.', {
+      ...(input.name ? {} : { name: ['Enter your name.'] }),
+      ...(input.password ? {} : { password: ['Choose a password.'] }),
+    })
+  }
+  if (await findUserByEmail(ctx.db, invitation.email)) {
+    throw conflict('An account with this e-mail already exists. Sign in to accept.', {
+      email: ['Sign in instead.'],
+    })
+  }
+  return {
+    email: invitation.email,
+    name: input.name,
+    role: 'student' as const,
+    passwordHash: await hashPassword(input.password, ctx.config.bcryptCost),
+  }
+}
+
+function duplicateEmail(error: unknown): never {
+  if ((error as { code?: string }).code === '23505') {
+    throw conflict('An account with this e-mail already exists. Sign in to accept.', {
+      email: ['Sign in instead.'],
+    })
+  }
+  throw error
+}
+
+/**
+ * Accepts an invitation: the signed-in student joins, or a new student account (with the invited
+ * e-mail) is created and joins. Returns the new account when one was created, so the route signs it in.
+ */
+export async function acceptInvitation(
+  ctx: AppContext,
+  input: AcceptInvitationInput,
+  current: PublicUser | null,
+) {
+  const invitation = await usableInvitation(ctx, input.token)
+  if (current && current.role !== 'student') {
+    throw forbidden(
+      'Invitations are for student accounts. Sign out and accept with your student account.',
+    )
+  }
+  const account = current ? null : await newStudentAccount(ctx, invitation, input)
+  return ctx.db.transaction(async (trx) => {
+    const created: UserRecord | null = account
+      ? await insertUser(trx, account).catch(duplicateEmail)
+      : null
+    const studentId = current?.id ?? created!.id
+    if (!(await consumeInvitation(trx, invitation.id, studentId))) {
+      throw new AppError(
+        'invitation_unusable',
+        'This invitation was used or withdrawn a moment ago.',
+        410,
+      )
+    }
+    const joined = await joinStudio(trx, invitation.studioId, studentId)
+    return {
+      created,
+      studioId: invitation.studioId,
+      studioName: invitation.studioName,
+      alreadyMember: !joined,
+    }
+  })
+}

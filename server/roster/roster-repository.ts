@@ -1,0 +1,139 @@
+// Roster figures for many students at once, from the rollups (one query per figure, not per student),
+// and GET /api/studio/students (one row per membership, with last practice and overall accuracy).
+import type { Db } from '../lib/db'
+import type { StudioStudent } from '../../src/contract/roster'
+import { ALL_DRILLS, ALL_INSTRUMENTS, NO_INSTRUMENT } from '../progress/progress-repository'
+
+export interface WeekRow {
+  user_id: string
+  attempts7d: string | null
+  correct7d: string | null
+  active_ms7d: string | null
+  median7d: number | null
+  median_prev7d: number | null
+  last_at: Date | null
+}
+
+/**
+ * Per student: the last 7 local days and the 7 before (attempts, right answers, active time, median
+ * recall of right answers), and the last practice time.
+ */
+export async function weekFigures(db: Db, studentIds: string[]): Promise<WeekRow[]> {
+  const { rows } = await db.raw(
+    `with st as (
+       select u.id as user_id, (now() at time zone coalesce(z.time_zone, 'UTC'))::date as today
+       from unnest(?::uuid[]) as u(id) left join user_time_zones z on z.user_id = u.id
+     ), d as (
+       select d.user_id, d.attempts, d.correct, d.active_ms, d.recall_ms, d.day > st.today - 7 as this_week
+       from progress_days d join st on st.user_id = d.user_id
+       where d.instrument_key = ? and d.drill = ? and d.day > st.today - 14 and d.day <= st.today
+     ), sums as (
+       select user_id, sum(attempts) filter (where this_week) as attempts7d,
+         sum(correct) filter (where this_week) as correct7d, sum(active_ms) filter (where this_week) as active_ms7d
+       from d group by user_id
+     ), medians as (
+       select d.user_id,
+         percentile_cont(0.5) within group (order by v) filter (where d.this_week) as median7d,
+         percentile_cont(0.5) within group (order by v) filter (where not d.this_week) as median_prev7d
+       from d cross join lateral unnest(d.recall_ms) as v group by d.user_id
+     )
+     select st.user_id, sums.attempts7d, sums.correct7d, sums.active_ms7d, medians.median7d, medians.median_prev7d,
+       (select p.last_at from progress_days p where p.user_id = st.user_id and p.instrument_key = ?
+          and p.drill = ? order by p.day desc limit 1) as last_at
+     from st left join sums using (user_id) left join medians using (user_id)`,
+    [studentIds, ALL_INSTRUMENTS, ALL_DRILLS, ALL_INSTRUMENTS, ALL_DRILLS],
+  )
+  return rows
+}
+
+export interface WeakRow {
+  user_id: string
+  instrument_key: string
+  string: number
+  fret: number
+  pitch: number
+  answers: number
+  recent_accuracy: number
+  recent_median_ms: number | null
+  /** The instrument's open strings, null when it has been deleted since. */
+  tuning: number[] | null
+}
+
+/**
+ * Per student, the `limit` places with the lowest recent accuracy (slower first on ties), read in
+ * index order (progress_items_weakest) so each student costs a few index rows.
+ */
+export async function weakestPlaces(
+  db: Db,
+  studentIds: string[],
+  limit: number,
+): Promise<WeakRow[]> {
+  const { rows } = await db.raw(
+    `select s.id as user_id, w.*, ins.tuning from unnest(?::uuid[]) as s(id)
+     cross join lateral (
+       select i.instrument_key, i.string, i.fret, i.pitch, cardinality(i.recent_correct) as answers,
+         i.recent_accuracy, i.recent_median_ms
+       from progress_items i
+       where i.user_id = s.id and i.drill = ? and i.string >= 0 and i.instrument_key <> ?
+         and cardinality(i.recent_correct) >= 3
+       order by i.recent_accuracy, i.recent_median_ms desc nulls last, i.string, i.fret
+       limit ?
+     ) as w
+     left join instruments ins on ins.id = w.instrument_key
+     -- the join may reorder rows: keep each student's places weakest first
+     order by s.id, w.recent_accuracy, w.recent_median_ms desc nulls last, w.string, w.fret`,
+    [studentIds, ALL_DRILLS, NO_INSTRUMENT, limit],
+  )
+  return rows
+}
+
+interface MembershipRow {
+  id: string
+  name: string
+  email: string
+  studio_id: string
+  studio_name: string
+  joined_at: Date
+  last_practice_at: Date | null
+  correct: string | null
+  total: string | null
+}
+
+/** Every student in the teacher's studios, with last practice and overall accuracy. */
+export async function listTeacherStudents(db: Db, teacherId: string): Promise<StudioStudent[]> {
+  const rows: MembershipRow[] = await db('studios as s')
+    .join('studio_members as m', 'm.studio_id', 's.id')
+    .join('users as u', 'u.id', 'm.student_id')
+    .leftJoin(
+      db('attempts')
+        .select('user_id')
+        .max({ last_practice_at: 'created_at' })
+        .count({ total: '*' })
+        .sum({ correct: db.raw('correct::int') })
+        .groupBy('user_id')
+        .as('a'),
+      'a.user_id',
+      'u.id',
+    )
+    .where('s.teacher_id', teacherId)
+    .select(
+      'u.id',
+      'u.name',
+      'u.email',
+      's.id as studio_id',
+      's.name as studio_name',
+      'm.joined_at',
+    )
+    .select('a.last_practice_at', 'a.correct', 'a.total')
+    .orderBy('u.name')
+  return rows.map((r) => ({
+    id: r.id,
+    name: r.name,
+    email: r.email,
+    studioId: r.studio_id,
+    studioName: r.studio_name,
+    joinedAt: r.joined_at.toISOString(),
+    lastPracticeAt: r.last_practice_at ? r.last_practice_at.toISOString() : null,
+    accuracy: r.total && Number(r.total) > 0 ? Number(r.correct) / Number(r.total) : null,
+  }))
+}

@@ -1,0 +1,114 @@
+// The teacher's roster: each student's practice figures, plan progress, weak spots and a status.
+import { pitchName } from '../../src/theory'
+import { assertCanReadStudent } from '../access/student-access'
+import type { AppContext } from '../context'
+import { assignmentRows } from '../assignments/assignments-service'
+import { buildAssignments } from '../plans/assigned-plans'
+import type { Assignment } from '../../src/contract/assignments'
+import { rosterSummary, type RosterStudent } from './roster-summary'
+import type { PublicUser } from '../users/users-schema'
+import type { RosterRow, RosterStatus, WeakSpot } from '../../src/contract/roster'
+
+const DAY_MS = 24 * 3600 * 1000
+
+function weakSpotOf(place: RosterStudent['weakestPositions'][number]): WeakSpot {
+  const label = `${place.stringName} string, fret ${place.fret} (${pitchName(place.pitch, 'flat')})`
+  return {
+    string: place.string,
+    fret: place.fret,
+    label,
+    accuracy: place.accuracy,
+    attempts: place.answers,
+  }
+}
+
+/** behind: a plan overdue, or due within 48 h with under half its targets met; inactive: no practice in 7 days. */
+export function rosterStatus(
+  lastPracticeAt: Date | null,
+  assignments: Assignment[],
+  now: Date,
+): RosterStatus {
+  const soon = now.getTime() + 2 * DAY_MS
+  const behind = assignments.some((a) => {
+    if (a.complete || !a.dueAt) return false
+    const due = Date.parse(a.dueAt)
+    return due < now.getTime() || (due < soon && a.targetsMet < a.items.length / 2)
+  })
+  if (behind) return 'behind'
+  if (!lastPracticeAt || lastPracticeAt.getTime() < now.getTime() - 7 * DAY_MS) return 'inactive'
+  return 'on-track'
+}
+
+function planSummary(assignments: Assignment[]) {
+  const targetsTotal = assignments.reduce((sum, a) => sum + a.items.length, 0)
+  const targetsMet = assignments.reduce((sum, a) => sum + a.targetsMet, 0)
+  return {
+    plans: {
+      assigned: assignments.length,
+      complete: assignments.filter((a) => a.complete).length,
+      overdue: assignments.filter((a) => a.overdue).length,
+      targetsMet,
+      targetsTotal,
+    },
+    planCompletion: targetsTotal ? targetsMet / targetsTotal : null,
+  }
+}
+
+function toRosterRow(student: RosterStudent, assignments: Assignment[], now: Date): RosterRow {
+  const lastPracticeAt = student.lastPracticeAt ? new Date(student.lastPracticeAt) : null
+  return {
+    id: student.studentId,
+    name: student.name,
+    email: student.email,
+    studios: student.studios,
+    lastPracticeAt: student.lastPracticeAt,
+    minutesThisWeek: student.minutes7d,
+    attemptsThisWeek: student.attempts7d,
+    accuracy: student.accuracy7d,
+    recall: {
+      medianMs: student.medianRecallMs7d,
+      previousMedianMs: student.medianRecallMsPrev7d,
+      ...student.recallTrend,
+    },
+    ...planSummary(assignments),
+    weakSpots: student.weakestPositions.filter((p) => p.accuracy < 1).map(weakSpotOf),
+    status: rosterStatus(lastPracticeAt, assignments, now),
+  }
+}
+
+/**
+ * Every student of the teacher's studios (or just one) with their roster figures, unsorted and
+ * unpaged: practice figures from the progress rollups (rosterSummary), plans and status from here.
+ */
+export async function rosterRows(
+  ctx: AppContext,
+  teacherId: string,
+  now = new Date(),
+  only?: string,
+): Promise<RosterRow[]> {
+  const students = (await rosterSummary(ctx, teacherId)).students.filter(
+    (s) => !only || s.studentId === only,
+  )
+  const ids = students.map((s) => s.studentId)
+  const rows = ids.length ? await assignmentRows(ctx, { teacherId, studentIds: ids }) : []
+  const assignments = await buildAssignments(ctx, rows, now)
+  return students.map((s) =>
+    toRosterRow(
+      s,
+      assignments.filter((a) => a.student.id === s.studentId),
+      now,
+    ),
+  )
+}
+
+/** One student's roster row, for the teacher's student page (403 unless in the teacher's studios). */
+export async function rosterRowOf(
+  ctx: AppContext,
+  teacher: PublicUser,
+  studentId: string,
+): Promise<RosterRow> {
+  await assertCanReadStudent(ctx, teacher, studentId)
+  const [row] = await rosterRows(ctx, teacher.id, new Date(), studentId)
+  if (!row) throw new Error('student row missing after the access check')
+  return row
+}

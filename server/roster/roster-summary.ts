@@ -1,0 +1,122 @@
+// The practice figures of a teacher's roster: one entry per student of their studios, from the
+// statistics rollups (roster-service.ts adds plans and a status to build the roster rows).
+//
+// rosterSummary(ctx, teacherId) → { students: RosterStudent[] }, sorted by name, where
+//   RosterStudent = {
+//     studentId, name, email, studios: [{ id, name }],
+//     lastPracticeAt: ISO string | null,
+//     attempts7d, minutes7d,            // last 7 days in the student's time zone (today included)
+//     accuracy7d: 0..1 | null,          // right answers / answers, last 7 days
+//     medianRecallMs7d: number | null,  // median response time of right answers, last 7 days
+//     medianRecallMsPrev7d: number | null, // the same for the 7 days before
+//     recallTrend: { change: number | null, direction: 'faster' | 'slower' | 'steady' | null },
+//                                        // change = this week's median / last week's − 1 (−0.1 = 10 % faster)
+//     weakestPositions: [{ instrumentId, string, stringName, fret, pitch, answers, accuracy, medianMs }] // ≤ 3,
+//                                        // lowest recent accuracy first (latest 50 answers per place)
+//   }
+import { pitchClassName, stringNames } from '../../src/theory'
+import { teacherStudents } from '../access/access-repository'
+import type { AppContext } from '../context'
+import { weakestPlaces, weekFigures, type WeakRow, type WeekRow } from './roster-repository'
+
+/** One student of a teacher's roster (the meaning of each field is above). */
+export interface RosterStudent {
+  studentId: string
+  name: string
+  email: string
+  studios: { id: string; name: string }[]
+  lastPracticeAt: string | null
+  attempts7d: number
+  minutes7d: number
+  accuracy7d: number | null
+  medianRecallMs7d: number | null
+  medianRecallMsPrev7d: number | null
+  recallTrend: { change: number | null; direction: 'faster' | 'slower' | 'steady' | null }
+  weakestPositions: {
+    instrumentId: string
+    string: number
+    /** "low E", "A": the string's name on that instrument */
+    stringName: string
+    fret: number
+    pitch: number
+    answers: number
+    accuracy: number
+    medianMs: number | null
+  }[]
+}
+
+/** Below this relative change in median recall time the trend is "steady". */
+export const TREND_THRESHOLD = 0.05
+const WEAKEST_COUNT = 3
+
+export function recallTrend(
+  now: number | null,
+  before: number | null,
+): RosterStudent['recallTrend'] {
+  if (now === null || before === null || before <= 0) return { change: null, direction: null }
+  const change = now / before - 1
+  const direction =
+    change <= -TREND_THRESHOLD ? 'faster' : change >= TREND_THRESHOLD ? 'slower' : 'steady'
+  return { change: Math.round(change * 1000) / 1000, direction }
+}
+
+function weekPart(w: WeekRow | undefined) {
+  const attempts = Number(w?.attempts7d ?? 0)
+  return {
+    lastPracticeAt: w?.last_at ? w.last_at.toISOString() : null,
+    attempts7d: attempts,
+    minutes7d: Math.round(Number(w?.active_ms7d ?? 0) / 6000) / 10,
+    accuracy7d: attempts > 0 ? Number(w?.correct7d ?? 0) / attempts : null,
+    medianRecallMs7d: w?.median7d ?? null,
+    medianRecallMsPrev7d: w?.median_prev7d ?? null,
+    recallTrend: recallTrend(w?.median7d ?? null, w?.median_prev7d ?? null),
+  }
+}
+
+/** "low E", "A": the string's name on its instrument, told apart from a twin (see stringNames). */
+function stringNameOf(r: WeakRow): string {
+  const open = r.pitch - r.fret
+  try {
+    if (r.tuning)
+      return stringNames(r.tuning.map(Number), 'flat')[r.string] ?? pitchClassName(open, 'flat')
+  } catch {
+    // a tuning the theory core refuses: fall through to the open string's note
+  }
+  return pitchClassName(open, 'flat')
+}
+
+const toWeak = (r: WeakRow) => ({
+  instrumentId: r.instrument_key,
+  string: r.string,
+  stringName: stringNameOf(r),
+  fret: r.fret,
+  pitch: r.pitch,
+  answers: r.answers,
+  accuracy: r.recent_accuracy,
+  medianMs: r.recent_median_ms,
+})
+
+/** Every student of the teacher's studios with their week in figures (see the shape above). */
+export async function rosterSummary(
+  ctx: AppContext,
+  teacherId: string,
+): Promise<{ students: RosterStudent[] }> {
+  const members = await teacherStudents(ctx.db, teacherId)
+  if (!members.length) return { students: [] }
+  const ids = members.map((m) => m.id)
+  const [weeks, weak] = await Promise.all([
+    weekFigures(ctx.db, ids),
+    weakestPlaces(ctx.db, ids, WEAKEST_COUNT),
+  ])
+  const weekOf = new Map(weeks.map((w) => [w.user_id, w]))
+  return {
+    students: members.map((m) => ({
+      studentId: m.id,
+      name: m.name,
+      email: m.email,
+      studios: m.studios,
+      ...weekPart(weekOf.get(m.id)),
+      weakestPositions: weak.filter((w) => w.user_id === m.id).map(toWeak),
+    })),
+  }
+}

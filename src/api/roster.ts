@@ -1,0 +1,34 @@
+// The roster (/api/studio/roster, its CSV), the students list and a student's page.
+import type { Assignment } from '../contract/assignments'
+import type {
+  RosterPage,
+  RosterRow,
+  RosterSortKey,
+  RosterStatus,
+  StudioStudent,
+} from '../contract/roster'
+import { http, withQuery } from './http'
+
+export type { RosterPage, RosterRow, RosterSortKey, RosterStatus, StudioStudent }
+
+export interface RosterFilters {
+  search?: string
+  studio?: string
+  status?: RosterStatus
+  sortBy?: RosterSortKey
+  sortDesc?: boolean
+}
+export type RosterQuery = RosterFilters & { page?: number; pageSize?: number }
+
+export const listStudents = () => http.get<{ students: StudioStudent[] }>('/studio/students')
+export const fetchRoster = (query: RosterQuery) =>
+  http.get<RosterPage>('/studio/roster', { query: { ...query } })
+export const fetchStudent = (id: string) =>
+  http.get<{ student: RosterRow }>(`/studio/students/${id}`)
+export const fetchStudentAssignments = (id: string) =>
+  http.get<{ assignments: Assignment[] }>(`/studio/students/${id}/assignments`)
+
+/** Download links (plain same-origin links carry the session cookie). */
+export const rosterCsvUrl = (filters: RosterFilters) =>
+  `/api${withQuery('/studio/roster.csv', { ...filters })}`
+export const resultsCsvUrl = (studentId: string) => `/api/studio/students/${studentId}/results.csv`

@@ -1,0 +1,64 @@
+// Assigned plans as the student sees them, with each plan's comment thread and the recordings of
+// its items (the teacher's student page shares the threads and recordings).
+import { defineStore } from 'pinia'
+import { ref } from 'vue'
+import * as assignmentsApi from '../api/assignments'
+import * as plansApi from '../api/plans'
+import { useLoadState } from './load-state'
+
+type Threads = Record<string, assignmentsApi.PlanComment[]>
+
+export const useAssignmentsStore = defineStore('assignments', () => {
+  const { isLoading, error, load } = useLoadState()
+  const assigned = ref<plansApi.Assignment[]>([])
+  const threads = ref<Threads>({})
+  const setThread = (
+    id: string,
+    change: (thread: assignmentsApi.PlanComment[]) => Threads[string],
+  ) => (threads.value = { ...threads.value, [id]: change(threads.value[id] ?? []) })
+
+  /** Changes one item of the assigned plans in place (after an upload or a delete). */
+  function updateItem(
+    itemId: string,
+    change: (item: plansApi.AssignedItem) => plansApi.AssignedItem,
+  ) {
+    assigned.value = assigned.value.map((a) => ({
+      ...a,
+      items: a.items.map((i) => (i.id === itemId ? change(i) : i)),
+    }))
+  }
+
+  return {
+    assigned,
+    threads,
+    isLoading,
+    error,
+    loadAssigned: () =>
+      load(async () => void (assigned.value = (await plansApi.fetchAssigned()).assignments)),
+    loadThread: (id: string) =>
+      load(async () => {
+        const { comments } = await assignmentsApi.listComments(id)
+        setThread(id, () => comments)
+      }),
+    // Actions below throw on failure, so the form that called them can show it.
+    async addComment(id: string, body: string) {
+      const { comment } = await assignmentsApi.postComment(id, body)
+      setThread(id, (thread) => [...thread, comment])
+    },
+    async deleteComment(id: string, commentId: string) {
+      await assignmentsApi.deleteComment(id, commentId)
+      setThread(id, (thread) => thread.filter((c) => c.id !== commentId))
+    },
+    async addRecording(id: string, itemId: string, audio: Blob, fileName: string) {
+      const { recording } = await assignmentsApi.uploadRecording(id, itemId, audio, fileName)
+      updateItem(itemId, (item) => ({ ...item, recordings: [recording, ...item.recordings] }))
+    },
+    async deleteRecording(id: string, itemId: string, recordingId: string) {
+      await assignmentsApi.deleteRecording(id, recordingId)
+      updateItem(itemId, (item) => ({
+        ...item,
+        recordings: item.recordings.filter((r) => r.id !== recordingId),
+      }))
+    },
+  }
+})

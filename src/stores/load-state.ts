@@ -1,0 +1,35 @@
+// The loading flag and error every store keeps beside its data, and the two ways work records them:
+// a load keeps its failure for the view to show; an action also throws it to the form that called.
+import { ref } from 'vue'
+import { ApiError } from '../api/http'
+
+export const asApiError = (e: unknown) =>
+  e instanceof ApiError ? e : new ApiError(0, 'unknown', String(e))
+
+export function useLoadState() {
+  const isLoading = ref(false)
+  const error = ref<ApiError | null>(null)
+
+  async function run<T>(work: () => Promise<T>, rethrow: boolean): Promise<T | undefined> {
+    isLoading.value = true
+    error.value = null
+    try {
+      return await work()
+    } catch (e) {
+      error.value = asApiError(e)
+      if (rethrow) throw error.value
+      return undefined
+    } finally {
+      isLoading.value = false
+    }
+  }
+
+  return {
+    isLoading,
+    error,
+    /** Loads data; a failure is kept in `error` for the view to show. */
+    load: (work: () => Promise<unknown>) => run(work, false).then(() => undefined),
+    /** Runs an action; a failure is kept in `error` and thrown to the caller. */
+    track: <T>(work: () => Promise<T>) => run(work, true) as Promise<T>,
+  }
+}
