@@ -4,6 +4,7 @@ import type { AddressInfo } from 'node:net'
 import type { Server } from 'node:http'
 import knex from 'knex'
 import { knexConfig } from '../../db/knex-config'
+import { migrateToLatest } from '../../db/live-sql'
 import { createApp } from '../../server/app'
 import { signSession, SESSION_COOKIE } from '../../server/auth/session-token'
 import { loadConfig } from '../../server/config'
@@ -23,7 +24,7 @@ export async function freshBenchDatabase(name = BENCH_DATABASE): Promise<string>
   await createDatabase(name)
   const url = databaseUrl(name)
   const db = knex(knexConfig(url))
-  await db.migrate.latest()
+  await migrateToLatest(db)
   await db.destroy()
   return url
 }

@@ -3,6 +3,7 @@
 // progress endpoint over HTTP, next to the same figures computed straight from the raw attempts (the
 // baseline the rollups replace), measured in the same run. Asserts nothing.
 import { availableParallelism, loadavg } from 'node:os'
+import { migrateToLatest } from '../../db/live-sql'
 import { createBass, createPlayer, seedHistory } from './bench-seed'
 import { databaseUrl } from '../lib/paths.mjs'
 import {
@@ -113,7 +114,7 @@ function compare(name: string, rollup: { p50: number }, raw: { p50: number }) {
 
 /** BENCH_REUSE=1 times again against the database a previous run seeded (after new migrations). */
 async function reuse(db: Db) {
-  await db.migrate.latest()
+  await migrateToLatest(db)
   const id = async (email: string) =>
     ((await db('users').where({ email }).first('id')) as { id: string }).id
   const students = (await db('studio_members').orderBy('student_id').select('student_id')).map(
