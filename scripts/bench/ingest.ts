@@ -9,6 +9,7 @@ import knex from 'knex'
 import { knexConfig } from '../../db/knex-config'
 import { signSession, SESSION_COOKIE } from '../../server/auth/session-token'
 import { loadConfig } from '../../server/config'
+import { attemptRow } from '../../server/attempts/attempts-repository'
 import { findUserById } from '../../server/users/users-repository'
 import { localSecret } from '../lib/paths.mjs'
 import { freePort, startService, stopService } from '../lib/proc.mjs'
@@ -38,7 +39,7 @@ function batch(player: Player) {
       id: randomUUID(),
       instrumentId: player.instrumentId,
       tuning: BASS,
-      drill: 'recall',
+      drill: 'recall' as const,
       sessionId,
       string,
       fret,
@@ -53,23 +54,7 @@ function batch(player: Player) {
   })
 }
 
-const toRow = (playerId: string) => (a: ReturnType<typeof batch>[number]) => ({
-  id: a.id,
-  user_id: playerId,
-  instrument_id: a.instrumentId,
-  tuning: a.tuning,
-  drill: a.drill,
-  session_id: a.sessionId,
-  string: a.string,
-  fret: a.fret,
-  expected_pitch: a.expectedPitch,
-  answer: a.answer,
-  correct: a.correct,
-  response_ms: a.responseMs,
-  created_at: a.createdAt,
-  detail: {},
-  plan_item_id: null,
-})
+const toRow = (playerId: string) => (a: ReturnType<typeof batch>[number]) => attemptRow(playerId, a)
 
 /** autocannon for a bounded time; `overallRate` (req/s over all connections) paces it when set. */
 async function apiRun(

@@ -39,7 +39,8 @@ export const toStoredAttempt = (row: AttemptRow): StoredAttempt => ({
   planItemId: row.plan_item_id,
 })
 
-const toRow = (userId: string, a: AttemptInput) => ({
+/** An attempt as its database row (the ingest benchmark writes the same rows). */
+export const attemptRow = (userId: string, a: AttemptInput) => ({
   id: a.id,
   user_id: userId,
   instrument_id: a.instrumentId,
@@ -78,7 +79,7 @@ export async function assignedPlanItemIds(db: Db, userId: string, ids: string[])
   return new Set(rows.map((r) => r.id))
 }
 
-const INSERTED_COLUMNS = Object.keys(toRow('', {} as AttemptInput)).join(', ')
+const INSERTED_COLUMNS = Object.keys(attemptRow('', {} as AttemptInput)).join(', ')
 
 /**
  * Inserts the attempts whose ids are new; ids already stored (by anyone) are left untouched. The
@@ -90,7 +91,7 @@ export async function insertNewAttempts(db: Db, userId: string, attempts: Attemp
     `insert into attempts (${INSERTED_COLUMNS})
      select ${INSERTED_COLUMNS} from json_populate_recordset(null::attempts, ?::json)
      on conflict (id) do nothing returning *`,
-    [JSON.stringify(attempts.map((a) => toRow(userId, a)))],
+    [JSON.stringify(attempts.map((a) => attemptRow(userId, a)))],
   )
   return rows
 }

@@ -70,18 +70,24 @@ function pickInstrument(
   return fallback ? (list.find((i) => i.isActive) ?? list[0] ?? null) : null
 }
 
-/** Summary: totals in the range (all time by default), today, the last 7 days, and the streak. */
-export async function summary(
-  ctx: AppContext,
-  viewer: PublicUser,
-  q: RangeQuery,
-): Promise<SummaryAnswer> {
+/** Whose figures, their instruments and time zone, and the instrument key a range query reads. */
+async function rangeScope(ctx: AppContext, viewer: PublicUser, q: RangeQuery) {
   const studentId = await readableStudent(ctx, viewer, q.student)
   const [instruments, timeZone] = await Promise.all([
     instrumentsOf(ctx, studentId),
     repo.timeZoneOf(ctx.db, studentId),
   ])
   const key = pickInstrument(instruments, q.instrument, false)?.id ?? ALL_INSTRUMENTS
+  return { studentId, instruments, timeZone, key }
+}
+
+/** Summary: totals in the range (all time by default), today, the last 7 days, and the streak. */
+export async function summary(
+  ctx: AppContext,
+  viewer: PublicUser,
+  q: RangeQuery,
+): Promise<SummaryAnswer> {
+  const { studentId, instruments, timeZone, key } = await rangeScope(ctx, viewer, q)
   const drill = q.drill ?? ALL_DRILLS
   const today = localDay(new Date(), timeZone)
   const weekStart = addDays(today, -6)
@@ -155,12 +161,7 @@ export async function timeline(
   viewer: PublicUser,
   q: RangeQuery,
 ): Promise<TimelineAnswer> {
-  const studentId = await readableStudent(ctx, viewer, q.student)
-  const [instruments, timeZone] = await Promise.all([
-    instrumentsOf(ctx, studentId),
-    repo.timeZoneOf(ctx.db, studentId),
-  ])
-  const key = pickInstrument(instruments, q.instrument, false)?.id ?? ALL_INSTRUMENTS
+  const { studentId, timeZone, key } = await rangeScope(ctx, viewer, q)
   const to = q.to ?? localDay(new Date(), timeZone)
   const from = q.from ?? addDays(to, -(DEFAULT_TIMELINE_DAYS - 1))
   const rows = await repo.dayRows(ctx.db, studentId, key, q.drill ? [q.drill] : null, { from, to })

@@ -88,7 +88,7 @@ function stubApi(bodies: Record<string, unknown>, status = 200) {
 const mountProgress = (props: { studentId?: string } = {}) =>
   mountWithApp(StudentProgress, {
     props,
-    global: { stubs: { RecallSpeedChart: true, AccuracyChart: true } },
+    global: { stubs: { TimelineChart: true } },
   })
 
 describe('StudentProgress', () => {

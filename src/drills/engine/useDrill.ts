@@ -97,6 +97,8 @@ export function useDrill<D extends DrillId, Q extends DrillQuestion, A, R = void
   return {
     ...parts,
     canStart: computed(() => !problem.value && !plan.isLoading.value),
+    /** What every setup form takes: the instrument, and whether a plan item locks the settings. */
+    setupProps: computed(() => ({ neck: neck.value, disabled: !!plan.item.value })),
     begin: (request?: R) => begin(parts, setup, context, request),
     /** An answer given on the page (a typed or picked note name); `at` is when it was given. */
     answer: (given: A, at?: number) => answerWith(parts, given, at),
