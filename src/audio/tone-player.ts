@@ -58,27 +58,53 @@ function loadSampler(voice: SampleVoice, output: Tone.ToneAudioNode): Promise<To
   })
 }
 
+/** The metronome: a click each beat, the first of every four higher. */
+function createMetronome(output: Tone.ToneAudioNode) {
+  const click = createClick(output)
+  let clickId: number | null = null
+  const stop = () => {
+    const transport = Tone.getTransport()
+    if (clickId !== null) transport.clear(clickId)
+    clickId = null
+    transport.stop()
+  }
+  const start = (bpm: number) => {
+    const transport = Tone.getTransport()
+    if (clickId !== null) transport.clear(clickId)
+    transport.bpm.value = bpm
+    let beat = 0
+    clickId = transport.scheduleRepeat((time) => {
+      click.triggerAttackRelease(beat % 4 === 0 ? 'A5' : 'E5', 0.03, time)
+      beat += 1
+    }, '4n')
+    transport.start()
+  }
+  return { start, stop }
+}
+
+/** Each voice's sampler, loaded once on first use (null when its samples cannot be loaded). */
+function samplerCache(output: Tone.ToneAudioNode) {
+  const samplers = new Map<SampleVoice, Promise<Tone.Sampler | null>>()
+  return (which: SampleVoice) => {
+    if (!samplers.has(which))
+      samplers.set(
+        which,
+        loadSampler(which, output).catch(() => null),
+      )
+    return samplers.get(which)!
+  }
+}
+
 export function createTonePlayer(): PitchPlayer {
   // Limiter last: however the volume is set, the output never clips.
   const limiter = new Tone.Limiter(-1).toDestination()
   const master = new Tone.Volume(Tone.gainToDb(0.6)).connect(limiter)
   const synth = createSynthVoice(master)
-  const click = createClick(master)
-  const samplers = new Map<SampleVoice, Promise<Tone.Sampler | null>>()
+  const metronome = createMetronome(master)
+  const sampler = samplerCache(master)
   let voice: SampleVoice = 'bass'
   let referenceHz = 440
-  let clickId: number | null = null
   let state: PitchPlayer['voice'] = 'silent'
-
-  function sampler(which: SampleVoice) {
-    if (!samplers.has(which)) {
-      samplers.set(
-        which,
-        loadSampler(which, master).catch(() => null),
-      )
-    }
-    return samplers.get(which)!
-  }
 
   async function start() {
     await Tone.start()
@@ -100,25 +126,6 @@ export function createTonePlayer(): PitchPlayer {
     })
   }
 
-  function startClick(bpm: number) {
-    const transport = Tone.getTransport()
-    if (clickId !== null) transport.clear(clickId)
-    transport.bpm.value = bpm
-    let beat = 0
-    clickId = transport.scheduleRepeat((time) => {
-      click.triggerAttackRelease(beat % 4 === 0 ? 'A5' : 'E5', 0.03, time)
-      beat += 1
-    }, '4n')
-    transport.start()
-  }
-
-  function stopClick() {
-    const transport = Tone.getTransport()
-    if (clickId !== null) transport.clear(clickId)
-    clickId = null
-    transport.stop()
-  }
-
   return {
     start,
     play,
@@ -126,8 +133,8 @@ export function createTonePlayer(): PitchPlayer {
       pitches.forEach((pitch, i) =>
         play(pitch, { delayS: (60 / bpm) * i, durationS: (60 / bpm) * 0.95 }),
       ),
-    startClick,
-    stopClick,
+    startClick: metronome.start,
+    stopClick: metronome.stop,
     setVolume: (volume) => {
       const gain = Math.min(1, Math.max(0, volume))
       master.mute = gain === 0

@@ -11,6 +11,10 @@ import type {
   NewInstrument,
 } from '../api/instruments'
 
+// Keep the server's order: active first, then oldest first.
+const sortActiveFirst = (list: Instrument[]) =>
+  [...list].sort((a, b) => Number(b.isActive) - Number(a.isActive))
+
 export const useInstrumentStore = defineStore('instruments', () => {
   const instruments = ref<Instrument[]>([])
   const presets = ref<InstrumentPreset[]>([])
@@ -23,15 +27,6 @@ export const useInstrumentStore = defineStore('instruments', () => {
   const active = computed<Instrument | null>(
     () => instruments.value.find((i) => i.isActive) ?? instruments.value[0] ?? null,
   )
-
-  // Keep the server's order: active first, then oldest first.
-  function sortActiveFirst(list: Instrument[]) {
-    return [...list].sort((a, b) => Number(b.isActive) - Number(a.isActive))
-  }
-
-  function replace(instrument: Instrument) {
-    instruments.value = instruments.value.map((i) => (i.id === instrument.id ? instrument : i))
-  }
 
   /** Loads the instruments (and presets); `force` reloads even when already loaded. */
   const load = (force = false) =>
@@ -55,7 +50,7 @@ export const useInstrumentStore = defineStore('instruments', () => {
   const update = (id: string, patch: InstrumentPatch) =>
     track(async () => {
       const { instrument } = await api.updateInstrument(id, patch)
-      replace(instrument)
+      instruments.value = instruments.value.map((i) => (i.id === id ? instrument : i))
       return instrument
     })
 
@@ -84,17 +79,7 @@ export const useInstrumentStore = defineStore('instruments', () => {
   }
 
   return {
-    instruments,
-    presets,
-    active,
-    loaded,
-    isLoading,
-    error,
-    load,
-    create,
-    update,
-    remove,
-    activate,
-    reset,
+    ...{ instruments, presets, active, loaded, isLoading, error },
+    ...{ load, create, update, remove, activate, reset },
   }
 })

@@ -26,6 +26,23 @@ function stepFor(key: string, leftHanded: boolean): { string: number; fret: numb
   return null
 }
 
+/** The cell a navigation key moves to (null: not a navigation key). */
+function movedCell(
+  key: string,
+  cell: Cell,
+  bounds: ReturnType<BoardKeyboardOptions['bounds']>,
+): Cell | null {
+  const { strings, fretStart, fretEnd, leftHanded } = bounds
+  if (key === 'Home') return { string: cell.string, fret: fretStart }
+  if (key === 'End') return { string: cell.string, fret: fretEnd }
+  const step = stepFor(key, leftHanded)
+  if (!step) return null
+  return {
+    string: clamp(cell.string + step.string, 0, strings - 1),
+    fret: clamp(cell.fret + step.fret, fretStart, fretEnd),
+  }
+}
+
 export function useBoardKeyboard(options: BoardKeyboardOptions) {
   /** The letter (and accidental) typed so far, shown to the player while it waits. */
   const pending = ref('')
@@ -64,22 +81,10 @@ export function useBoardKeyboard(options: BoardKeyboardOptions) {
     return false
   }
 
-  function moved(key: string, cell: Cell): Cell | null {
-    const { strings, fretStart, fretEnd, leftHanded } = options.bounds()
-    if (key === 'Home') return { string: cell.string, fret: fretStart }
-    if (key === 'End') return { string: cell.string, fret: fretEnd }
-    const step = stepFor(key, leftHanded)
-    if (!step) return null
-    return {
-      string: clamp(cell.string + step.string, 0, strings - 1),
-      fret: clamp(cell.fret + step.fret, fretStart, fretEnd),
-    }
-  }
-
   /** Handles one key on the focused cell; returns true when the key was used (prevent default). */
   function onKey(event: KeyboardEvent, cell: Cell): boolean {
     if (event.altKey || event.ctrlKey || event.metaKey) return false
-    const next = moved(event.key, cell)
+    const next = movedCell(event.key, cell, options.bounds())
     if (next) {
       commit()
       options.move(next)
