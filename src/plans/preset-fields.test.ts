@@ -2,6 +2,8 @@
 // a setting the schema has.
 import { describe, expect, it } from 'vitest'
 import { DRILL_IDS, DrillPresetSchema, type DrillPreset } from '../contract/drills'
+import { FALLBACK_NECK } from '../drills/engine/useDrillNeck'
+import { drillDefinition } from '../drills/registry'
 import { DRILL_FIELDS, defaultPreset, fieldsFor, getPath, setPath } from './preset-fields'
 
 describe('plan editor drill forms', () => {
@@ -16,6 +18,18 @@ describe('plan editor drill forms', () => {
       expect(missing.map((f) => f.path)).toEqual([])
     },
   )
+
+  it.each(DRILL_IDS)(
+    'a new %s item starts from the settings its drill page gives a standard 4-string bass',
+    (drill) => {
+      expect(defaultPreset(drill).settings).toEqual(drillDefinition(drill).defaults(FALLBACK_NECK))
+    },
+  )
+
+  it('Range Runs starts on frets 2–5 and Octave Scatter on C major, as on their pages', () => {
+    expect(defaultPreset('runs').settings).toMatchObject({ lowFret: 2, highFret: 5 })
+    expect(defaultPreset('scatter').settings).toMatchObject({ tonic: 'C', scale: 'major' })
+  })
 
   it('sets nested values without touching the original', () => {
     const preset = defaultPreset('recall')
