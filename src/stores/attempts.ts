@@ -4,7 +4,7 @@
 // exponential back-off; answers the server refuses (400) are dropped with a visible error, so one
 // bad answer never blocks the rest. The server ignores ids it already has, so re-sending is safe.
 import { defineStore } from 'pinia'
-import { computed, ref, watch } from 'vue'
+import { computed, ref, watch, type Ref } from 'vue'
 import { postAttempts, type AttemptInput } from '../api/attempts'
 import { ApiError } from '../api/http'
 import { useAuthStore } from './auth'
@@ -57,126 +57,140 @@ if (typeof document !== 'undefined') {
   window.addEventListener('pagehide', () => void flushOnHide?.())
 }
 
+// The recorder's state: the queue and what is shown (refs), and the timers and counters of sending.
+interface Recorder {
+  owner: Ref<string | null>
+  queue: Ref<AttemptInput[]>
+  isSending: Ref<boolean>
+  lastError: Ref<ApiError | null>
+  /** Answers the server refused and that were dropped (shown with lastError). */
+  dropped: Ref<number>
+  // A refusal stays on screen until cleared; a transient send error clears itself on success.
+  errorIsRefusal: boolean
+  flushTimer?: ReturnType<typeof setTimeout>
+  retryTimer?: ReturnType<typeof setTimeout>
+  failures: number
+  inFlight: Promise<void> | null
+}
+
+function persist(r: Recorder) {
+  try {
+    localStorage.setItem(storageKey(r.owner.value), JSON.stringify(r.queue.value))
+  } catch {
+    // Storage full or blocked: the answers stay in memory and are still sent.
+  }
+}
+
+function schedule(r: Recorder, delayMs: number) {
+  clearTimeout(r.flushTimer)
+  r.flushTimer = setTimeout(() => void flush(r), delayMs)
+}
+
+/** Queues one graded answer (the caller sets id with crypto.randomUUID() and createdAt). */
+function record(r: Recorder, attempt: AttemptInput) {
+  r.queue.value = [...r.queue.value, attempt]
+  persist(r)
+  if (r.retryTimer || r.inFlight) return // the back-off or the send under way will take it
+  if (r.queue.value.length >= BATCH_SIZE) void flush(r)
+  else schedule(r, FLUSH_DELAY_MS)
+}
+
+function remove(r: Recorder, sent: AttemptInput[]) {
+  const ids = new Set(sent.map((a) => a.id))
+  r.queue.value = r.queue.value.filter((a) => !ids.has(a.id))
+  persist(r)
+}
+
+function dropRefused(r: Recorder, batch: AttemptInput[], error: ApiError) {
+  const named = refusedIndices(error)
+  const refused = named.size ? batch.filter((_, i) => named.has(i)) : batch
+  remove(r, refused)
+  r.dropped.value += refused.length
+  const what = refused.length === 1 ? 'One answer' : `${refused.length} answers`
+  const were = refused.length === 1 ? 'was' : 'were'
+  r.lastError.value = new ApiError(
+    error.status,
+    error.code,
+    `${what} could not be saved and ${were} left out: ${error.message}`,
+    error.fields,
+  )
+  r.errorIsRefusal = true
+}
+
+function retryLater(r: Recorder, error: ApiError) {
+  r.failures += 1
+  if (!r.errorIsRefusal) r.lastError.value = error
+  const delay = Math.min(RETRY_MAX_MS, RETRY_BASE_MS * 2 ** (r.failures - 1))
+  r.retryTimer = setTimeout(
+    () => {
+      r.retryTimer = undefined
+      void flush(r)
+    },
+    delay + Math.random() * 250,
+  )
+}
+
+/** Sends one batch; false when sending should stop for now. */
+async function sendOne(r: Recorder): Promise<boolean> {
+  const batch = r.queue.value.slice(0, MAX_BATCH)
+  try {
+    await postAttempts(batch, localTimeZone())
+    remove(r, batch)
+    r.failures = 0
+    if (!r.errorIsRefusal) r.lastError.value = null
+    return true
+  } catch (e) {
+    const error = e instanceof ApiError ? e : new ApiError(0, 'unknown', String(e))
+    if (isRetryable(error)) retryLater(r, error)
+    else if (error.status === 401) {
+      if (!r.errorIsRefusal) r.lastError.value = error // the answers wait for the next sign-in
+    } else {
+      dropRefused(r, batch, error)
+      return true
+    }
+    return false
+  }
+}
+
+async function drain(r: Recorder) {
+  r.isSending.value = true
+  try {
+    while (r.queue.value.length && (await sendOne(r)));
+  } finally {
+    r.isSending.value = false
+    r.inFlight = null
+  }
+}
+
+/** Sends everything queued now (waits for a send already under way); resolves when done or failed. */
+function flush(r: Recorder): Promise<void> {
+  clearTimeout(r.flushTimer)
+  if (r.retryTimer) {
+    clearTimeout(r.retryTimer)
+    r.retryTimer = undefined
+  }
+  if (!r.inFlight && r.queue.value.length) r.inFlight = drain(r)
+  return r.inFlight ?? Promise.resolve()
+}
+
+function clearError(r: Recorder) {
+  r.lastError.value = null
+  r.errorIsRefusal = false
+  r.dropped.value = 0
+}
+
 export const useAttemptsStore = defineStore('attempts', () => {
   const auth = useAuthStore()
   const owner = ref<string | null>(auth.user?.id ?? null)
-  const queue = ref<AttemptInput[]>(load(owner.value))
-  const isSending = ref(false)
-  const lastError = ref<ApiError | null>(null)
-  /** Answers the server refused and that were dropped (shown with lastError). */
-  const dropped = ref(0)
-  const pending = computed(() => queue.value.length)
-  // A refusal stays on screen until cleared; a transient send error clears itself on success.
-  let errorIsRefusal = false
-  let flushTimer: ReturnType<typeof setTimeout> | undefined
-  let retryTimer: ReturnType<typeof setTimeout> | undefined
-  let failures = 0
-  let inFlight: Promise<void> | null = null
-
-  function persist() {
-    try {
-      localStorage.setItem(storageKey(owner.value), JSON.stringify(queue.value))
-    } catch {
-      // Storage full or blocked: the answers stay in memory and are still sent.
-    }
-  }
-
-  function schedule(delayMs: number) {
-    clearTimeout(flushTimer)
-    flushTimer = setTimeout(() => void flush(), delayMs)
-  }
-
-  /** Queues one graded answer (the caller sets id with crypto.randomUUID() and createdAt). */
-  function record(attempt: AttemptInput) {
-    queue.value = [...queue.value, attempt]
-    persist()
-    if (retryTimer || inFlight) return // the back-off or the send under way will take it
-    if (queue.value.length >= BATCH_SIZE) void flush()
-    else schedule(FLUSH_DELAY_MS)
-  }
-
-  function remove(sent: AttemptInput[]) {
-    const ids = new Set(sent.map((a) => a.id))
-    queue.value = queue.value.filter((a) => !ids.has(a.id))
-    persist()
-  }
-
-  function dropRefused(batch: AttemptInput[], error: ApiError) {
-    const named = refusedIndices(error)
-    const refused = named.size ? batch.filter((_, i) => named.has(i)) : batch
-    remove(refused)
-    dropped.value += refused.length
-    const what = refused.length === 1 ? 'One answer' : `${refused.length} answers`
-    const were = refused.length === 1 ? 'was' : 'were'
-    lastError.value = new ApiError(
-      error.status,
-      error.code,
-      `${what} could not be saved and ${were} left out: ${error.message}`,
-      error.fields,
-    )
-    errorIsRefusal = true
-  }
-
-  function retryLater(error: ApiError) {
-    failures += 1
-    if (!errorIsRefusal) lastError.value = error
-    const delay = Math.min(RETRY_MAX_MS, RETRY_BASE_MS * 2 ** (failures - 1))
-    retryTimer = setTimeout(
-      () => {
-        retryTimer = undefined
-        void flush()
-      },
-      delay + Math.random() * 250,
-    )
-  }
-
-  /** Sends one batch; false when sending should stop for now. */
-  async function sendOne(): Promise<boolean> {
-    const batch = queue.value.slice(0, MAX_BATCH)
-    try {
-      await postAttempts(batch, localTimeZone())
-      remove(batch)
-      failures = 0
-      if (!errorIsRefusal) lastError.value = null
-      return true
-    } catch (e) {
-      const error = e instanceof ApiError ? e : new ApiError(0, 'unknown', String(e))
-      if (isRetryable(error)) retryLater(error)
-      else if (error.status === 401) {
-        if (!errorIsRefusal) lastError.value = error // the answers wait for the next sign-in
-      } else {
-        dropRefused(batch, error)
-        return true
-      }
-      return false
-    }
-  }
-
-  async function drain() {
-    isSending.value = true
-    try {
-      while (queue.value.length && (await sendOne()));
-    } finally {
-      isSending.value = false
-      inFlight = null
-    }
-  }
-
-  /** Sends everything queued now (waits for a send already under way); resolves when done or failed. */
-  function flush(): Promise<void> {
-    clearTimeout(flushTimer)
-    if (retryTimer) {
-      clearTimeout(retryTimer)
-      retryTimer = undefined
-    }
-    if (!inFlight && queue.value.length) inFlight = drain()
-    return inFlight ?? Promise.resolve()
-  }
-
-  function clearError() {
-    lastError.value = null
-    errorIsRefusal = false
-    dropped.value = 0
+  const r: Recorder = {
+    owner,
+    queue: ref<AttemptInput[]>(load(owner.value)),
+    isSending: ref(false),
+    lastError: ref<ApiError | null>(null),
+    dropped: ref(0),
+    errorIsRefusal: false,
+    failures: 0,
+    inFlight: null,
   }
 
   // Each player has their own queue: another sign-in on this browser never sends someone else's answers.
@@ -185,12 +199,18 @@ export const useAttemptsStore = defineStore('attempts', () => {
     (id) => {
       if (id === owner.value) return
       owner.value = id
-      queue.value = load(id)
-      if (id && queue.value.length) void flush()
+      r.queue.value = load(id)
+      if (id && r.queue.value.length) void flush(r)
     },
   )
 
-  flushOnHide = flush
+  flushOnHide = () => flush(r)
 
-  return { queue, pending, isSending, lastError, dropped, record, flush, clearError }
+  return {
+    ...{ queue: r.queue, isSending: r.isSending, lastError: r.lastError, dropped: r.dropped },
+    pending: computed(() => r.queue.value.length),
+    record: (attempt: AttemptInput) => record(r, attempt),
+    flush: () => flush(r),
+    clearError: () => clearError(r),
+  }
 })
