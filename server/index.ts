@@ -16,6 +16,10 @@ const scheduler = startScheduler({ config, db, logger, mailer })
 const server = app.listen(config.port, config.host, () => {
   logger.info(`Ambitus API listening on http://${config.host}:${config.port}`)
 })
+// Idle connections stay open longer than clients wait between requests (Node's default is 5 s), so
+// a client reusing one never has it closed under its request (seen as ECONNRESET on a busy machine).
+server.keepAliveTimeout = 65_000
+server.headersTimeout = 66_000
 
 function shutdown(signal: string) {
   logger.info(`${signal}: shutting down`)
