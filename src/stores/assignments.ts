@@ -8,6 +8,17 @@ import { useLoadState } from './load-state'
 
 type Threads = Record<string, assignmentsApi.PlanComment[]>
 
+/** The thread as loaded, keeping comments posted while it loaded (the load may answer last). */
+function withPostedMeanwhile(
+  loaded: assignmentsApi.PlanComment[],
+  current: assignmentsApi.PlanComment[],
+) {
+  const ids = new Set(loaded.map((c) => c.id))
+  return [...loaded, ...current.filter((c) => !ids.has(c.id))].sort((a, b) =>
+    a.createdAt.localeCompare(b.createdAt),
+  )
+}
+
 export const useAssignmentsStore = defineStore('assignments', () => {
   const { isLoading, error, load } = useLoadState()
   const assigned = ref<plansApi.Assignment[]>([])
@@ -38,7 +49,7 @@ export const useAssignmentsStore = defineStore('assignments', () => {
     loadThread: (id: string) =>
       load(async () => {
         const { comments } = await assignmentsApi.listComments(id)
-        setThread(id, () => comments)
+        setThread(id, (thread) => withPostedMeanwhile(comments, thread))
       }),
     // Actions below throw on failure, so the form that called them can show it.
     async addComment(id: string, body: string) {
