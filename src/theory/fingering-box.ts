@@ -66,6 +66,28 @@ export function planBox(options: FingeringOptions, fretOf: number[][]): BoxPlan 
   }
 }
 
+interface Placed {
+  count: number
+  /** The moves on this string so far, the last one played last. */
+  steps: HandStep[]
+  shifts: number
+}
+
+// Notes i, i+1 … played one after another on string s while they fit, the hand carried along.
+function* onString(plan: BoxPlan, i: number, s: number, handAt: number, used: number) {
+  const steps: HandStep[] = []
+  let shifts = used
+  for (let count = 1; count <= plan.maxPerString && i + count <= plan.fretOf.length; count += 1) {
+    const fret = plan.fretOf[i + count - 1]?.[s] ?? -1
+    if (fret < 0) return
+    const step = handStep(steps.at(-1)?.handAt ?? handAt, fret, plan.system)
+    shifts += step.move === 'shift' ? 1 : 0
+    if (shifts > plan.maxShifts) return
+    steps.push(step)
+    yield { count, steps, shifts } satisfies Placed
+  }
+}
+
 // Fingerings of notes i.. that start string s at note i, the hand at handAt after `used` shifts.
 function waysFrom(plan: BoxPlan, i: number, s: number, handAt: number, used: number): number {
   const total = plan.fretOf.length
@@ -74,15 +96,8 @@ function waysFrom(plan: BoxPlan, i: number, s: number, handAt: number, used: num
   const known = plan.memo.get(key)
   if (known !== undefined) return known
   let sum = 0
-  let hand = handAt
-  let shifts = used
-  for (let count = 1; count <= plan.maxPerString && i + count <= total; count += 1) {
-    const fret = plan.fretOf[i + count - 1]?.[s] ?? -1
-    if (fret < 0) break
-    const step = handStep(hand, fret, plan.system)
-    shifts += step.move === 'shift' ? 1 : 0
-    if (shifts > plan.maxShifts) break
-    hand = step.handAt
+  for (const { count, steps, shifts } of onString(plan, i, s, handAt, used)) {
+    const hand = steps.at(-1)?.handAt ?? handAt
     sum += i + count === total ? 1 : waysFrom(plan, i + count, s + 1, hand, shifts)
   }
   plan.memo.set(key, sum)
@@ -93,7 +108,7 @@ function waysFrom(plan: BoxPlan, i: number, s: number, handAt: number, used: num
  * Counts the fingerings of a run inside the widened hand position without listing them.
  *
  * @example
- * countBoxFingerings(planBox(options, fretOf)) // 14
+ * countBoxFingerings(planBox({ tuning: [28, 33], frets: 20, run: [33, 35], lowFret: 5, highFret: 8 }, [[5, 0], [7, 2]])) // 1 (both on the E string)
  */
 export function countBoxFingerings(plan: BoxPlan): number {
   let sum = 0
@@ -101,7 +116,8 @@ export function countBoxFingerings(plan: BoxPlan): number {
   return sum
 }
 
-function toFingering(plan: BoxPlan, strings: number[], steps: HandStep[], counts: number[]) {
+function toFingering(plan: BoxPlan, strings: number[], steps: HandStep[]) {
+  const counts = [...new Set(strings)].map((s) => strings.filter((t) => t === s).length)
   const positions = strings.map((string, i) => ({ string, fret: plan.fretOf[i]?.[string] ?? 0 }))
   const fingering: Fingering = {
     positions,
@@ -121,38 +137,27 @@ function toFingering(plan: BoxPlan, strings: number[], steps: HandStep[], counts
  * move, pruned by the counts so no dead end is walked.
  *
  * @example
- * listBoxFingerings(planBox(options, fretOf))[0]?.fingering.positionName // 'V'
+ * listBoxFingerings(planBox({ tuning: [28, 33], frets: 20, run: [33, 35], lowFret: 5, highFret: 8 }, [[5, 0], [7, 2]]))[0]?.fingering.fingers // [1, 3]
  */
 export function listBoxFingerings(plan: BoxPlan): { fingering: Fingering; counts: number[] }[] {
   const total = plan.fretOf.length
   const found: { fingering: Fingering; counts: number[] }[] = []
-  const walk = (
-    i: number,
-    s: number,
-    prefix: { strings: number[]; steps: HandStep[] },
-    counts: number[],
-  ) => {
-    let hand = prefix.steps.at(-1)?.handAt ?? plan.home
-    let shifts = prefix.steps.filter((step) => step.move === 'shift').length
-    const strings = [...prefix.strings]
-    const steps = [...prefix.steps]
-    for (let count = 1; count <= plan.maxPerString && i + count <= total; count += 1) {
-      const fret = plan.fretOf[i + count - 1]?.[s] ?? -1
-      if (fret < 0) return
-      const step = handStep(hand, fret, plan.system)
-      shifts += step.move === 'shift' ? 1 : 0
-      if (shifts > plan.maxShifts) return
-      hand = step.handAt
-      strings.push(s)
-      steps.push(step)
-      if (i + count === total) found.push(toFingering(plan, strings, steps, [...counts, count]))
-      else if (waysFrom(plan, i + count, s + 1, hand, shifts) > 0) {
-        walk(i + count, s + 1, { strings, steps }, [...counts, count])
+  const walk = (i: number, s: number, prefix: { strings: number[]; steps: HandStep[] }) => {
+    const hand = prefix.steps.at(-1)?.handAt ?? plan.home
+    const used = prefix.steps.filter((step) => step.move === 'shift').length
+    for (const { count, steps, shifts } of onString(plan, i, s, hand, used)) {
+      const next = {
+        strings: [...prefix.strings, ...Array<number>(count).fill(s)],
+        steps: [...prefix.steps, ...steps],
+      }
+      if (i + count === total) found.push(toFingering(plan, next.strings, next.steps))
+      else if (waysFrom(plan, i + count, s + 1, steps.at(-1)?.handAt ?? hand, shifts) > 0) {
+        walk(i + count, s + 1, next)
       }
     }
   }
   for (let s = 0; s < plan.strings; s += 1) {
-    if (waysFrom(plan, 0, s, plan.home, 0) > 0) walk(0, s, { strings: [], steps: [] }, [])
+    if (waysFrom(plan, 0, s, plan.home, 0) > 0) walk(0, s, { strings: [], steps: [] })
   }
   return found
 }
