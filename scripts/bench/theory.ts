@@ -3,16 +3,21 @@
 import { Note, Scale } from 'tonal'
 import {
   countFingerings,
+  cycleNotes,
   cycleTonics,
   fingeringsOf,
   keyCycleInWindow,
+  pitchName,
   positionsOf,
+  rangeRun,
   SCALE_TYPES,
   type Fingering,
+  type FingeringOptions,
   type Position,
 } from '../../src/theory'
 
 const EIGHT_STRING = [30, 35, 40, 45, 50, 55, 59, 64] // F#1 B1 E2 A2 D3 G3 B3 E4
+const BASS = [28, 33, 38, 43] // E1 A1 D2 G2
 const GUITAR = [40, 45, 50, 55, 59, 64] // E2 A2 D3 G3 B3 E4
 const TWO_OCTAVES_G = [43, 45, 47, 48, 50, 52, 54, 55, 57, 59, 60, 62, 64, 66, 67] // G2 major to G4
 const FOURTHS = cycleTonics('fourths')
@@ -135,6 +140,53 @@ function checkChoice(
   return { positions, pattern: [...counts.values()].join('-'), shifts }
 }
 
+// Fingerings in a hand position by brute force: every string choice that never goes back, each
+// checked for the widened region and the rules, the hand simulated note by note, then sorted.
+function naiveBoxFingerings(options: Required<Omit<FingeringOptions, 'handSpan'>>): Fingering[] {
+  const found: Fingering[] = []
+  const choose = (strings: number[]): void => {
+    if (strings.length === options.run.length) {
+      const fingering = checkBoxChoice(options, strings)
+      if (fingering) found.push(fingering)
+      return
+    }
+    for (let string = strings.at(-1) ?? 0; string < options.tuning.length; string += 1)
+      choose([...strings, string])
+  }
+  choose([])
+  return found.sort(
+    (a, b) =>
+      a.shifts - b.shifts ||
+      (a.stretches ?? 0) - (b.stretches ?? 0) ||
+      a.pattern.localeCompare(b.pattern),
+  )
+}
+
+function checkBoxChoice(
+  options: Required<Omit<FingeringOptions, 'handSpan'>>,
+  strings: number[],
+): Fingering | undefined {
+  const { tuning, run, lowFret, highFret, shifts, frets } = options
+  const positions = strings.map((string, i) => ({ string, fret: run[i]! - tuning[string]! }))
+  const [low, high] = [Math.max(0, lowFret - shifts), Math.min(frets, highFret + shifts)]
+  if (positions.some(({ fret }) => fret < low || fret > high)) return undefined
+  const counts = new Map<number, number>()
+  strings.forEach((string) => counts.set(string, (counts.get(string) ?? 0) + 1))
+  const used = [...counts.keys()]
+  if (used.some((string, i) => i > 0 && string !== used[i - 1]! + 1)) return undefined
+  if ([...counts.values()].some((count) => count > options.maxPerString)) return undefined
+  const cover = options.handSystem === 'three-fret' ? 3 : 4
+  let [hand, moved, stretched] = [Math.max(1, lowFret), 0, 0]
+  for (const { fret } of positions) {
+    if (fret === 0 || (fret >= hand && fret < hand + cover)) continue
+    if (fret === hand - 1 || fret === hand + cover) stretched += 1
+    else [hand, moved] = [fret > hand ? fret - cover + 1 : fret, moved + 1]
+  }
+  if (moved > shifts) return undefined
+  const pattern = [...counts.values()].join('-')
+  return { positions, pattern, shifts: moved, stretches: stretched }
+}
+
 function row(label: string, { ours, naive }: Timing, target?: number): void {
   const verdict =
     target === undefined ? '' : `   target < ${target} ms: ${ours < target ? 'met' : 'MISSED'}`
@@ -213,8 +265,77 @@ function benchFingerings(): void {
   )
 }
 
+function benchBoxFingerings(): void {
+  const cases = [
+    {
+      name: 'bass, G major frets 5–8, 1 shift',
+      tuning: BASS,
+      frets: 20,
+      lowFret: 5,
+      highFret: 8,
+      shifts: 1,
+    },
+    {
+      name: 'guitar, G major frets 2–6, 3 shifts',
+      tuning: GUITAR,
+      frets: 22,
+      lowFret: 2,
+      highFret: 6,
+      shifts: 3,
+    },
+  ]
+  for (const { name, ...region } of cases) {
+    const run = rangeRun({ ...region, tonic: 'G', scale: 'major' })
+    const options = { ...region, run, maxPerString: 4, handSystem: 'one-finger-per-fret' as const }
+    const mine = fingeringsOf(options)
+    const naive = naiveBoxFingerings(options)
+    const outside = mine.filter((f) =>
+      f.positions.some(
+        (p) => p.fret < region.lowFret - region.shifts || p.fret > region.highFret + region.shifts,
+      ),
+    ).length
+    const label = `fingerings in position, ${name} (${run.length} notes: ${mine.length}; naive ${naive.length}; outside the widened box ${outside})`
+    row(
+      label,
+      compare(
+        () => fingeringsOf(options),
+        () => naiveBoxFingerings(options),
+        11,
+      ),
+      20,
+    )
+  }
+}
+
+function benchCycleSessions(): void {
+  const options = {
+    low: 28,
+    high: 47,
+    tonics: FOURTHS,
+    scale: 'major',
+    direction: 'alternate' as const,
+  }
+  const whole = keyCycleInWindow(options).flatMap((key) => key.pitches)
+  const sessions = (size: number) => {
+    let position = undefined as Parameters<typeof cycleNotes>[1]['fromPosition']
+    for (let played = 0; played < 96; played += size) {
+      position = cycleNotes(options, { fromPosition: position, count: size }).nextPosition
+    }
+  }
+  const timing = compare(
+    () => sessions(8),
+    () => keyCycleInWindow(options),
+  )
+  row('window cycle E1–B2 alternate, 12 sessions of 8 notes (baseline: one whole cycle)', timing)
+  console.log(
+    `  pitches played E1–B2 alternate: ${pitchName(Math.min(...whole))}–${pitchName(Math.max(...whole))}`,
+  )
+}
+
 console.log('Ambitus theory core benchmark: ms per call, median of many batches.')
 console.log('ratio = naive baseline ÷ theory core, both timed in this run (higher is better).\n')
 benchPositions()
 benchWindowCycles()
 benchFingerings()
+benchBoxFingerings()
+benchCycleSessions()

@@ -69,6 +69,15 @@ describe('cycleTonics', () => {
     ])
   })
 
+  // issue 13: every minor variant is written with the natural minor's key signature
+  // (Schmidt-Jones), so its tonics are the minor keys' — D♭ minor would need 8 flats
+  it.each(['harmonic minor', 'melodic minor', 'minor pentatonic', 'minor blues'])(
+    '%s cycles on the natural minor keys: G# and C#, not Ab and Db',
+    (scale) => {
+      expect(cycleTonics('fourths', { scale })).toEqual(cycleTonics('fourths', { scale: 'minor' }))
+    },
+  )
+
   it('keeps the cycle’s own spelling on a tie (Eb minor and D# minor both have 6 accidentals)', () => {
     // prettier-ignore
     expect(cycleTonics('fifths', { start: 'A', scale: 'minor' })).toEqual([
@@ -97,6 +106,9 @@ describe('preferredTonic (Schmidt-Jones: fewer accidentals)', () => {
     [8, 'minor', 'G#'], // G# minor 5 sharps vs Ab minor 7 flats
     [10, 'minor', 'Bb'], // Bb minor 5 flats vs A# minor 7 sharps
     [0, 'major', 'C'],
+    [8, 'melodic minor', 'G#'], // G# minor's 5 sharps, not Ab minor's 7 flats (issue 13)
+    [1, 'harmonic minor', 'C#'], // C# minor's 4 sharps, not Db minor's 8 flats
+    [10, 'locrian', 'A#'], // parent B major (5 sharps) vs Cb major (7 flats) (tonal Mode)
   ])('pitch class %i in %s → %s', (pitchClass, scale, tonic) => {
     expect(preferredTonic(pitchClass, scale)).toBe(tonic)
   })

@@ -1,21 +1,24 @@
 // Key cycles for drills: built-in orders (fourths, fifths, chromatic, whole steps) or custom lists.
 import { CYCLES, type CycleData, type CycleId } from './cycle-data'
+import { keyAlteration } from './key'
 import { pitchClassOf } from './pitch'
-import { resolveScale, tonicName } from './scale'
+import { tonicName } from './scale'
 import { TONICS } from './scale-data'
 
 function accidentalCount(tonic: string, scale: string): number {
-  return resolveScale(tonic, scale).names.reduce((count, name) => count + name.length - 1, 0)
+  return Math.abs(keyAlteration(tonic, scale))
 }
 
 /**
- * Picks the tonic spelling for a pitch class that gives a scale the fewest accidentals (so C# minor
- * rather than Db minor, Db major rather than C# major); on a tie, `onTie` when it fits, else the
- * first in TONICS order.
+ * Picks the tonic spelling for a pitch class whose key signature for the scale has the fewest
+ * accidentals (so C# minor rather than Db minor, Db major rather than C# major); every minor
+ * variant goes by the natural minor's signature (G# melodic minor, not Ab). On a tie, `onTie` when
+ * it fits, else the first in TONICS order.
  *
  * @example
  * preferredTonic(1, 'minor') // 'C#'
  * preferredTonic(1, 'major') // 'Db'
+ * preferredTonic(8, 'melodic minor') // 'G#'
  */
 export function preferredTonic(pitchClass: number, scale: string, onTie?: string): string {
   const candidates = TONICS.filter((tonic) => pitchClassOf(tonic) === ((pitchClass % 12) + 12) % 12)

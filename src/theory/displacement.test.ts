@@ -29,9 +29,15 @@ function allPlacements(options: ScatterOptions): number[][] {
     const first = pitches[0] ?? 0
     const displaced = pitches.filter((pitch, i) => pitch !== first + (steps[i] ?? 0)).length
     const leaps = pitches.slice(1).map((pitch, i) => Math.abs(pitch - (pitches[i] ?? 0)))
+    // a plain step up: the next pitch is 1–12 semitones above the one before
+    const plainSteps = pitches.slice(1).filter((pitch, i) => {
+      const rise = pitch - (pitches[i] ?? 0)
+      return rise > 0 && rise <= 12
+    })
     return (
       displaced >= (options.minDisplaced ?? 0) &&
-      leaps.every((leap) => leap <= (options.maxLeap ?? 127))
+      leaps.every((leap) => leap <= (options.maxLeap ?? 24)) && // issue 13: two octaves by default
+      (options.placement !== 'each-moved' || plainSteps.length === 0)
     )
   })
 }
@@ -84,8 +90,25 @@ describe('countOctaveScatters', () => {
     { low: 40, high: 64, tonic: 'F#', scale: 'minor blues', minDisplaced: 2, maxLeap: 9 },
     { low: 36, high: 60, tonic: 'Db', scale: 'dorian', minDisplaced: 7 },
     { low: 36, high: 41, tonic: 'C', scale: 'major' },
+    { low: 28, high: 67, tonic: 'A', scale: 'minor', placement: 'each-moved' as const },
+    { low: 28, high: 55, tonic: 'E', scale: 'minor pentatonic', placement: 'each-moved' as const },
+    {
+      low: 28,
+      high: 67,
+      tonic: 'G',
+      scale: 'major',
+      placement: 'each-moved' as const,
+      maxLeap: 30,
+    },
   ])('equals a brute-force count for %j (arithmetic)', (options) => {
     expect(countOctaveScatters(options)).toBe(allPlacements(options).length)
+  })
+
+  it('limits leaps to two octaves by default (issue 13): fewer placements than with 38', () => {
+    // E1–G4 (28–67), Eb minor: a 38-semitone leap (e.g. F1 → G4 area) is allowed only when asked
+    const base = { low: 28, high: 67, tonic: 'Eb', scale: 'minor' }
+    expect(countOctaveScatters(base)).toBe(countOctaveScatters({ ...base, maxLeap: 24 }))
+    expect(countOctaveScatters(base)).toBeLessThan(countOctaveScatters({ ...base, maxLeap: 38 }))
   })
 
   it('throws a RangeError for impossible options', () => {
@@ -150,6 +173,28 @@ describe('octaveScatter', () => {
     )
     expect(seen.size).toBe(countOctaveScatters(options))
     expect(seen).toEqual(new Set(allPlacements(options).map((pitches) => pitches.join(' '))))
+  })
+
+  it('each-moved: no note is a plain step up from the one before; moved marks it (issue 13)', () => {
+    const options = {
+      low: 28,
+      high: 67,
+      tonic: 'A',
+      scale: 'minor',
+      placement: 'each-moved' as const,
+    }
+    for (let seed = 0; seed < 200; seed += 1) {
+      const { pitches, moved } = octaveScatter({ ...options, seed })
+      expect(moved).toEqual(pitches.map((_, i) => i > 0))
+      pitches.slice(1).forEach((pitch, i) => {
+        const rise = pitch - (pitches[i] ?? 0) // arithmetic: a plain step up rises 1–12 semitones
+        expect(rise <= 0 || rise > 12).toBe(true)
+        expect(Math.abs(rise)).toBeLessThanOrEqual(24)
+      })
+    }
+    expect(() => countOctaveScatters({ ...options, placement: 'every' as never })).toThrow(
+      /not a placement/,
+    )
   })
 
   it('differs between seeds', () => {

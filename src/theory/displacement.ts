@@ -6,6 +6,18 @@ import { resolveScale, spellScaleTone, type ScaleInfo } from './scale'
 import type { PitchWindow } from './types'
 
 /**
+ * How freely notes are placed: `any` octave, or `each-moved` — every note in another octave than a
+ * plain step up from the note before would give (D3 then E4 or E2, never E3).
+ *
+ * @example
+ * const placement: ScatterPlacement = 'each-moved'
+ */
+export type ScatterPlacement = 'any' | 'each-moved'
+
+/** Default largest leap between neighbouring notes: two octaves. @example DEFAULT_MAX_LEAP // 24 */
+export const DEFAULT_MAX_LEAP = 24
+
+/**
  * Options of an Octave Scatter: range, key, and how scattered the notes must be.
  *
  * @example
@@ -16,15 +28,17 @@ export interface ScatterOptions extends PitchWindow {
   scale: string
   /** Fewest notes away from where a plain ascending scale from the first note would put them. */
   minDisplaced?: number
-  /** Largest leap between neighbouring notes, in semitones. */
+  /** Largest leap between neighbouring notes, in semitones (default 24, two octaves). */
   maxLeap?: number
+  /** `each-moved`: no note a plain step up from the note before (default `any`). */
+  placement?: ScatterPlacement
 }
 
 /**
  * A generated Octave Scatter: root to root, each note in one of its octaves.
  *
  * @example
- * octaveScatter({ low: 28, high: 67, tonic: 'A', scale: 'minor', seed: 1 }).names // ['A2', ...]
+ * octaveScatter({ low: 28, high: 67, tonic: 'A', scale: 'minor', seed: 1 }).names.length // 8
  */
 export interface Scatter {
   tonic: string
@@ -32,6 +46,8 @@ export interface Scatter {
   pitches: number[]
   names: string[]
   displaced: boolean[]
+  /** Per note, true when it is not a plain step up from the note before (false for the first). */
+  moved: boolean[]
 }
 
 /**
@@ -71,6 +87,20 @@ interface ScatterPlan {
   choices: number[][]
   minDisplaced: number
   maxLeap: number
+  eachMoved: boolean
+}
+
+// The nearest pitch above `previous` with the pitch class of `pitch`: a plain step up.
+const plainStepUp = (previous: number, pitch: number) =>
+  previous + ((pitch - previous + 1200) % 12 || 12)
+
+/**
+ * Whether a next note may follow the previous one: within the leap limit and, when every note must
+ * move, not a plain step up from it.
+ */
+function allowedStep(plan: ScatterPlan, previous: number, next: number): boolean {
+  if (Math.abs(next - previous) > plan.maxLeap) return false
+  return !plan.eachMoved || next !== plainStepUp(previous, next)
 }
 
 function planScatter(options: ScatterOptions): ScatterPlan {
@@ -78,17 +108,21 @@ function planScatter(options: ScatterOptions): ScatterPlan {
   const info = resolveScale(options.tonic, options.scale)
   const steps = [...info.steps, 12]
   const minDisplaced = options.minDisplaced ?? 0
-  const maxLeap = options.maxLeap ?? MIDI_MAX
+  const maxLeap = options.maxLeap ?? DEFAULT_MAX_LEAP
   assertWhole(minDisplaced, 'Fewest displaced notes', 0, steps.length - 1)
   assertWhole(maxLeap, 'Largest leap', 1, MIDI_MAX)
+  const placement = options.placement ?? 'any'
+  if (placement !== 'any' && placement !== 'each-moved') {
+    throw new RangeError(`"${String(placement)}" is not a placement; use any or each-moved.`)
+  }
   const root = pitchClassOf(info.tonic)
   const choices = steps.map((step) => octaveChoices(root + step, options.low, options.high))
-  return { info, steps, choices, minDisplaced, maxLeap }
+  return { info, steps, choices, minDisplaced, maxLeap, eachMoved: placement === 'each-moved' }
 }
 
 // ways[i][j][d]: placements of notes after i, with note i at choices[i][j] and d displaced so far.
 function completions(plan: ScatterPlan, first: number): number[][][] {
-  const { steps, choices, minDisplaced, maxLeap } = plan
+  const { steps, choices, minDisplaced } = plan
   const last = choices.length - 1
   const ways: number[][][] = []
   ways[last] = (choices[last] ?? []).map(() =>
@@ -100,7 +134,7 @@ function completions(plan: ScatterPlan, first: number): number[][][] {
     ways[i] = (choices[i] ?? []).map((pitch) =>
       Array.from({ length: minDisplaced + 1 }, (_, d) =>
         next.reduce((sum, candidate, k) => {
-          if (Math.abs(candidate - pitch) > maxLeap) return sum
+          if (!allowedStep(plan, pitch, candidate)) return sum
           const moved = Math.min(minDisplaced, d + (candidate === home ? 0 : 1))
           return sum + (ways[i + 1]?.[k]?.[moved] ?? 0)
         }, 0),
@@ -112,7 +146,8 @@ function completions(plan: ScatterPlan, first: number): number[][][] {
 
 /**
  * Counts every valid Octave Scatter placement: each note of the root-to-root scale at one of its
- * octaves in [low, high], with at least `minDisplaced` displaced notes and no leap above `maxLeap`.
+ * octaves in [low, high], with at least `minDisplaced` displaced notes, no leap above `maxLeap`
+ * (default 24) and, with `placement: 'each-moved'`, no plain step up from the note before.
  *
  * @example
  * countOctaveScatters({ low: 36, high: 59, tonic: 'C', scale: 'major' }) // 2 ** 8 (two octaves for each of 8 notes)
@@ -147,7 +182,7 @@ function explainEmpty(plan: ScatterPlan, options: ScatterOptions): never {
     )
   }
   throw new RangeError(
-    `No placement in ${range} meets these options; allow larger leaps or fewer displaced notes.`,
+    `No placement in ${range} meets these options; allow larger leaps, fewer displaced notes or a wider range.`,
   )
 }
 
@@ -161,7 +196,7 @@ function nextWeights(
   displaced: number,
 ): number[] {
   return (plan.choices[i] ?? []).map((pitch, k) => {
-    if (Math.abs(pitch - previous) > plan.maxLeap) return 0
+    if (!allowedStep(plan, previous, pitch)) return 0
     const moved = Math.min(plan.minDisplaced, displaced + (pitch === home ? 0 : 1))
     return ways[i]?.[k]?.[moved] ?? 0
   })
@@ -189,13 +224,15 @@ function drawPlacement(
  * Generates an Octave Scatter: the scale from root to root with each note in a random octave of
  * the range, drawn uniformly from every placement that meets the options, reproducibly from `seed`.
  * A note counts as displaced when it is not where a plain ascending scale from the first note would
- * put it. Throws a RangeError when no placement exists.
+ * put it, as moved when it is not a plain step up from the note before. Leaps are at most two
+ * octaves unless `maxLeap` says otherwise. Throws a RangeError when no placement exists.
  *
  * @example
  * octaveScatter({ low: 28, high: 67, tonic: 'A', scale: 'minor', seed: 1, minDisplaced: 3 })
- * // { tonic: 'A', scale: 'minor', pitches: [45, 35, 48, 62, 64, 41, 55, 57],
- * //   names: ['A2', 'B1', 'C3', 'D4', 'E4', 'F2', 'G3', 'A3'],
- * //   displaced: [false, true, false, true, true, true, false, false] }
+ * // { tonic: 'A', scale: 'minor', pitches: [57, 35, 48, 62, 64, 41, 43, 57],
+ * //   names: ['A3', 'B1', 'C3', 'D4', 'E4', 'F2', 'G2', 'A3'],
+ * //   displaced: [false, true, true, false, false, true, true, true],
+ * //   moved: [false, true, true, true, false, true, false, true] }
  */
 export function octaveScatter(options: ScatterOptions & { seed: number }): Scatter {
   const plan = planScatter(options)
@@ -217,5 +254,6 @@ function describeScatter(plan: ScatterPlan, pitches: number[]): Scatter {
     pitches,
     names: pitches.map((pitch, i) => spellScaleTone(info, i, pitch)),
     displaced: pitches.map((pitch, i) => pitch !== first + (steps[i] ?? 0)),
+    moved: pitches.map((pitch, i) => i > 0 && pitch !== plainStepUp(pitches[i - 1] ?? 0, pitch)),
   }
 }

@@ -156,8 +156,9 @@ describe('fingeringsOf: properties (fast-check)', () => {
         )
         expect(countFingerings(options)).toBe(fingerings.length)
       }),
+      { numRuns: 60 },
     )
-  })
+  }, 30_000) // listing every fingering of long runs is heavy on a loaded machine
 
   it('finds as many as a brute force over every string choice (arithmetic)', () => {
     fc.assert(

@@ -1,13 +1,18 @@
 // Fingerings of a range run: every way to spread the run across strings, with the shifts each needs.
+import { countBoxFingerings, listBoxFingerings, planBox } from './fingering-box'
 import { assertPitch, assertWhole } from './guard'
+import type { HandMove, HandSystem } from './hand'
 import { assertValidTuning } from './tuning'
 import type { Position } from './types'
 
 /**
- * What to finger: the run (ascending MIDI pitches) on a tuning, and the limits of the hand.
+ * What to finger: the run (ascending MIDI pitches) on a tuning, and the limits of the hand. With
+ * a hand position (`lowFret` and `highFret`), every note stays inside it widened by one fret per
+ * allowed shift on either side, and the hand system gives the fingers; without one, the whole neck
+ * is used and shifts are counted with `handSpan`.
  *
  * @example
- * const options: FingeringOptions = { tuning: [28, 33, 38, 43], frets: 20, run: [31, 33, 35], handSpan: 4 }
+ * const options: FingeringOptions = { tuning: [28, 33, 38, 43], frets: 20, run: [33, 35, 36], lowFret: 5, highFret: 8, shifts: 1 }
  */
 export interface FingeringOptions {
   tuning: readonly number[]
@@ -15,20 +20,35 @@ export interface FingeringOptions {
   run: readonly number[]
   /** Most notes on one string (default 4). */
   maxPerString?: number
-  /** Frets the hand covers without shifting (default 4, one finger per fret). */
+  /** Without a hand position: frets the hand covers without shifting (default 4). */
   handSpan?: number
+  /** The hand position's lowest fret (the first finger's; fret 0 counts as position I). */
+  lowFret?: number
+  /** The hand position's highest fret. */
+  highFret?: number
+  /** Hand shifts allowed, 0–3 (default 1); each widens the position by a fret on either side. */
+  shifts?: number
+  /** One finger per fret over four frets (default), or fingers 1-2-4 over three frets. */
+  handSystem?: HandSystem
 }
 
 /**
  * One fingering: where each note is played, notes per string from the first string used, shifts.
+ * Inside a hand position it also holds stretches, the finger and move of each note (0 = open
+ * string) and the position (the first finger's fret, and as a Roman numeral).
  *
  * @example
- * const fingering: Fingering = { positions: [{ string: 0, fret: 3 }], pattern: '1', shifts: 0 }
+ * const fingering: Fingering = { positions: [{ string: 0, fret: 5 }], pattern: '1', shifts: 0, stretches: 0, fingers: [1], moves: ['hand'], position: 5, positionName: 'V' }
  */
 export interface Fingering {
   positions: Position[]
   pattern: string
   shifts: number
+  stretches?: number
+  fingers?: number[]
+  moves?: HandMove[]
+  position?: number
+  positionName?: string
 }
 
 interface FingeringPlan {
@@ -66,15 +86,23 @@ function countWays(fretOf: number[][], strings: number, maxPerString: number): n
   return ways
 }
 
-function planFingering(options: FingeringOptions): FingeringPlan {
-  const { tuning, frets, run, maxPerString = 4, handSpan = 4 } = options
+function fretsOf(options: FingeringOptions): number[][] {
+  const { tuning, frets, run, maxPerString = 4 } = options
   assertValidTuning(tuning, frets)
   assertRun(run)
   assertWhole(maxPerString, 'Notes per string', 1, 24)
-  assertWhole(handSpan, 'The hand span', 1, 12)
-  const fretOf = run.map((pitch) =>
+  return run.map((pitch) =>
     tuning.map((open) => (pitch - open >= 0 && pitch - open <= frets ? pitch - open : -1)),
   )
+}
+
+const inPosition = (options: FingeringOptions) =>
+  options.lowFret !== undefined || options.highFret !== undefined
+
+function planFingering(options: FingeringOptions): FingeringPlan {
+  const { tuning, maxPerString = 4, handSpan = 4 } = options
+  const fretOf = fretsOf(options)
+  assertWhole(handSpan, 'The hand span', 1, 12)
   return { fretOf, ways: countWays(fretOf, tuning.length, maxPerString), maxPerString, handSpan }
 }
 
@@ -86,6 +114,7 @@ function planFingering(options: FingeringOptions): FingeringPlan {
  * countFingerings({ tuning: [28, 33, 38, 43], frets: 20, run: [31, 33, 35, 36, 38, 40, 42, 43], maxPerString: 3 }) // 9
  */
 export function countFingerings(options: FingeringOptions): number {
+  if (inPosition(options)) return countBoxFingerings(planBox(options, fretsOf(options)))
   const { ways } = planFingering(options)
   return (ways[0] ?? []).reduce((sum, count) => sum + count, 0)
 }
@@ -126,25 +155,36 @@ function toFingering(strings: readonly number[], counts: number[], plan: Fingeri
   return { fingering: { positions, pattern: counts.join('-'), shifts }, counts }
 }
 
-// Fewest shifts, then the lower first string, then more notes on the lower strings.
+// Fewest shifts, fewest stretches, then the lower first string, then more notes on lower strings.
 function byFewestShifts(a: Found, b: Found): number {
   const shifts = a.fingering.shifts - b.fingering.shifts
+  const stretches = (a.fingering.stretches ?? 0) - (b.fingering.stretches ?? 0)
   const first = (a.fingering.positions[0]?.string ?? 0) - (b.fingering.positions[0]?.string ?? 0)
   const differ = a.counts.findIndex((count, index) => count !== b.counts[index])
-  return shifts || first || (differ === -1 ? 0 : (b.counts[differ] ?? 0) - (a.counts[differ] ?? 0))
+  const lower = differ === -1 ? 0 : (b.counts[differ] ?? 0) - (a.counts[differ] ?? 0)
+  return shifts || stretches || first || lower
 }
 
 /**
  * Every fingering of an ascending run: each note on a string where it is playable, strings never
  * going back, consecutive strings each carrying 1..maxPerString notes; with the per-string pattern
- * and the shift count (see `countShifts`). Sorted by fewest shifts, then lower first string, then
- * more notes on the lower strings, so the order is always the same.
+ * and the shift count. In a hand position (`lowFret`/`highFret`), notes stay inside the position
+ * widened by the allowed `shifts`, the hand starts with its first finger on `lowFret`, each note
+ * gets its finger (hand system) and its move (in the hand, a stretch one fret beyond it, or a
+ * shift), and fingerings needing more shifts than allowed are left out; otherwise shifts follow
+ * `countShifts`. Sorted by fewest shifts, fewest stretches, lower first string, then more notes on
+ * the lower strings, so the order is always the same.
  *
  * @example
  * fingeringsOf({ tuning: [28, 33, 38, 43], frets: 20, run: [31, 33, 35, 36, 38, 40, 42, 43], maxPerString: 3 })[0]
  * // { pattern: '2-3-3', shifts: 0, positions: [{ string: 0, fret: 3 }, { string: 0, fret: 5 }, { string: 1, fret: 2 }, ...] }
+ * fingeringsOf({ tuning: [28, 33, 38, 43], frets: 20, run: [33, 35, 36, 38], lowFret: 5, highFret: 8 })[0]?.fingers // [1, 3, 4, 1]
  */
 export function fingeringsOf(options: FingeringOptions): Fingering[] {
+  if (inPosition(options)) {
+    const found = listBoxFingerings(planBox(options, fretsOf(options)))
+    return found.sort(byFewestShifts).map((item) => item.fingering)
+  }
   const plan = planFingering(options)
   const total = plan.fretOf.length
   const found: Found[] = []

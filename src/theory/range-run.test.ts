@@ -71,7 +71,17 @@ describe('rangeRun', () => {
     expect(wider).toEqual(Array.from({ length: 48 - 28 + 1 }, (_, k) => 28 + k))
   })
 
-  it('is ascending, distinct, in the scale and playable in the region (checked cell by cell)', () => {
+  it('G major, frets 5–8: the complete run A1 to D3, F#2 and B2 included (PRODUCT.md "Range run")', () => {
+    // By string (open string + fret, arithmetic): E 33–36 → A1 B1 C2; A 38–41 → D2 E2; D 43–46 →
+    // G2 A2; G 48–51 → C3 D3. The box lacks F#2 (D fret 4 / A fret 9) and B2 (G fret 4 / D fret 9);
+    // the run is every G major note (G A B C D E F#, Gardner) from A1 to D3.
+    const run = rangeRun({ tuning: BASS, lowFret: 5, highFret: 8, tonic: 'G', scale: 'major' })
+    expect(run).toEqual(
+      ['A1', 'B1', 'C2', 'D2', 'E2', 'F#2', 'G2', 'A2', 'B2', 'C3', 'D3'].map(parsePitch),
+    )
+  })
+
+  it('holds every scale pitch between the lowest and highest scale note of the region (cell by cell)', () => {
     const options = {
       tuning: [40, 45, 50, 55, 59, 64],
       lowFret: 7,
@@ -84,9 +94,14 @@ describe('rangeRun', () => {
     const cells = options.tuning.flatMap((_, string) =>
       [7, 8, 9, 10].map((fret) => noteAt(options.tuning, string, fret)),
     )
+    const inRegion = cells.filter((pitch) => classes.includes(pitch % 12))
+    const [lowest, highest] = [Math.min(...inRegion), Math.max(...inRegion)]
     expect(run).toEqual(
-      [...new Set(cells.filter((pitch) => classes.includes(pitch % 12)))].sort((a, b) => a - b),
+      Array.from({ length: highest - lowest + 1 }, (_, k) => lowest + k).filter((pitch) =>
+        classes.includes(pitch % 12),
+      ),
     )
+    expect(run.length).toBeGreaterThan(new Set(inRegion).size) // the guitar box has holes too
   })
 
   it.each([

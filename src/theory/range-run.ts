@@ -30,24 +30,28 @@ export interface ScaleTone {
 }
 
 /**
- * Every distinct scale pitch playable inside the fret region [lowFret, highFret] on any string
- * (open strings count when lowFret is 0), ascending: the notes of a range run in that position.
+ * The notes of a range run in a hand position: the scale pitches playable inside the fret region
+ * [lowFret, highFret] on any string (open strings count when lowFret is 0) give the lowest and the
+ * highest note, and the run is every scale pitch from that lowest to that highest note, ascending —
+ * also those the box itself lacks (a 4-fret box in fourths cannot hold them all; the fingering
+ * then stretches or shifts for them). Empty when the region holds no scale note.
  *
  * @example
- * rangeRun({ tuning: [28, 33, 38, 43], lowFret: 2, highFret: 5, tonic: 'G', scale: 'major' })
- * // [30, 31, 33, 35, 36, 38, 40, 42, 43, 45, 47, 48]
+ * rangeRun({ tuning: [28, 33, 38, 43], lowFret: 5, highFret: 8, tonic: 'G', scale: 'major' })
+ * // [33, 35, 36, 38, 40, 42, 43, 45, 47, 48, 50] (A1 to D3, with F#2 and B2)
  */
 export function rangeRun(options: RangeRunOptions): number[] {
   const { tuning, lowFret, highFret } = options
   assertFretRegion(tuning, lowFret, highFret)
   const { pitchClasses } = resolveScale(options.tonic, options.scale)
-  const playable = new Set<number>()
-  for (const open of tuning) {
-    for (let pitch = open + lowFret; pitch <= open + highFret; pitch += 1) {
-      if (pitchClasses.includes(pitch % 12)) playable.add(pitch)
-    }
-  }
-  return [...playable].sort((a, b) => a - b)
+  const inScale = (pitch: number) => pitchClasses.includes(pitch % 12)
+  const playable = tuning.flatMap((open) =>
+    Array.from({ length: highFret - lowFret + 1 }, (_, k) => open + lowFret + k).filter(inScale),
+  )
+  if (playable.length === 0) return []
+  const lowest = Math.min(...playable)
+  const highest = Math.max(...playable)
+  return Array.from({ length: highest - lowest + 1 }, (_, k) => lowest + k).filter(inScale)
 }
 
 /**

@@ -1,14 +1,14 @@
 import { describe, expect, it } from 'vitest'
 import { Key, Note, Scale, ScaleType } from 'tonal'
 import {
-  SCALE_TYPES,
   scaleDegreeOf,
   scalePitchClasses,
   scalePitchNames,
   scaleTypeName,
   tonicName,
 } from './scale'
-import { COMMON_SCALES, MAJOR_KEY_TONICS, MINOR_KEY_TONICS, TONICS } from './scale-data'
+import { MAJOR_KEY_TONICS, MINOR_KEY_TONICS, TONICS } from './scale-data'
+import { isLetterPerDegree } from './scale-spelling'
 
 const letters = (names: string[]) => names.map((name) => name.charAt(0))
 const count = (names: string[], accidental: string) =>
@@ -81,9 +81,12 @@ describe('every scale type on every tonic', () => {
   const cases = TONICS.flatMap((tonic) =>
     ScaleType.all().map((type) => [tonic, type.name] as const),
   )
+  const respelled = (tonal: string, ours: string) =>
+    tonal.length - 1 > 2 || // tonal's triple accidental (A# whole tone's F###) gives way
+    /blues/.test(ours) // the blue note (see the blues tests below)
 
-  // tonal Scale.get (library): same notes, or — for the few 7-note scales where tonal repeats a
-  // letter — the same pitch classes spelled with each letter once (PRODUCT.md domain rule)
+  // tonal Scale.get (library): the same pitch classes always, and the same names except where
+  // the rules below (PRODUCT.md, issue 13) respell: chromatic by direction, blue notes, triples
   it(`matches tonal Scale.get for all ${cases.length} tonic/scale pairs`, () => {
     for (const [tonic, scale] of cases) {
       const expected = Scale.get([tonic, scale]).notes
@@ -91,49 +94,73 @@ describe('every scale type on every tonic', () => {
       expect(names.map((name) => Note.chroma(name))).toEqual(
         expected.map((name) => Note.chroma(name)),
       )
-      if (new Set(letters(expected)).size === expected.length || expected.length !== 7) {
-        expect(names, `${tonic} ${scale}`).toEqual(expected)
-      }
+      if (scale === 'chromatic') continue
+      names.forEach((name, degree) => {
+        const theirs = expected[degree] ?? ''
+        if (!respelled(theirs, scale)) expect(name, `${tonic} ${scale}`).toBe(theirs)
+      })
       expect(scalePitchClasses(tonic, scale)).toEqual(expected.map((name) => Note.chroma(name)))
     }
   })
 
-  it('spells every 7-note scale with each letter once, from the tonic’s letter (PRODUCT.md)', () => {
-    for (const [tonic, scale] of cases.filter(
-      ([, scale]) => ScaleType.get(scale).intervals.length === 7,
-    )) {
-      const expectedLetters = [...'CDEFGABCDEFGAB'.slice('CDEFGAB'.indexOf(tonic.charAt(0)))].slice(
-        0,
-        7,
-      )
+  // Gardner (handbook): diatonic scales use each letter once; issue 13: the harmonic and melodic
+  // minors too, and only those — other 7-note scales keep their interval spelling
+  it('spells the seven modes and the two minors with each letter once, from the tonic’s letter', () => {
+    const diatonic = cases.filter(([, scale]) => isLetterPerDegree(scale))
+    expect(new Set(diatonic.map(([, scale]) => scale)).size).toBe(9)
+    for (const [tonic, scale] of diatonic) {
+      const from = 'CDEFGAB'.indexOf(tonic.charAt(0))
+      const expectedLetters = [...'CDEFGABCDEFGAB'.slice(from, from + 7)]
       expect(letters(scalePitchNames(tonic, scale)), `${tonic} ${scale}`).toEqual(expectedLetters)
     }
   })
 
-  // theory texts: the altered scale is the 7th mode of melodic minor a semitone up; tonal spells
-  // Db melodic minor Db Eb Fb Gb Ab Bb C (library), so C altered = C Db Eb Fb Gb Ab Bb
-  it('C altered is Db melodic minor from its 7th degree (theory texts; tonal Scale.get)', () => {
-    const melodic = Scale.get('Db melodic minor').notes
-    expect(scalePitchNames('C', 'altered')).toEqual([...melodic.slice(6), ...melodic.slice(0, 6)])
+  // issue 13 (property over every tonic × every scale × both directions): no triple accidentals
+  it('never spells a name with more than two accidentals', () => {
+    for (const [tonic, scale] of cases) {
+      for (const direction of ['up', 'down'] as const) {
+        for (const name of scalePitchNames(tonic, scale, direction)) {
+          expect(name.length - 1, `${tonic} ${scale} ${direction}: ${name}`).toBeLessThanOrEqual(2)
+        }
+      }
+    }
+  })
+
+  // tonal Scale.get (library), interval spelling 1P 2m 3m 3M 4A 5P 7m: the fifth stays G (not A𝄫)
+  it('spells non-diatonic 7-note scales from their intervals: C flamenco, C altered', () => {
+    expect(scalePitchNames('C', 'flamenco')).toEqual(['C', 'Db', 'Eb', 'E', 'F#', 'G', 'Bb'])
+    // jazz usage: the altered scale as 1 b9 #9 3 #11 b13 b7 (tonal ScaleType "altered", library)
+    expect(scalePitchNames('C', 'altered')).toEqual(['C', 'Db', 'D#', 'E', 'F#', 'Ab', 'Bb'])
+  })
+
+  it('A# whole tone ends on G# rather than F### (issue 13; tonal Note.simplify, library)', () => {
+    expect(scalePitchNames('A#', 'whole tone')).toEqual(['A#', 'B#', 'C##', 'D##', 'E##', 'G#'])
+  })
+})
+
+describe('blues and chromatic spelling (common practice)', () => {
+  it.each([
+    ['C', 'minor blues', ['C', 'Eb', 'F', 'Gb', 'G', 'Bb']], // ♭5 (tonal agrees, library)
+    ['Eb', 'minor blues', ['Eb', 'Gb', 'Ab', 'A', 'Bb', 'Db']], // ♯4: B𝄫 would need a double flat
+    ['Ab', 'minor blues', ['Ab', 'Cb', 'Db', 'D', 'Eb', 'Gb']], // ♯4 for E𝄫
+    ['Bb', 'minor blues', ['Bb', 'Db', 'Eb', 'Fb', 'F', 'Ab']], // ♭5 takes one flat: kept
+    ['F#', 'minor blues', ['F#', 'A', 'B', 'C', 'C#', 'E']],
+    ['C', 'major blues', ['C', 'D', 'Eb', 'E', 'G', 'A']], // ♭3 (tonal, library)
+    ['Gb', 'major blues', ['Gb', 'Ab', 'A', 'Bb', 'Db', 'Eb']], // ♯2 for B𝄫
+  ])('%s %s → %j (the blue note takes one accidental)', (tonic, scale, names) => {
+    expect(scalePitchNames(tonic, scale)).toEqual(names)
+  })
+
+  it('chromatic: sharps going up, flats coming down, the tonic as named', () => {
+    expect(scalePitchNames('C', 'chromatic')).toEqual('C C# D D# E F F# G G# A A# B'.split(' '))
+    expect(scalePitchNames('C', 'chromatic', 'down')).toEqual(
+      'C Db D Eb E F Gb G Ab A Bb B'.split(' '),
+    )
+    expect(scalePitchNames('Eb', 'chromatic')[0]).toBe('Eb')
   })
 })
 
 describe('names and validation', () => {
-  it('lists every tonal scale type once, common ones first (tonal ScaleType.all, library)', () => {
-    expect(SCALE_TYPES.map((type) => type.name).sort()).toEqual(
-      ScaleType.all()
-        .map((type) => type.name)
-        .sort(),
-    )
-    expect(SCALE_TYPES.slice(0, COMMON_SCALES.length).map((type) => type.name)).toEqual(
-      COMMON_SCALES,
-    )
-    for (const type of SCALE_TYPES) {
-      expect(type.noteCount).toBe(ScaleType.get(type.name).intervals.length)
-      expect(type.label.length).toBeGreaterThan(0)
-    }
-  })
-
   it.each([
     ['Major', 'major'],
     ['ionian', 'major'], // tonal alias (library)

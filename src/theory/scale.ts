@@ -1,25 +1,9 @@
-// Scales on the 18 key tonics, spelled in the key (via tonal), with degrees and pitch classes.
-import { Scale, ScaleType } from 'tonal'
+// Scales on the 18 key tonics, spelled in the key (scale-spelling), with degrees and pitch classes.
+import { ScaleType } from 'tonal'
 import { assertPitch } from './guard'
 import { pitchClassOf, semitonesAboveC, toAscii } from './pitch'
-import { COMMON_SCALES, SCALE_LABELS, TONICS } from './scale-data'
-
-const LETTERS = 'CDEFGAB'
-const NATURAL_CHROMA = [0, 2, 4, 5, 7, 9, 11]
-
-/**
- * A scale type the app supports: tonal's name, a label for pickers and its size.
- *
- * @example
- * SCALE_TYPES.find((type) => type.name === 'dorian')?.label // 'Dorian'
- */
-export interface ScaleTypeInfo {
-  name: string
-  label: string
-  noteCount: number
-  common: boolean
-  aliases: string[]
-}
+import { TONICS } from './scale-data'
+import { spellScale, type ScaleDirection } from './scale-spelling'
 
 /**
  * A scale on a tonic: spelled pitch-class names, pitch classes, semitones above the tonic.
@@ -36,32 +20,6 @@ export interface ScaleInfo {
   /** Per degree, semitones above the C of the letter's octave ("Cb" −1, "B#" 12), for octaves. */
   fromC: readonly number[]
 }
-
-function labelOf(name: string): string {
-  return SCALE_LABELS[name] ?? `${name.charAt(0).toUpperCase()}${name.slice(1)}`
-}
-
-function byTeachingOrder(a: string, b: string): number {
-  const rank = (name: string) => COMMON_SCALES.indexOf(name) + 1 || COMMON_SCALES.length + 1
-  return rank(a) - rank(b)
-}
-
-/**
- * Every scale type the app supports (all of tonal's), common ones first in teaching order, each
- * with a label for pickers, its note count and the other names tonal accepts for it.
- *
- * @example
- * SCALE_TYPES[0] // { name: 'major', label: 'Major (Ionian)', noteCount: 7, common: true, aliases: ['ionian'] }
- */
-export const SCALE_TYPES: readonly ScaleTypeInfo[] = ScaleType.all()
-  .map((type) => ({
-    name: type.name,
-    label: labelOf(type.name),
-    noteCount: type.intervals.length,
-    common: COMMON_SCALES.includes(type.name),
-    aliases: [...type.aliases],
-  }))
-  .sort((a, b) => byTeachingOrder(a.name, b.name))
 
 /**
  * Checks a tonic and returns it in canonical ASCII form (letter upper case, ♯/♭ accepted). Only the
@@ -97,22 +55,9 @@ export function scaleTypeName(scale: string): string {
   return type.name
 }
 
-// Seven-note scales use each letter once (degree n takes the n-th letter from the tonic's).
-function spellByLetters(tonic: string, pitchClasses: readonly number[]): string[] {
-  const first = LETTERS.indexOf(tonic.charAt(0))
-  return pitchClasses.map((pitchClass, degree) => {
-    const step = (first + degree) % 7
-    const alteration = ((pitchClass - (NATURAL_CHROMA[step] ?? 0) + 18) % 12) - 6
-    return `${LETTERS.charAt(step)}${(alteration > 0 ? '#' : 'b').repeat(Math.abs(alteration))}`
-  })
-}
-
-function buildScale(tonic: string, scale: string): ScaleInfo {
-  const tonalNames = Scale.get([tonic, scale]).notes
-  const pitchClasses = tonalNames.map(pitchClassOf)
-  const letters = new Set(tonalNames.map((name) => name.charAt(0)))
-  const names =
-    tonalNames.length === 7 && letters.size < 7 ? spellByLetters(tonic, pitchClasses) : tonalNames
+function buildScale(tonic: string, scale: string, direction: ScaleDirection): ScaleInfo {
+  const names = spellScale(tonic, scale, direction)
+  const pitchClasses = names.map(pitchClassOf)
   const root = pitchClasses[0] ?? 0
   const steps = pitchClasses.map((pitchClass) => (pitchClass - root + 12) % 12)
   return { tonic, scale, names, pitchClasses, steps, fromC: names.map(semitonesAboveC) }
@@ -122,32 +67,45 @@ const SCALE_CACHE = new Map<string, ScaleInfo>()
 
 /**
  * Resolves a scale on a tonic once (validated, spelled, with pitch classes and semitone steps above
- * the tonic) and remembers it, so drills can ask again cheaply. Throws a RangeError for an unknown
- * tonic or scale.
+ * the tonic) and remembers it, so drills can ask again cheaply. The direction only changes the
+ * chromatic scale's spelling (sharps up, flats down). Throws a RangeError for an unknown tonic or
+ * scale.
  *
  * @example
  * resolveScale('Eb', 'minor').steps // [0, 2, 3, 5, 7, 8, 10]
+ * resolveScale('C', 'chromatic', 'down').names[1] // 'Db'
  */
-export function resolveScale(tonic: string, scale: string): ScaleInfo {
+export function resolveScale(
+  tonic: string,
+  scale: string,
+  direction: ScaleDirection = 'up',
+): ScaleInfo {
   const name = tonicName(tonic)
   const type = scaleTypeName(scale)
-  const key = `${name} ${type}`
+  const key = `${name} ${type} ${type === 'chromatic' ? direction : 'up'}`
   const known = SCALE_CACHE.get(key)
   if (known) return known
-  const built = buildScale(name, type)
+  const built = buildScale(name, type, direction)
   SCALE_CACHE.set(key, built)
   return built
 }
 
 /**
- * Spells a scale on one of the 18 key tonics as tonal does, ascending from the tonic, with each
- * letter used once in seven-note scales.
+ * Spells a scale on one of the 18 key tonics, ascending from the tonic: the diatonic modes and the
+ * harmonic and melodic minors one letter per degree, other scales from their intervals (as tonal
+ * does), the blue note with one accidental, never more than two accidentals on a name. The
+ * chromatic scale takes sharps going up, flats coming down (`direction`, default up).
  *
  * @example
  * scalePitchNames('Eb', 'minor') // ['Eb', 'F', 'Gb', 'Ab', 'Bb', 'Cb', 'Db']
+ * scalePitchNames('C', 'chromatic', 'down') // ['C', 'Db', 'D', 'Eb', 'E', 'F', 'Gb', 'G', 'Ab', 'A', 'Bb', 'B']
  */
-export function scalePitchNames(tonic: string, scale: string): string[] {
-  return [...resolveScale(tonic, scale).names]
+export function scalePitchNames(
+  tonic: string,
+  scale: string,
+  direction: ScaleDirection = 'up',
+): string[] {
+  return [...resolveScale(tonic, scale, direction).names]
 }
 
 /**

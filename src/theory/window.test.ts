@@ -56,6 +56,10 @@ describe('keyCycleInWindow: the worked example C2–C3 in fourths, major', () =>
         pitches: names.map(parsePitch),
         names,
         displaced: names.map((_, note) => note === fold),
+        // the closing root is the octave only an octave from the start: here C2 → C3 alone; the
+        // others end on their starting pitch after a fold (issue 13)
+        octave: names.map((_, note) => note === 7 && tonic === 'C'),
+        direction: 'up',
       })
     },
   )

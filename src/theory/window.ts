@@ -1,25 +1,41 @@
 // Window cycles: every key of a cycle played root to root inside a low/high pitch window.
-import { assertWindow, octaveChoices } from './displacement'
+import { assertWindow } from './displacement'
 import { assertFretRegion } from './fretboard'
 import { assertWhole, MIDI_MAX } from './guard'
-import { pitchName } from './pitch'
-import { resolveScale, spellScaleTone, type ScaleInfo } from './scale'
+import { pitchClassOf, pitchName } from './pitch'
+import { resolveScale } from './scale'
+import type { ScaleDirection } from './scale-spelling'
 import { customCycle } from './cycle'
 import type { PitchWindow } from './types'
+import { playKeys } from './window-play'
 
 /**
- * What a window cycle needs: the window, the keys in order and the scale played in each.
+ * Which way the keys of a window cycle are played: all up, all down (root, 7th, 6th … root), or
+ * alternating up, down, up … starting up.
  *
  * @example
- * const options: WindowCycleOptions = { low: 36, high: 48, tonics: ['C', 'F'], scale: 'major' }
+ * const direction: CycleDirection = 'alternate'
+ */
+export type CycleDirection = 'up' | 'down' | 'alternate'
+
+/**
+ * What a window cycle needs: the window, the keys in order, the scale played in each, the
+ * direction (default `up`) and the key to begin on (default the first of `tonics`).
+ *
+ * @example
+ * const options: WindowCycleOptions = { low: 36, high: 48, tonics: ['C', 'F'], scale: 'major', direction: 'alternate' }
  */
 export interface WindowCycleOptions extends PitchWindow {
   tonics: readonly string[]
   scale: string
+  direction?: CycleDirection
+  startTonic?: string
 }
 
 /**
- * One key of a window cycle as played: pitches, spelled names, and which notes were folded down.
+ * One key of a window cycle as played: pitches, spelled names, which notes were folded back into
+ * the window, which note is the octave (the closing root an octave from the first; after a fold it
+ * often lands on the starting pitch itself, and is then not the octave), and the way it went.
  *
  * @example
  * keyCycleInWindow({ low: 36, high: 48, tonics: ['C'], scale: 'major' })[0]?.names // ['C2', ..., 'C3']
@@ -29,6 +45,8 @@ export interface WindowKey {
   pitches: number[]
   names: string[]
   displaced: boolean[]
+  octave: boolean[]
+  direction: ScaleDirection
 }
 
 /**
@@ -53,49 +71,14 @@ export function missingPitchClasses(options: WindowCycleOptions): string[] {
   return [...spellings.entries()].sort(([a], [b]) => a - b).map(([, names]) => [...names].join('/'))
 }
 
-function startingRoot(
-  info: ScaleInfo,
-  window: PitchWindow,
-  lastPlayed: number | undefined,
-): number {
-  const roots = octaveChoices(info.pitchClasses[0] ?? 0, window.low, window.high)
-  const lowest = roots[0] ?? window.low
-  if (lastPlayed === undefined) return lowest
-  // reduce keeps the earlier (lower) root on a tie
-  return roots.reduce(
-    (best, root) => (Math.abs(root - lastPlayed) < Math.abs(best - lastPlayed) ? root : best),
-    lowest,
-  )
-}
-
-function playKey(info: ScaleInfo, window: PitchWindow, lastPlayed: number | undefined): WindowKey {
-  const size = info.pitchClasses.length
-  const pitches = [startingRoot(info, window, lastPlayed)]
-  const displaced = [false]
-  for (let degree = 1; degree <= size; degree += 1) {
-    const previous = pitches[degree - 1] ?? window.low
-    const pitchClass = info.pitchClasses[degree % size] ?? 0
-    let pitch = previous + ((pitchClass - (previous % 12) + 12) % 12 || 12)
-    displaced.push(pitch > window.high)
-    while (pitch > window.high) pitch -= 12
-    pitches.push(pitch)
-  }
-  const names = pitches.map((pitch, index) => spellScaleTone(info, index, pitch))
-  return { tonic: info.tonic, pitches, names, displaced }
-}
-
 /**
- * Plays every key of a cycle from its root up to the root an octave above inside the window [low,
- * high]: the first key starts on the lowest root in the window, each later key on the root nearest
- * the last note played (the lower on a tie); each next note is the nearest pitch above the previous
- * one with the next degree's pitch class, folded down by octaves (and marked displaced) when above
- * the window. Throws a RangeError naming the missing notes when the window lacks any of them.
+ * Throws a RangeError unless the window holds every pitch class the keys' scales use (naming the
+ * missing ones) and the direction is known.
  *
  * @example
- * keyCycleInWindow({ low: 36, high: 48, tonics: ['F'], scale: 'major' })
- * // [{ tonic: 'F', pitches: [41, 43, 45, 46, 48, 38, 40, 41], names: ['F2', 'G2', 'A2', 'Bb2', 'C3', 'D2', 'E2', 'F2'], displaced: [false, false, false, false, false, true, false, false] }]
+ * assertCycleWindow({ low: 36, high: 48, tonics: ['C'], scale: 'major' }) // passes
  */
-export function keyCycleInWindow(options: WindowCycleOptions): WindowKey[] {
+export function assertCycleWindow(options: WindowCycleOptions): void {
   const missing = missingPitchClasses(options)
   if (missing.length > 0) {
     const named = `${pitchName(options.low)}–${pitchName(options.high)}`
@@ -103,11 +86,62 @@ export function keyCycleInWindow(options: WindowCycleOptions): WindowKey[] {
       `The window ${named} is missing ${missing.join(', ')}; widen it to play every key.`,
     )
   }
-  const keys: WindowKey[] = []
-  for (const tonic of options.tonics) {
-    keys.push(playKey(resolveScale(tonic, options.scale), options, keys.at(-1)?.pitches.at(-1)))
+  const direction = options.direction ?? 'up'
+  if (!['up', 'down', 'alternate'].includes(direction)) {
+    throw new RangeError(`"${String(direction)}" is not a direction; use up, down or alternate.`)
   }
-  return keys
+}
+
+/**
+ * The index in `tonics` of the start key (matched by pitch class, so Db finds C#), 0 without one;
+ * a start key not in the cycle throws a RangeError.
+ *
+ * @example
+ * startIndexOf({ tonics: ['C', 'F', 'Bb'], startTonic: 'A#' }) // 2
+ */
+export function startIndexOf(options: Pick<WindowCycleOptions, 'tonics' | 'startTonic'>): number {
+  if (options.startTonic === undefined) return 0
+  const wanted = pitchClassOf(options.startTonic)
+  const index = options.tonics.findIndex((tonic) => pitchClassOf(tonic) === wanted)
+  if (index === -1) {
+    throw new RangeError(
+      `The start key ${options.startTonic} is not in the cycle (${options.tonics.join(' ')}).`,
+    )
+  }
+  return index
+}
+
+/**
+ * The direction of a cycle's first key: down for `down`, else up.
+ *
+ * @example
+ * firstDirection('alternate') // 'up'
+ */
+export function firstDirection(direction: CycleDirection = 'up'): ScaleDirection {
+  return direction === 'down' ? 'down' : 'up'
+}
+
+/**
+ * Plays every key of a cycle root to root inside the window [low, high] (PRODUCT.md "Window
+ * cycle"). Up: the first key starts on the lowest root in the window, each next note is the nearest
+ * pitch above with the next degree's pitch class, folded down by octaves (marked displaced) when
+ * above the window. Down is the mirror image (highest root; nearest below; folded up). Alternate
+ * plays up, down, up …; every later key starts on the root nearest the last note played (a tie
+ * goes to the lower root going up, the higher going down). A folded closing root is not the
+ * octave unless it lies an octave from the first root. The cycle begins at `startTonic` when given. Throws a RangeError naming the missing
+ * notes when the window lacks any of them.
+ *
+ * @example
+ * keyCycleInWindow({ low: 36, high: 48, tonics: ['F'], scale: 'major' })
+ * // [{ tonic: 'F', pitches: [41, 43, 45, 46, 48, 38, 40, 41], names: ['F2', 'G2', 'A2', 'Bb2', 'C3', 'D2', 'E2', 'F2'], displaced: [false, false, false, false, false, true, false, false], octave: [false, …, false] (F2 again, not F3), direction: 'up' }]
+ * keyCycleInWindow({ low: 28, high: 47, tonics: ['C', 'F'], scale: 'major', direction: 'alternate' })[1]?.names
+ * // ['F2', 'E2', 'D2', 'C2', 'Bb1', 'A1', 'G1', 'F1']
+ */
+export function keyCycleInWindow(options: WindowCycleOptions): WindowKey[] {
+  assertCycleWindow(options)
+  const start = startIndexOf(options)
+  const tonics = [...options.tonics.slice(start), ...options.tonics.slice(0, start)]
+  return playKeys({ ...options, tonics }, firstDirection(options.direction))
 }
 
 /**
