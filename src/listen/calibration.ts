@@ -1,6 +1,8 @@
 // Calibration arithmetic (pure): the noise gate from a quiet room, and the output→input latency
 // from clicks played against the onsets heard back (through the speakers, or tapped along).
 
+/** The noise gate (dBFS, peak) before a quiet room has been measured. */
+export const DEFAULT_GATE_DB = -60
 /** Seconds of quiet room the noise gate is measured from. */
 export const QUIET_ROOM_S = 2
 /** The gate sits this far above the loudest noise heard. */

@@ -1,6 +1,7 @@
 // The streaming detector: samples in (any chunk size), events out — note verdicts, onsets, input
 // level and tuner readings. One code path for the AudioWorklet, transcribe() and the benchmark.
 import { pitchName } from '../theory/pitch'
+import { DEFAULT_GATE_DB } from './calibration'
 import { createFrameAnalyser, type FrameAnalyser } from './frame-analysis'
 import { createOnsetTracker, ONSET_BLOCK } from './onset-tracker'
 import {
@@ -50,7 +51,6 @@ export interface NoteDetector {
   setGate(gateDb: number): void
 }
 
-export const DEFAULT_GATE_DB = -60
 const LEVEL_EVERY_MS = 50
 const toDb = (amplitude: number) => (amplitude > 0 ? 20 * Math.log10(amplitude) : -120)
 export const fromDb = (db: number) => 10 ** (db / 20)

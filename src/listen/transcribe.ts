@@ -1,6 +1,7 @@
 // transcribe(): the notes in a recording, through the same streaming detector the browser runs,
 // with the noise gate estimated from the recording's quietest stretches.
-import { createNoteDetector, DEFAULT_GATE_DB } from './note-detector'
+import { DEFAULT_GATE_DB } from './calibration'
+import { createNoteDetector } from './note-detector'
 import { ONSET_BLOCK } from './onset-tracker'
 import type { PitchLike } from './pitch-range'
 

@@ -74,6 +74,12 @@ export const routes: RouteRecordRaw[] = [
     meta: { roles: [...ANY_USER], title: 'Window Cycle' },
   },
   {
+    path: '/tuner',
+    name: 'tuner',
+    component: () => import('../views/TunerView.vue'),
+    meta: { roles: [...ANY_USER], title: 'Tuner' },
+  },
+  {
     path: '/progress',
     name: 'progress',
     component: () => import('../views/ProgressView.vue'),
