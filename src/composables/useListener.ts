@@ -75,6 +75,19 @@ export function useListener(range: MaybeRefOrGetter<ListenerRange | null>) {
     devices.value = await input.devices().catch(() => [])
   }
 
+  // An input remembered from an earlier visit may be gone (unplugged): then the default one.
+  async function openInput(wanted: ListenerRange): Promise<ListenSession> {
+    const options = { ...wanted, gateDb: gateDb.value }
+    try {
+      return await input.open({ ...options, deviceId: deviceId.value })
+    } catch (e) {
+      if (!(e instanceof ListenError && e.code === 'no-device' && deviceId.value)) throw e
+      deviceId.value = null
+      saveListenSettings({ deviceId: null })
+      return input.open({ ...options, deviceId: null })
+    }
+  }
+
   async function start() {
     const wanted = toValue(range)
     if (status.value !== 'idle' || !wanted) return
@@ -86,7 +99,7 @@ export function useListener(range: MaybeRefOrGetter<ListenerRange | null>) {
     status.value = 'starting'
     error.value = ''
     try {
-      const opened = await input.open({ ...wanted, gateDb: gateDb.value, deviceId: deviceId.value })
+      const opened = await openInput(wanted)
       opened.subscribe(onEvent)
       session.value = opened
       deviceLabel.value = opened.deviceLabel

@@ -178,6 +178,15 @@ describe('useListener', () => {
     expect(saved().deviceId).toBe('mic-2')
   })
 
+  it('falls back to the default input when the remembered one is gone, and forgets it', async () => {
+    localStorage.setItem('ambitus.listen.v1', JSON.stringify({ deviceId: 'unplugged' }))
+    const { listener } = withListener()
+    await listener.start()
+    expect(fake.opened.map((o) => o.deviceId)).toEqual(['unplugged', null])
+    expect(listener.status.value).toBe('listening')
+    expect(saved().deviceId).toBeNull()
+  })
+
   it('follows a change of range, and lets the microphone go when the page closes', async () => {
     const { listener, range, wrapper } = withListener()
     await listener.start()

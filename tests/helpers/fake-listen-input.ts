@@ -53,6 +53,8 @@ export function fakeListenInput(
     devices: async () => devices,
     async open(options) {
       opened.push(options)
+      if (options.deviceId && !devices.some((d) => d.deviceId === options.deviceId))
+        throw new ListenError('no-device', 'That input is gone.')
       if (failure) throw failure
       return session(options.deviceId ?? devices[0]?.deviceId ?? 'default')
     },
