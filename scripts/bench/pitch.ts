@@ -57,33 +57,51 @@ function baseline(take: Take) {
   }
 }
 
-async function main() {
-  const scores = { live: createScore(), transcribe: createScore(), baseline: createScore() }
-  let takes = 0
-  let same = 0
-  const started = performance.now()
-  const all = async function* () {
+function allTakes() {
+  return (async function* () {
     yield* singleNotes()
     yield* sequences()
     yield* noiseOnly()
+  })()
+}
+
+async function main() {
+  const scores = { live: createScore(), transcribe: createScore(), baseline: createScore() }
+  const cpu = { live: 0, baseline: 0, audioS: 0 }
+  const timed = <T>(key: 'live' | 'baseline', work: () => T): T => {
+    const start = performance.now()
+    const result = work()
+    cpu[key] += performance.now() - start
+    return result
   }
-  for await (const take of all()) {
+  let takes = 0
+  let same = 0
+  const started = performance.now()
+  for await (const take of allTakes()) {
     const gateDb = calibratedGate(take)
-    const live = listenLive(take, gateDb)
+    const live = timed('live', () => listenLive(take, gateDb))
     const offline = transcribe(take.samples, take.sampleRate, take.instrument)
     scores.live.add(take, live)
     scores.transcribe.add(
       take,
       offline.map((n) => ({ ...n, verdictMs: NaN })),
     )
-    scores.baseline.add(take, listenLive(take, gateDb, baseline(take)))
+    scores.baseline.add(
+      take,
+      timed('baseline', () => listenLive(take, gateDb, baseline(take))),
+    )
+    cpu.audioS += take.samples.length / take.sampleRate
     takes += 1
     if (offline.map((n) => n.pitch).join() === live.map((n) => n.pitch).join()) same += 1
   }
   const seconds = ((performance.now() - started) / 1000).toFixed(0)
+  const perSecond = (ms: number) => (ms / cpu.audioS).toFixed(1)
   printScores(scores as Record<string, Score>)
   console.log(
-    `\n${takes} takes in ${seconds} s; transcribe() heard the same pitches as the live path in ${same} of them`,
+    `\n${takes} takes (${cpu.audioS.toFixed(0)} s of audio) in ${seconds} s; transcribe() heard the same pitches as the live path in ${same} of them`,
+  )
+  console.log(
+    `CPU per second of audio: live path ${perSecond(cpu.live)} ms, baseline ${perSecond(cpu.baseline)} ms (wall clock on this machine, under its load)`,
   )
   console.log(scores.live.summaryLine())
 }

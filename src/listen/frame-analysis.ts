@@ -17,8 +17,12 @@ export interface FrameAnalyserOptions {
   minClarity?: number
 }
 
-/** Analyses a frame (its length is the window: the samples since the onset, up to the longest). */
-export type FrameAnalyser = (frame: Float32Array) => FrameReading | null
+/**
+ * Analyses a frame (its length is the window: the samples since the onset, up to the longest).
+ * `sounding` is the frequency of a note already heard: a reading that stays with it needs no octave
+ * checks again (they were made for the verdict), which halves the work while a note rings.
+ */
+export type FrameAnalyser = (frame: Float32Array, sounding?: number) => FrameReading | null
 
 export const MIN_CLARITY = 0.8
 /** MPM's peak-picking constant k: the first key maximum at least k × the highest one. */
@@ -30,6 +34,8 @@ const MIN_PERIODS = 2
  * holds a weak sub-octave that MPM locks onto (a true low note has odd partials and stays below).
  */
 const OCTAVE_UP = 0.6
+/** A reading this close (ratio) to the sounding note's frequency stays with it: a quarter tone. */
+const SAME_NOTE = 2 ** (0.5 / 12)
 /** The lag m·T is compared over at least this many periods of overlap. */
 const CHECK_OVERLAP = 1
 /**
@@ -114,9 +120,11 @@ export function createFrameAnalyser(options: FrameAnalyserOptions): FrameAnalyse
     return reading
   }
 
-  return (frame) => {
+  return (frame, sounding) => {
     const [frequency, clarity] = mpm(frame)
     if (!(frequency > 0) || !Number.isFinite(frequency)) return null
+    if (sounding && frequency < sounding * SAME_NOTE && frequency > sounding / SAME_NOTE)
+      return clarity >= minClarity ? { frequency, clarity } : null
     let reading: FrameReading | null | undefined = { frequency, clarity }
     if (frequency < lowHz) reading = secondHarmonic(frame, frequency)
     if (!reading || reading.frequency > highHz) return null

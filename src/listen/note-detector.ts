@@ -81,11 +81,14 @@ export function createNoteDetector(options: NoteDetectorOptions): NoteDetector {
   let squares = 0
   let levelPeak = 0
 
+  // The last `length` samples, copied out of the ring in at most two pieces.
   function frameOf(length: number): Float32Array {
     let frame = frames.get(length)
     if (!frame) frames.set(length, (frame = new Float32Array(length)))
-    for (let i = 0; i < length; i += 1)
-      frame[i] = ring[(written - length + i + ring.length) % ring.length] ?? 0
+    const from = (written - length + ring.length) % ring.length
+    const first = Math.min(length, ring.length - from)
+    frame.set(ring.subarray(from, from + first))
+    if (first < length) frame.set(ring.subarray(0, length - first), first)
     return frame
   }
 
@@ -93,7 +96,7 @@ export function createNoteDetector(options: NoteDetectorOptions): NoteDetector {
     if (segmentStart === null) return
     const length = notes.frameLength(Math.floor((written - segmentStart) / hop) * hop)
     if (length < 2 * hop) return
-    const reading = analyse(frameOf(length))
+    const reading = analyse(frameOf(length), notes.soundingHz())
     const time = ms(written)
     if (reading) {
       const pitch = 69 + 12 * Math.log2(reading.frequency / range.referenceHz)

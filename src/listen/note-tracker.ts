@@ -134,6 +134,9 @@ export function createNoteTracker(options: {
       sounding = null
       run = null
     },
+    /** The frequency of the note sounding now (heard and followed), if any. */
+    soundingHz: () =>
+      sounding ? options.range.referenceHz * 2 ** ((sounding.exact - 69) / 12) : undefined,
     /** How many samples the next frame should hold: all since the onset, or a note's follow window. */
     frameLength(available: number): number {
       return Math.min(available, sounding ? followLength(sounding.pitch) : window)

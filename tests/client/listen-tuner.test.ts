@@ -90,6 +90,15 @@ describe('the tuner page', () => {
     expect(byTest('tuner-verdict').text()).toBe('Play an open string')
   })
 
+  it('says so in a browser that cannot listen, and offers no start button to press', async () => {
+    setListenInput({ ...fake.input, supported: false })
+    const { byTest, wrapper } = await tunerPage()
+    expect(byTest('listen-unsupported').text()).toContain('cannot listen')
+    const button = wrapper.findAll('button').find((b) => b.text() === 'Start listening')!
+    expect(button.attributes('disabled')).toBeDefined()
+    expect(fake.opened).toEqual([])
+  })
+
   it('says why when the microphone is blocked, and stays ready to try again', async () => {
     const { wrapper, start } = await tunerPage()
     fake.failNextOpen('denied', 'The microphone is blocked for this site.')
