@@ -47,6 +47,7 @@ export const routes: RouteRecordRaw[] = [
   ...DRILL_LIST.map((drill) =>
     signedIn(drill.route, drillRouteName(drill.id), drill.page, drill.name),
   ),
+  signedIn('/tuner', 'tuner', () => import('../views/TunerView.vue'), 'Tuner'),
   signedIn('/progress', 'progress', () => import('../views/ProgressView.vue'), 'Progress'),
   signedIn('/studio', 'studio', () => import('../views/StudioView.vue'), 'Studio', ['teacher']),
   signedIn(

@@ -24,10 +24,12 @@ const CHROMIUM_ARGS = [
   '--use-fake-ui-for-media-stream',
 ]
 
-export function launchBrowser(): Promise<Browser> {
+/** Chromium; with `microphoneFile` (a WAV, see take-wav.ts) the microphone plays it in a loop. */
+export function launchBrowser(options: { microphoneFile?: string } = {}): Promise<Browser> {
+  const file = options.microphoneFile
   return chromium.launch({
     executablePath: process.env.CHROMIUM_PATH ?? '/usr/bin/chromium',
-    args: CHROMIUM_ARGS,
+    args: file ? [...CHROMIUM_ARGS, `--use-file-for-fake-audio-capture=${file}`] : CHROMIUM_ARGS,
   })
 }
 

@@ -2,6 +2,7 @@
 import { randomUUID } from 'node:crypto'
 import type { Express } from 'express'
 import type { AppContext } from '../../server/context'
+import { wavBytes } from '../../scripts/lib/wav'
 import { signedInAgent } from './api'
 
 export type Agent = Awaited<ReturnType<typeof signedInAgent>>
@@ -134,25 +135,13 @@ export async function insertAttempts(
   )
 }
 
-/** A real, playable 16-bit mono PCM WAV file of a 440 Hz tone (RIFF/WAVE header by hand). */
+/** A real, playable 16-bit mono PCM WAV file of a 440 Hz tone. */
 export function wavFile(samples = 800, rate = 8000): Buffer {
-  const data = samples * 2
-  const b = Buffer.alloc(44 + data)
-  b.write('RIFF', 0)
-  b.writeUInt32LE(36 + data, 4)
-  b.write('WAVEfmt ', 8)
-  b.writeUInt32LE(16, 16)
-  b.writeUInt16LE(1, 20) // PCM
-  b.writeUInt16LE(1, 22) // mono
-  b.writeUInt32LE(rate, 24)
-  b.writeUInt32LE(rate * 2, 28)
-  b.writeUInt16LE(2, 32)
-  b.writeUInt16LE(16, 34)
-  b.write('data', 36)
-  b.writeUInt32LE(data, 40)
-  for (let i = 0; i < samples; i++)
-    b.writeInt16LE(Math.round(8000 * Math.sin((2 * Math.PI * 440 * i) / rate)), 44 + i * 2)
-  return b
+  const tone = Float32Array.from(
+    { length: samples },
+    (_, i) => (8000 / 32767) * Math.sin((2 * Math.PI * 440 * i) / rate),
+  )
+  return wavBytes(tone, rate)
 }
 
 /** The first page of an Ogg Opus stream: capture pattern, page header with CRC, OpusHead packet. */
