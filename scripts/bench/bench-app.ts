@@ -5,7 +5,8 @@ import type { Server } from 'node:http'
 import knex from 'knex'
 import { knexConfig } from '../../db/knexfile'
 import { createApp } from '../../server/app'
-import { signSession, SESSION_COOKIE } from '../../server/auth/session-token'
+import { SESSION_COOKIE } from '../../server/auth/session-token'
+import { issueSessionToken } from '../../server/auth/sessions'
 import { loadConfig } from '../../server/config'
 import { createDb, type Db } from '../../server/lib/db'
 import { createLogger } from '../../server/lib/logger'
@@ -60,7 +61,7 @@ export async function startBenchApp(databaseUrl: string, poolMax = 10): Promise<
     async cookieFor(userId) {
       const user = await findUserById(db, userId)
       if (!user) throw new Error(`no user ${userId}`)
-      return `${SESSION_COOKIE}=${signSession(user, config.jwtSecret)}`
+      return `${SESSION_COOKIE}=${await issueSessionToken({ db, config }, user.id)}`
     },
     async close() {
       server.closeAllConnections()

@@ -2,6 +2,7 @@
 import { Router } from 'express'
 import { requireAuth } from '../auth/auth-middleware'
 import type { AppContext } from '../context'
+import { mailLimit } from '../lib/rate-limits'
 import { parse, parseRequest } from '../lib/validate'
 import {
   AssignmentIdParamsSchema,
@@ -18,7 +19,7 @@ export function commentRoutes(ctx: AppContext): Router {
     const { id } = parse(AssignmentIdParamsSchema, req, 'params')
     res.json({ comments: await threadOf(ctx, req.user!, id) })
   })
-  router.post('/:id/comments', async (req, res) => {
+  router.post('/:id/comments', mailLimit(ctx, 'comment'), async (req, res) => {
     const { params, body } = parseRequest(req, {
       params: AssignmentIdParamsSchema,
       body: CommentInputSchema,

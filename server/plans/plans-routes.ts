@@ -3,6 +3,7 @@
 import { Router } from 'express'
 import { requireAuth, requireRole } from '../auth/auth-middleware'
 import type { AppContext } from '../context'
+import { mailLimit } from '../lib/rate-limits'
 import { parse, parseRequest } from '../lib/validate'
 import { assignmentsOfStudent } from './assignments-service'
 import {
@@ -57,7 +58,7 @@ export function planRoutes(ctx: AppContext): Router {
     const { id } = parse(PlanIdParamsSchema, req, 'params')
     res.status(201).json({ plan: await plans.copyPlan(ctx, req.user!.id, id) })
   })
-  router.post('/:id/assignments', teacher, async (req, res) => {
+  router.post('/:id/assignments', teacher, mailLimit(ctx, 'assignment'), async (req, res) => {
     const { params, body } = parseRequest(req, { params: PlanIdParamsSchema, body: AssignSchema })
     res.json({ plan: await plans.assignPlan(ctx, req.user!, params.id, body.studentIds) })
   })

@@ -3,6 +3,7 @@
 import { Router, type Response } from 'express'
 import { requireAuth, requireRole } from '../auth/auth-middleware'
 import type { AppContext } from '../context'
+import { mailLimit } from '../lib/rate-limits'
 import { parse, parseRequest } from '../lib/validate'
 import { studentAssignmentsForTeacher } from '../plans/assignments-service'
 import { rosterCsv, resultsCsv } from './export-service'
@@ -35,6 +36,7 @@ function sendCsv(res: Response, file: { fileName: string; csv: string }) {
 /** Studios, members and invitations (teachers); memberships (students). */
 function studioManagement(ctx: AppContext, router: Router) {
   const teacher = requireRole('teacher')
+  const inviteLimit = mailLimit(ctx, 'invitation')
   router.get('/studios', teacher, async (req, res) => {
     res.json({ studios: await studios.studiosOf(ctx, req.user!.id) })
   })
@@ -59,7 +61,7 @@ function studioManagement(ctx: AppContext, router: Router) {
     await studios.removeStudent(ctx, req.user!.id, id, studentId)
     res.status(204).end()
   })
-  router.post('/studios/:id/invitations', teacher, async (req, res) => {
+  router.post('/studios/:id/invitations', teacher, inviteLimit, async (req, res) => {
     const { params, body } = parseRequest(req, {
       params: StudioIdParamsSchema,
       body: InvitationInputSchema,
@@ -76,7 +78,7 @@ function studioManagement(ctx: AppContext, router: Router) {
       ),
     })
   })
-  router.post('/invitations/:id/resend', teacher, async (req, res) => {
+  router.post('/invitations/:id/resend', teacher, inviteLimit, async (req, res) => {
     const { id } = parse(InvitationIdParamsSchema, req, 'params')
     res.json({ invitation: await resendInvitation(ctx, req.user!.id, id) })
   })

@@ -32,6 +32,11 @@ export interface PublicUser {
   createdAt: string
 }
 
+/** A user as the admin list shows it. */
+export interface AdminUser extends PublicUser {
+  disabledAt: string | null
+}
+
 export const UserIdParamsSchema = z.object({ id: z.uuid('Not a valid user id.') })
 
 export const UserListQuerySchema = z.object({
@@ -42,4 +47,8 @@ export const UserListQuerySchema = z.object({
 })
 export type UserListQuery = z.infer<typeof UserListQuerySchema>
 
-export const RoleChangeSchema = z.object({ role: RoleSchema })
+/** An admin's change to an account: its role, and/or disabling or enabling it. */
+export const UserChangeSchema = z
+  .strictObject({ role: RoleSchema.optional(), disabled: z.boolean().optional() })
+  .refine((c) => c.role !== undefined || c.disabled !== undefined, 'Send a role or disabled.')
+export type UserChange = z.infer<typeof UserChangeSchema>

@@ -3,7 +3,7 @@ import { randomUUID } from 'node:crypto'
 import path from 'node:path'
 import { TEST_OUTPUT_DIR } from '../../scripts/lib/paths.mjs'
 import request from 'supertest'
-import type { Express } from 'express'
+import express, { type Express } from 'express'
 import { createApp } from '../../server/app'
 import { loadConfig, type Config } from '../../server/config'
 import type { AppContext } from '../../server/context'
@@ -13,13 +13,18 @@ import { createMailer } from '../../server/lib/mail'
 import { startMailSink, type MailSink } from '../../server/mail-sink/mail-sink'
 import { latestMailTo } from '../../server/admin/mail-log-repository'
 import { hashPassword } from '../../server/auth/password'
-import { SESSION_COOKIE, signSession } from '../../server/auth/session-token'
+import { sessionCookieName } from '../../server/auth/session-token'
+import { issueSessionToken } from '../../server/auth/sessions'
+import { CSRF_HEADER, CSRF_VALUE } from '../../server/lib/csrf'
 import { insertUser, toPublicUser } from '../../server/users/users-repository'
 
 export const TEST_PASSWORD = 'correct horse battery'
 
 export interface TestApi {
+  /** The app as our client calls it: like src/api/http.ts, every request carries the CSRF header. */
   app: Express
+  /** The app with nothing added to requests (for the tests of the CSRF check itself). */
+  bareApp: Express
   ctx: AppContext
   sink: MailSink
   close(): Promise<void>
@@ -34,6 +39,8 @@ export async function startTestApi(
     logLevel: 'silent',
     clientDist: '/nonexistent',
     dataDir: path.join(TEST_OUTPUT_DIR, 'api-data'), // recordings uploaded by tests stay out of .data
+    // Test files share one database: each app counts its rate limits apart, like its own installation.
+    rateLimitScope: `${randomUUID()}:`,
     ...overrides,
   })
   const db = createDb(base.databaseUrl)
@@ -44,10 +51,13 @@ export async function startTestApi(
     ? createLogger('info', { write: (line: string) => void logLines.push(line) })
     : createLogger('silent')
   const ctx: AppContext = { config, db, mailer, logger }
-  const app = createApp(ctx)
+  const bareApp = createApp(ctx)
+  const app = asOurClient(bareApp)
   contexts.set(app, ctx)
+  contexts.set(bareApp, ctx)
   return {
     app,
+    bareApp,
     ctx,
     sink,
     async close() {
@@ -56,6 +66,18 @@ export async function startTestApi(
       await db.destroy()
     },
   }
+}
+
+/** Wraps the app so each request carries the anti-CSRF header our client always sends. */
+function asOurClient(app: Express): Express {
+  const client = express()
+  client.disable('x-powered-by')
+  client.use((req, _res, next) => {
+    req.headers[CSRF_HEADER.toLowerCase()] ??= CSRF_VALUE
+    next()
+  })
+  client.use(app)
+  return client
 }
 
 /** A fresh, unique e-mail so tests never collide. */
@@ -68,7 +90,7 @@ const contexts = new WeakMap<Express, AppContext>()
 
 /**
  * A new account and a cookie-keeping agent signed in as it. The account is written straight to the
- * database and its session cookie minted with the app's own key (auth.test.ts covers the register and
+ * database and its session (row and cookie) made with the app's own code (auth.test.ts covers the register and
  * sign-in routes themselves); everything after that goes through the real middleware.
  */
 export async function signedInAgent(
@@ -87,7 +109,8 @@ export async function signedInAgent(
     passwordHash: await testPasswordHash,
   })
   const agent = request.agent(app)
-  const cookie = `${SESSION_COOKIE}=${signSession(record, ctx.config.jwtSecret)}; Path=/; HttpOnly`
+  const token = await issueSessionToken(ctx, record.id)
+  const cookie = `${sessionCookieName(ctx.config)}=${token}; Path=/; HttpOnly`
   agent.jar.setCookies([cookie], '127.0.0.1', '/')
   const user = toPublicUser(record)
   return { agent, email, user: user as { id: string; email: string; role: string } }

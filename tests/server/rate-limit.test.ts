@@ -1,4 +1,5 @@
-// Sign-in and reset requests are rate limited (a separate app so the limits are low and isolated).
+// Sign-in and reset requests are rate limited (a separate app so the limits are low and isolated);
+// the attacks on these limits are in security-sign-in.test.ts.
 import request from 'supertest'
 import { afterAll, beforeAll, expect, it } from 'vitest'
 import { signedInAgent, startTestApi, TEST_PASSWORD, type TestApi } from '../helpers/api'
@@ -9,7 +10,7 @@ beforeAll(async () => {
 })
 afterAll(() => api.close())
 
-it('when sign-in fails too often, then 429 even with the right password', async () => {
+it('when sign-in fails too often from one address, then that address gets 429 even with the right password', async () => {
   const { email } = await signedInAgent(api.app)
   for (let i = 0; i < 3; i++) {
     expect(
