@@ -2,8 +2,7 @@
 import bcrypt from 'bcryptjs'
 
 export type PasswordTask =
-  | { op: 'hash'; password: string; cost: number }
-  | { op: 'verify'; password: string; hash: string }
+  { op: 'hash'; password: string; cost: number } | { op: 'verify'; password: string; hash: string }
 
 export default function passwordTask(task: PasswordTask): string | boolean {
   return task.op === 'hash'

@@ -31,9 +31,15 @@ async function run<R extends string | boolean>(task: PasswordTask): Promise<R> {
     return (await workers().run(task)) as R
   } catch (error) {
     if (/queue is at limit/i.test(String((error as Error).message))) {
-      throw new AppError('busy', 'The server is busy. Please try again in a moment.', 503, undefined, {
-        'Retry-After': '5',
-      })
+      throw new AppError(
+        'busy',
+        'The server is busy. Please try again in a moment.',
+        503,
+        undefined,
+        {
+          'Retry-After': '5',
+        },
+      )
     }
     throw error
   } finally {

@@ -3,10 +3,10 @@ import { defineStore } from 'pinia'
 import { ref } from 'vue'
 import * as adminApi from '../api/admin'
 import { ApiError } from '../api/http'
-import type { PublicUser, Role } from '../../server/users/users-schema'
+import type { AdminUser, UserChange } from '../../server/users/users-schema'
 
 export const useAdminStore = defineStore('admin', () => {
-  const users = ref<PublicUser[]>([])
+  const users = ref<AdminUser[]>([])
   const userTotal = ref(0)
   const mail = ref<adminApi.MailSummary[]>([])
   const mailTotal = ref(0)
@@ -33,9 +33,10 @@ export const useAdminStore = defineStore('admin', () => {
       userTotal.value = page.total
     })
 
-  const setRole = (id: string, role: Role) =>
+  /** Applies a confirmed change (role, or disabled); the server ends that account's sessions. */
+  const changeUser = (id: string, change: UserChange) =>
     track(async () => {
-      const { user } = await adminApi.changeRole(id, role)
+      const { user } = await adminApi.changeUser(id, change)
       users.value = users.value.map((u) => (u.id === id ? user : u))
     })
 
@@ -63,7 +64,7 @@ export const useAdminStore = defineStore('admin', () => {
     isLoading,
     error,
     loadUsers,
-    setRole,
+    changeUser,
     loadMail,
     openMail,
     sendDigests,

@@ -63,6 +63,13 @@ export const useAuthStore = defineStore('auth', () => {
       user.value = null
     })
 
+  /** Ends every session of this account (all devices, this one included). */
+  const signOutEverywhere = () =>
+    track(async () => {
+      await authApi.logoutEverywhere()
+      user.value = null
+    })
+
   /** Forgets the user locally (the server already ended the session). */
   function expire() {
     user.value = null
@@ -83,6 +90,7 @@ export const useAuthStore = defineStore('auth', () => {
     signIn,
     register,
     signOut,
+    signOutEverywhere,
     expire,
     hasRole,
   }

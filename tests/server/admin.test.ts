@@ -1,13 +1,7 @@
 // Admin routes: users and the mail log; health.
 import request from 'supertest'
 import { afterAll, beforeAll, expect, it } from 'vitest'
-import {
-  makeAdmin,
-  signedInAgent,
-  startTestApi,
-  TEST_PASSWORD,
-  type TestApi,
-} from '../helpers/api'
+import { makeAdmin, signedInAgent, startTestApi, TEST_PASSWORD, type TestApi } from '../helpers/api'
 
 let api: TestApi
 beforeAll(async () => {

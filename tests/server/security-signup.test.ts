@@ -49,11 +49,8 @@ it('when 24 sign-ups arrive at once, then /api/health answers while they are sti
   const statuses = await Promise.all(signUps)
   expect(statuses.filter((s) => s === 201)).toHaveLength(SIGNUP_LIMIT)
   expect(statuses.filter((s) => s === 429)).toHaveLength(24 - SIGNUP_LIMIT)
-  const [{ count }] = await api.ctx
-    .db('users')
-    .whereLike('email', `burst-${tag}-%`)
-    .count({ count: '*' })
-  expect(Number(count)).toBe(SIGNUP_LIMIT)
+  const created = await api.ctx.db('users').whereLike('email', `burst-${tag}-%`).select('id')
+  expect(created).toHaveLength(SIGNUP_LIMIT)
 })
 
 it('when a password is hashed in the pool, then it is bcrypt at the configured cost and verifies', async () => {
