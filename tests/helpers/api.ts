@@ -121,6 +121,13 @@ export async function makeAdmin(ctx: AppContext, userId: string) {
   await ctx.db('users').where({ id: userId }).update({ role: 'admin' })
 }
 
+/** A signed-in admin: a new account promoted in the database (sessions read the role per request). */
+export async function signedInAdmin(app: Express, name = 'Test Admin') {
+  const admin = await signedInAgent(app, 'teacher', name)
+  await makeAdmin(contexts.get(app)!, admin.user.id)
+  return { ...admin, user: { ...admin.user, role: 'admin' } }
+}
+
 /** Waits for the newest mail to an address to arrive in the sink. */
 export async function waitForMail(ctx: AppContext, address: string, after = 0) {
   for (let i = 0; i < 50; i++) {

@@ -1,7 +1,13 @@
 // Admin routes: users and the mail log; health.
 import request from 'supertest'
 import { afterAll, beforeAll, expect, it } from 'vitest'
-import { makeAdmin, signedInAgent, startTestApi, TEST_PASSWORD, type TestApi } from '../helpers/api'
+import {
+  signedInAdmin,
+  signedInAgent,
+  startTestApi,
+  TEST_PASSWORD,
+  type TestApi,
+} from '../helpers/api'
 
 let api: TestApi
 beforeAll(async () => {
@@ -16,8 +22,7 @@ it('when the database is up, then /api/health reports it', async () => {
 })
 
 it('when an admin lists users with a search, then only matches come back, paged', async () => {
-  const admin = await signedInAgent(api.app, 'teacher', 'Admin Person')
-  await makeAdmin(api.ctx, admin.user.id)
+  const admin = await signedInAdmin(api.app, 'Admin Person')
   const target = await signedInAgent(api.app, 'student', 'Zebulon Quartz')
   const res = await admin.agent
     .get('/api/admin/users')
@@ -28,8 +33,7 @@ it('when an admin lists users with a search, then only matches come back, paged'
 })
 
 it('when an admin changes a role, then it sticks; an invalid role or id is a 400', async () => {
-  const admin = await signedInAgent(api.app, 'teacher')
-  await makeAdmin(api.ctx, admin.user.id)
+  const admin = await signedInAdmin(api.app)
   const target = await signedInAgent(api.app, 'student')
   const ok = await admin.agent.patch(`/api/admin/users/${target.user.id}`).send({ role: 'teacher' })
   expect(ok.status).toBe(200)
@@ -44,8 +48,7 @@ it('when an admin changes a role, then it sticks; an invalid role or id is a 400
 })
 
 it('when mail has been sent, then the admin mail log lists and opens it, its link hidden', async () => {
-  const admin = await signedInAgent(api.app, 'teacher')
-  await makeAdmin(api.ctx, admin.user.id)
+  const admin = await signedInAdmin(api.app)
   const someone = await signedInAgent(api.app)
   await request(api.app).post('/api/auth/password-reset').send({ email: someone.email })
   let listed: { items: { id: number; subject: string }[] } = { items: [] }

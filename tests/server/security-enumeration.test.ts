@@ -4,7 +4,7 @@ import request from 'supertest'
 import { afterAll, beforeAll, describe, expect, it } from 'vitest'
 import type { Mailer, OutgoingMail } from '../../server/lib/mail'
 import {
-  makeAdmin,
+  signedInAdmin,
   signedInAgent,
   startTestApi,
   uniqueEmail,
@@ -74,8 +74,7 @@ describe('invitations', () => {
   it('when a teacher invites an address of a teacher or an admin, then the answer is as for anyone', async () => {
     const inviter = await teacherWithStudio(api.app)
     const otherTeacher = await signedInAgent(api.app, 'teacher')
-    const admin = await signedInAgent(api.app, 'teacher')
-    await makeAdmin(api.ctx, admin.user.id)
+    const admin = await signedInAdmin(api.app)
     const nobody = uniqueEmail('nobody')
 
     const answers = []

@@ -6,7 +6,7 @@ import request from 'supertest'
 import { afterAll, beforeAll, describe, expect, it } from 'vitest'
 import { maskLinks } from '../../server/admin/mail-mask'
 import {
-  makeAdmin,
+  signedInAdmin,
   signedInAgent,
   startTestApi,
   uniqueEmail,
@@ -19,8 +19,7 @@ let api: TestApi
 let admin: Awaited<ReturnType<typeof signedInAgent>>
 beforeAll(async () => {
   api = await startTestApi()
-  admin = await signedInAgent(api.app, 'teacher', 'Log Reader')
-  await makeAdmin(api.ctx, admin.user.id)
+  admin = await signedInAdmin(api.app, 'Log Reader')
 })
 afterAll(() => api.close())
 

@@ -6,7 +6,7 @@ import request from 'supertest'
 import { randomUUID } from 'node:crypto'
 import { afterAll, beforeAll, describe, expect, it } from 'vitest'
 import { errorHandler } from '../../server/lib/errors'
-import { makeAdmin, signedInAgent, startTestApi, type TestApi } from '../helpers/api'
+import { signedInAdmin, signedInAgent, startTestApi, type TestApi } from '../helpers/api'
 import { attemptBody, practiser } from '../helpers/practice'
 import { createPlan, planBody, studentIn, teacherWithStudio } from '../helpers/studio'
 
@@ -20,8 +20,7 @@ beforeAll(async () => {
   api = await startTestApi()
   teacher = await teacherWithStudio(api.app)
   student = await studentIn(api.app, api.ctx, teacher.studioId)
-  admin = await signedInAgent(api.app, 'teacher')
-  await makeAdmin(api.ctx, admin.user.id)
+  admin = await signedInAdmin(api.app)
   const plan = await createPlan(teacher, { studentIds: [student.user.id] })
   assignmentId = plan.assignees[0]!.assignmentId
 })

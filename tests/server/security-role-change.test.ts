@@ -1,15 +1,14 @@
 // Finding 11 as the attack: a student promoted by an admin must not stay in teachers' rosters (where
 // they would keep reading as a student) nor keep the session from before the change.
 import { afterAll, beforeAll, expect, it } from 'vitest'
-import { makeAdmin, signedInAgent, startTestApi, type TestApi } from '../helpers/api'
+import { signedInAdmin, signedInAgent, startTestApi, type TestApi } from '../helpers/api'
 import { studentIn, teacherWithStudio } from '../helpers/studio'
 
 let api: TestApi
 let admin: Awaited<ReturnType<typeof signedInAgent>>
 beforeAll(async () => {
   api = await startTestApi()
-  admin = await signedInAgent(api.app, 'teacher', 'Role Admin')
-  await makeAdmin(api.ctx, admin.user.id)
+  admin = await signedInAdmin(api.app, 'Role Admin')
 })
 afterAll(() => api.close())
 

@@ -4,7 +4,7 @@ import request from 'supertest'
 import { afterAll, beforeAll, describe, expect, it } from 'vitest'
 import { SESSION_COOKIE } from '../../server/auth/session-token'
 import {
-  makeAdmin,
+  signedInAdmin,
   signedInAgent,
   startTestApi,
   TEST_PASSWORD,
@@ -68,8 +68,7 @@ describe('account changes end sessions', () => {
   })
 
   it('when an admin disables an account, then its sessions end and sign-in is refused until enabled', async () => {
-    const admin = await signedInAgent(api.app, 'teacher')
-    await makeAdmin(api.ctx, admin.user.id)
+    const admin = await signedInAdmin(api.app)
     const target = await signedInAgent(api.app)
     const off = await admin.agent
       .patch(`/api/admin/users/${target.user.id}`)
@@ -93,8 +92,7 @@ describe('account changes end sessions', () => {
   })
 
   it('when an admin tries to disable their own account, then 400', async () => {
-    const admin = await signedInAgent(api.app, 'teacher')
-    await makeAdmin(api.ctx, admin.user.id)
+    const admin = await signedInAdmin(api.app)
     const res = await admin.agent
       .patch(`/api/admin/users/${admin.user.id}`)
       .send({ disabled: true })
