@@ -82,18 +82,33 @@ export function inSequence(handlers: RequestHandler[]): RequestHandler {
 }
 
 /**
- * For routes that send e-mail: MAIL_RATE_LIMIT per account and twice that per address, per hour.
- * Use after requireAuth: `router.post('/x', teacher, mailLimit(ctx, 'comment'), handler)`.
+ * For routes that send e-mail: MAIL_RATE_LIMIT per account and twice that per address, per hour
+ * (limiters of the same name share their counts). Use after requireAuth, e.g.
+ * `router.post('/x', teacher, mailLimit(ctx, 'comment'), handler)`; `sendsMail` narrows it to the
+ * requests that do send.
  */
-export function mailLimit(ctx: AppContext, name: string): RequestHandler {
+export function mailLimit(
+  ctx: AppContext,
+  name: string,
+  sendsMail: (req: Request) => boolean = () => true,
+): RequestHandler {
   const limit = ctx.config.mailSendsPerHour
+  const when =
+    (keyOf: KeyOf): KeyOf =>
+    (req) =>
+      sendsMail(req) ? keyOf(req) : undefined
   return inSequence([
-    limitRequests(ctx, { name: `mail:${name}:account`, limit, windowMs: HOUR, keyOf: BY_ACCOUNT }),
+    limitRequests(ctx, {
+      name: `mail:${name}:account`,
+      limit,
+      windowMs: HOUR,
+      keyOf: when(BY_ACCOUNT),
+    }),
     limitRequests(ctx, {
       name: `mail:${name}:address`,
       limit: limit * 2,
       windowMs: HOUR,
-      keyOf: BY_ADDRESS,
+      keyOf: when(BY_ADDRESS),
     }),
   ])
 }

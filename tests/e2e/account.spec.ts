@@ -121,7 +121,7 @@ it('the admin changes a role only after confirming what follows', async () => {
   const { page, context } = await newPage(browser, LAPTOP)
   await signInThroughUi(page, 'admin@cedarhollow.test')
   await page.waitForURL('**/admin/users')
-  await page.getByRole('textbox', { name: 'Search name or e-mail' }).fill('Wren')
+  await page.getByRole('textbox', { name: 'Search name or e-mail' }).fill('Calloway')
   await expect.poll(() => page.locator('tbody tr').count()).toBe(1)
   const role = page.getByLabel('Role of Wren Calloway')
   const roleField = page.locator('tbody tr', { hasText: 'Wren Calloway' }).locator('.v-field')
