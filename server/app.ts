@@ -11,7 +11,9 @@ import { authRoutes } from './auth/auth-routes'
 import type { AppContext } from './context'
 import { healthRoutes } from './health/health-routes'
 import { instrumentsRoutes } from './instruments/instruments-routes'
+import { requireCsrfHeader } from './lib/csrf'
 import { apiNotFound, errorHandler } from './lib/errors'
+import { rejectNulText } from './lib/text-guard'
 import { attemptsRoutes } from './attempts/attempts-routes'
 import { focusRoutes } from './focus/focus-routes'
 import { progressRoutes } from './progress/progress-routes'
@@ -34,7 +36,9 @@ const CSP_DIRECTIVES = {
 
 function apiRouter(ctx: AppContext) {
   const api = express.Router()
+  api.use(requireCsrfHeader)
   api.use(express.json({ limit: '256kb' }))
+  api.use(rejectNulText)
   api.use('/health', healthRoutes(ctx))
   api.use('/auth', authRoutes(ctx))
   mountDigests(api, ctx) // under /admin/digests: before the admin router's own guard
@@ -63,7 +67,8 @@ function serveClient(app: Express, dist: string) {
 export function createApp(ctx: AppContext): Express {
   const app = express()
   app.disable('x-powered-by')
-  app.set('trust proxy', 'loopback')
+  // X-Forwarded-* only count when TRUST_PROXY names the proxy; else anyone could pick an address.
+  app.set('trust proxy', ctx.config.trustProxy)
   app.use(
     pinoHttp({
       logger: ctx.logger,

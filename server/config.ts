@@ -6,6 +6,24 @@ import { z } from 'zod'
 
 const ROOT = path.resolve(path.dirname(fileURLToPath(import.meta.url)), '..')
 
+/**
+ * TRUST_PROXY: off by default (X-Forwarded-* ignored); `true`, a hop count, or Express's list of
+ * trusted addresses (`loopback`, `10.0.0.0/8, 127.0.0.1`) when a reverse proxy sits in front.
+ */
+const TrustProxySchema = z.union([
+  z.boolean(),
+  z.number().int().min(0),
+  z
+    .string()
+    .trim()
+    .transform((v) =>
+      /^(false|0|off|)$/i.test(v) ? false : v === 'true' ? true : /^\d+$/.test(v) ? Number(v) : v,
+    ),
+])
+
+const flag = (value: string | undefined) =>
+  value === undefined || value === '' ? undefined : /^(1|true|yes|on)$/i.test(value)
+
 const ConfigSchema = z.object({
   host: z.string().default('127.0.0.1'),
   port: z.coerce.number().int().min(0).max(65535).default(3000),
@@ -21,8 +39,16 @@ const ConfigSchema = z.object({
   dataDir: z.string().default(path.join(ROOT, '.data')),
   logLevel: z.enum(['fatal', 'error', 'warn', 'info', 'debug', 'trace', 'silent']).default('info'),
   bcryptCost: z.coerce.number().int().min(12).max(15).default(12),
+  trustProxy: TrustProxySchema.default(false),
+  secureCookies: z.boolean().optional(),
   loginAttemptsPer15Min: z.coerce.number().int().min(1).default(10),
+  loginFreeFailuresPerAccount: z.coerce.number().int().min(1).default(5),
+  loginBackoffBaseMs: z.coerce.number().int().min(0).default(1000),
   resetRequestsPerHour: z.coerce.number().int().min(1).default(5),
+  signupsPerHour: z.coerce.number().int().min(1).default(10),
+  mailSendsPerHour: z.coerce.number().int().min(1).default(60),
+  // Test files share one database; each app instance may keep its counters apart with a scope.
+  rateLimitScope: z.string().default(''),
 })
 
 export type Config = z.infer<typeof ConfigSchema>
@@ -45,8 +71,14 @@ export function loadConfig(
     dataDir: env.AMBITUS_DATA_DIR,
     logLevel: env.LOG_LEVEL,
     bcryptCost: env.BCRYPT_COST,
+    trustProxy: env.TRUST_PROXY,
+    secureCookies: flag(env.COOKIE_SECURE),
     loginAttemptsPer15Min: env.LOGIN_RATE_LIMIT,
+    loginFreeFailuresPerAccount: env.LOGIN_ACCOUNT_FREE_FAILURES,
+    loginBackoffBaseMs: env.LOGIN_BACKOFF_BASE_MS,
     resetRequestsPerHour: env.RESET_RATE_LIMIT,
+    signupsPerHour: env.SIGNUP_RATE_LIMIT,
+    mailSendsPerHour: env.MAIL_RATE_LIMIT,
     ...overrides,
   })
   if (!parsed.success) {
@@ -54,6 +86,10 @@ export function loadConfig(
   }
   return parsed.data
 }
+
+/** Session cookies are Secure (and __Host- prefixed): COOKIE_SECURE, else when APP_URL is https. */
+export const cookiesAreSecure = (config: Config) =>
+  config.secureCookies ?? config.appUrl?.startsWith('https:') ?? false
 
 /** The public base URL used in e-mailed links (APP_URL, else the local address). */
 export function publicUrl(config: Config): string {

@@ -1,5 +1,6 @@
 // Process entry: load configuration, open the database, listen; stop cleanly on SIGINT/SIGTERM.
 import { createApp } from './app'
+import { closePasswordPool } from './auth/password'
 import { loadConfig } from './config'
 import { createDb } from './lib/db'
 import { createLogger } from './lib/logger'
@@ -26,7 +27,7 @@ function shutdown(signal: string) {
   scheduler.stop()
   server.close(async () => {
     mailer.close()
-    await db.destroy()
+    await Promise.all([db.destroy(), closePasswordPool()])
     process.exit(0)
   })
   server.closeAllConnections()

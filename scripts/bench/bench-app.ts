@@ -6,7 +6,8 @@ import knex from 'knex'
 import { knexConfig } from '../../db/knex-config'
 import { migrateToLatest } from '../../db/live-sql'
 import { createApp } from '../../server/app'
-import { signSession, SESSION_COOKIE } from '../../server/auth/session-token'
+import { SESSION_COOKIE } from '../../server/auth/session-token'
+import { issueSessionToken } from '../../server/auth/sessions'
 import { loadConfig } from '../../server/config'
 import { createDb, type Db } from '../../server/lib/db'
 import { createLogger } from '../../server/lib/logger'
@@ -62,7 +63,7 @@ export async function startBenchApp(databaseUrl: string, poolMax = 10): Promise<
     async cookieFor(userId) {
       const user = await findUserById(db, userId)
       if (!user) throw new Error(`no user ${userId}`)
-      return `${SESSION_COOKIE}=${signSession(user, config.jwtSecret)}`
+      return `${SESSION_COOKIE}=${await issueSessionToken({ db, config }, user.id)}`
     },
     async close() {
       server.closeAllConnections()

@@ -7,7 +7,8 @@ import { randomUUID } from 'node:crypto'
 import autocannon from 'autocannon'
 import knex from 'knex'
 import { knexConfig } from '../../db/knex-config'
-import { signSession, SESSION_COOKIE } from '../../server/auth/session-token'
+import { SESSION_COOKIE } from '../../server/auth/session-token'
+import { issueSessionToken } from '../../server/auth/sessions'
 import { loadConfig } from '../../server/config'
 import { attemptRow } from '../../server/attempts/attempts-repository'
 import { findUserById } from '../../server/users/users-repository'
@@ -76,7 +77,11 @@ async function apiRun(
           const player = players[next++ % players.length]!
           return {
             ...request,
-            headers: { 'content-type': 'application/json', cookie: player.cookie },
+            headers: {
+              'content-type': 'application/json',
+              cookie: player.cookie,
+              'x-requested-with': 'ambitus', // the anti-CSRF header the client sends
+            },
             body: JSON.stringify({ attempts: batch(player), timeZone: 'Europe/Oslo' }),
           }
         },
@@ -133,7 +138,7 @@ for (let i = 0; i < PLAYERS; i++) {
   players.push({
     id,
     instrumentId: await createBass(db, id),
-    cookie: `${SESSION_COOKIE}=${signSession(user, config.jwtSecret)}`,
+    cookie: `${SESSION_COOKIE}=${await issueSessionToken({ db, config }, user.id)}`,
   })
 }
 await db.raw('create table attempts_plain (like attempts including defaults)')

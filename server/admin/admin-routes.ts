@@ -1,12 +1,14 @@
-// /api/admin: user list and roles, the captured-mail log. Admins only.
+// /api/admin: user list, roles and disabling, the captured-mail log (links hidden). Admins only.
 import { Router } from 'express'
 import { requireAuth, requireRole } from '../auth/auth-middleware'
 import type { AppContext } from '../context'
-import { badRequest, notFound } from '../lib/errors'
+import { notFound } from '../lib/errors'
 import { parse, parseRequest } from '../lib/validate'
-import { listUsers, toPublicUser, updateRole } from '../users/users-repository'
-import { RoleChangeSchema, UserIdParamsSchema, UserListQuerySchema } from '../users/users-schema'
+import { listUsers } from '../users/users-repository'
+import { UserChangeSchema, UserIdParamsSchema, UserListQuerySchema } from '../users/users-schema'
 import { MailIdParamsSchema, MailListQuerySchema } from './admin-schema'
+import { changeUser } from './admin-users-service'
+import { maskMessage } from './mail-mask'
 import { findMail, listMail } from './mail-log-repository'
 
 export function adminRoutes(ctx: AppContext): Router {
@@ -20,13 +22,9 @@ export function adminRoutes(ctx: AppContext): Router {
   router.patch('/users/:id', async (req, res) => {
     const { params, body } = parseRequest(req, {
       params: UserIdParamsSchema,
-      body: RoleChangeSchema,
+      body: UserChangeSchema,
     })
-    if (params.id === req.user!.id)
-      throw badRequest('You cannot change your own role.', { role: ['Ask another admin.'] })
-    const user = await updateRole(ctx.db, params.id, body.role)
-    if (!user) throw notFound('That user')
-    res.json({ user: toPublicUser(user) })
+    res.json({ user: await changeUser(ctx, req.user!.id, params.id, body) })
   })
 
   router.get('/mail', async (req, res) => {
@@ -36,7 +34,7 @@ export function adminRoutes(ctx: AppContext): Router {
   router.get('/mail/:id', async (req, res) => {
     const message = await findMail(ctx.db, parse(MailIdParamsSchema, req, 'params').id)
     if (!message) throw notFound('That message')
-    res.json({ message })
+    res.json({ message: maskMessage(message) })
   })
   return router
 }

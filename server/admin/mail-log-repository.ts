@@ -39,18 +39,38 @@ export async function listMail(db: Db, query: MailListQuery) {
   return { total: Number(count), items: rows.map(toSummary) }
 }
 
+const toMessage = (row: MailRow): MailMessage => ({
+  ...toSummary(row),
+  text: row.text_body,
+  html: row.html_body,
+})
+
 export async function findMail(db: Db, id: number): Promise<MailMessage | null> {
   const row = await db<MailRow>('captured_mail')
     .where({ id: String(id) })
     .first()
-  return row ? { ...toSummary(row), text: row.text_body, html: row.html_body } : null
+  return row ? toMessage(row) : null
 }
 
-/** Newest message sent to an address (used by tests and by the admin view). */
+/** The newest `last` messages (to one address when given), oldest first, raw (for mail:show). */
+export async function recentMail(
+  db: Db,
+  filter: { to?: string; last: number },
+): Promise<MailMessage[]> {
+  const rows: MailRow[] = await db('captured_mail')
+    .modify((q) => {
+      if (filter.to) q.whereRaw('? = any(recipients)', [filter.to])
+    })
+    .orderBy('id', 'desc')
+    .limit(filter.last)
+  return rows.reverse().map(toMessage)
+}
+
+/** Newest message sent to an address, raw (tests read links from it). */
 export async function latestMailTo(db: Db, address: string): Promise<MailMessage | null> {
   const row = await db<MailRow>('captured_mail')
     .whereRaw('? = any(recipients)', [address])
     .orderBy('id', 'desc')
     .first()
-  return row ? { ...toSummary(row), text: row.text_body, html: row.html_body } : null
+  return row ? toMessage(row) : null
 }

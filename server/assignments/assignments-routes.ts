@@ -2,6 +2,7 @@
 import { Router } from 'express'
 import { requireAuth } from '../auth/auth-middleware'
 import type { AppContext } from '../context'
+import { mailLimit } from '../lib/rate-limits'
 import { parse, parseRequest } from '../lib/validate'
 import { CommentInputSchema } from '../../src/contract/assignments'
 import { AssignmentIdParamsSchema, CommentIdParamsSchema } from './assignments-schema'
@@ -21,7 +22,7 @@ function commentRoutes(ctx: AppContext, router: Router) {
     const { id } = parse(AssignmentIdParamsSchema, req, 'params')
     res.json({ comments: await threadOf(ctx, req.user!, id) })
   })
-  router.post('/:id/comments', async (req, res) => {
+  router.post('/:id/comments', mailLimit(ctx, 'comment'), async (req, res) => {
     const { params, body } = parseRequest(req, {
       params: AssignmentIdParamsSchema,
       body: CommentInputSchema,

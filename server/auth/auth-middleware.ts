@@ -1,20 +1,18 @@
-// requireAuth reads the session cookie and loads the user; requireRole limits a route to roles.
+// requireAuth finds the request's live session and its user; requireRole limits a route to roles.
 import type { RequestHandler } from 'express'
 import type { AppContext } from '../context'
 import { forbidden, unauthorized } from '../lib/errors'
-import { findUserById, toPublicUser } from '../users/users-repository'
+import { toPublicUser } from '../users/users-repository'
 import type { Role } from '../users/users-schema'
-import { SESSION_COOKIE, verifySession } from './session-token'
+import { sessionOf } from './sessions'
 
-/** Rejects requests without a valid session with 401; sets req.user otherwise. */
+/** Rejects requests without a live session with 401; sets req.user and req.sessionId otherwise. */
 export function requireAuth(ctx: AppContext): RequestHandler {
   return async (req, _res, next) => {
-    const claims = verifySession(req.cookies?.[SESSION_COOKIE], ctx.config.jwtSecret)
-    const user = claims ? await findUserById(ctx.db, claims.sub) : null
-    if (!user || !claims || user.passwordChangedAt.getTime() !== claims.pwc) {
-      throw unauthorized('Your session has ended. Please sign in again.')
-    }
-    req.user = toPublicUser(user)
+    const session = await sessionOf(ctx, req)
+    if (!session) throw unauthorized('Your session has ended. Please sign in again.')
+    req.user = toPublicUser(session.user)
+    req.sessionId = session.sessionId
     next()
   }
 }

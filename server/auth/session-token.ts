@@ -1,11 +1,12 @@
-// The session is a JWT in an httpOnly cookie; it names the user and the password version.
+// The session cookie holds a JWT naming the user and a server-side session (sessions table), so a
+// session ends the moment its row is deleted. Cookie names get the __Host- prefix over HTTPS.
 import type { Request, Response } from 'express'
 import { createSecretKey, type KeyObject } from 'node:crypto'
 import jwt from 'jsonwebtoken'
-import type { UserRecord } from '../users/users-repository'
+import { cookiesAreSecure, type Config } from '../config'
 
 export const SESSION_COOKIE = 'ambitus_session'
-const SESSION_DAYS = 7
+export const SESSION_DAYS = 7
 
 // jsonwebtoken probes a string secret as a public key (and catches the throw) on every call; a
 // key object built once per secret skips that work on the hot path of every signed-in request.
@@ -18,12 +19,11 @@ function keyFor(secret: string): KeyObject {
 
 export interface SessionClaims {
   sub: string
-  pwc: number
+  sid: string
 }
 
-/** Signs a session token for a user; changing the password invalidates older tokens. */
-export function signSession(user: UserRecord, secret: string): string {
-  const claims: SessionClaims = { sub: user.id, pwc: user.passwordChangedAt.getTime() }
+/** Signs a session token for a user's session row. */
+export function signSession(claims: SessionClaims, secret: string): string {
   return jwt.sign(claims, keyFor(secret), { algorithm: 'HS256', expiresIn: `${SESSION_DAYS}d` })
 }
 
@@ -33,28 +33,37 @@ export function verifySession(token: string | undefined, secret: string): Sessio
   try {
     const payload = jwt.verify(token, keyFor(secret), { algorithms: ['HS256'] })
     if (typeof payload !== 'object' || typeof payload.sub !== 'string') return null
-    if (typeof payload.pwc !== 'number') return null
-    return { sub: payload.sub, pwc: payload.pwc }
+    if (typeof payload.sid !== 'string') return null
+    return { sub: payload.sub, sid: payload.sid }
   } catch {
     return null
   }
 }
 
-export function setSessionCookie(req: Request, res: Response, token: string) {
-  res.cookie(SESSION_COOKIE, token, {
-    httpOnly: true,
-    sameSite: 'lax',
-    secure: req.secure,
-    path: '/',
+/** `__Host-` binds the cookie to this exact origin over HTTPS (no Domain, Path=/, Secure). */
+export const cookieName = (config: Config, base: string) =>
+  cookiesAreSecure(config) ? `__Host-${base}` : base
+
+export const sessionCookieName = (config: Config) => cookieName(config, SESSION_COOKIE)
+
+/** Cookie attributes for our own cookies: httpOnly, SameSite=Lax, Secure per configuration. */
+export const cookieOptions = (config: Config) => ({
+  httpOnly: true,
+  sameSite: 'lax' as const,
+  secure: cookiesAreSecure(config),
+  path: '/',
+})
+
+export const readSessionToken = (config: Config, req: Request): string | undefined =>
+  req.cookies?.[sessionCookieName(config)]
+
+export function setSessionCookie(config: Config, res: Response, token: string) {
+  res.cookie(sessionCookieName(config), token, {
+    ...cookieOptions(config),
     maxAge: SESSION_DAYS * 24 * 3600 * 1000,
   })
 }
 
-export function clearSessionCookie(req: Request, res: Response) {
-  res.clearCookie(SESSION_COOKIE, {
-    httpOnly: true,
-    sameSite: 'lax',
-    secure: req.secure,
-    path: '/',
-  })
+export function clearSessionCookie(config: Config, res: Response) {
+  res.clearCookie(sessionCookieName(config), cookieOptions(config))
 }

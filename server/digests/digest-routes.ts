@@ -2,12 +2,13 @@
 import { Router } from 'express'
 import { requireAuth, requireRole } from '../auth/auth-middleware'
 import type { AppContext } from '../context'
+import { mailLimit } from '../lib/rate-limits'
 import { sendWeeklyDigests } from './digest-service'
 
 export function mountDigests(api: Router, ctx: AppContext) {
   const router = Router()
   router.use(requireAuth(ctx), requireRole('admin'))
-  router.post('/send', async (_req, res) => {
+  router.post('/send', mailLimit(ctx, 'digest'), async (_req, res) => {
     res.json(await sendWeeklyDigests(ctx, new Date(), { force: true }))
   })
   api.use('/admin/digests', router)

@@ -1,14 +1,14 @@
 // Invitations: a teacher invites to a studio (/api/studio/studios/:id/invitations), lists, resends
 // and revokes them (/api/studio/invitations); the public side of the link (/api/invitations) previews
 // it, then accepts it signed in or by creating a student account (which signs the new student in).
-import { Router, type Request } from 'express'
+import { Router } from 'express'
 import { requireAuth, requireRole } from '../auth/auth-middleware'
-import { SESSION_COOKIE, setSessionCookie, signSession, verifySession } from '../auth/session-token'
+import { sessionOf, startSession } from '../auth/sessions'
 import type { AppContext } from '../context'
+import { mailLimit, signUpLimit } from '../lib/rate-limits'
 import { parse, parseRequest } from '../lib/validate'
 import { StudioIdParamsSchema } from '../studios/studios-schema'
-import { findUserById, toPublicUser } from '../users/users-repository'
-import type { PublicUser } from '../users/users-schema'
+import { toPublicUser } from '../users/users-repository'
 import {
   acceptInvitation,
   invite,
@@ -25,14 +25,6 @@ import {
   InvitationTokenQuerySchema,
 } from './invitations-schema'
 
-/** The signed-in user when the session cookie is valid; null otherwise (no 401: signing up is allowed). */
-async function sessionUser(ctx: AppContext, req: Request): Promise<PublicUser | null> {
-  const claims = verifySession(req.cookies?.[SESSION_COOKIE], ctx.config.jwtSecret)
-  const user = claims ? await findUserById(ctx.db, claims.sub) : null
-  if (!user || !claims || user.passwordChangedAt.getTime() !== claims.pwc) return null
-  return toPublicUser(user)
-}
-
 function publicRoutes(ctx: AppContext): Router {
   const router = Router()
 
@@ -42,12 +34,13 @@ function publicRoutes(ctx: AppContext): Router {
     res.set('Cache-Control', 'no-store').json({ invitation: await previewInvitation(ctx, token) })
   })
 
-  router.post('/accept', async (req, res) => {
+  router.post('/accept', signUpLimit(ctx), async (req, res) => {
     const input = parse(AcceptInvitationSchema, req)
-    const current = await sessionUser(ctx, req)
+    // Signed in or not (no 401: accepting may create the account).
+    const session = await sessionOf(ctx, req)
+    const current = session ? toPublicUser(session.user) : null
     const result = await acceptInvitation(ctx, input, current)
-    if (result.created)
-      setSessionCookie(req, res, signSession(result.created, ctx.config.jwtSecret))
+    if (result.created) await startSession(ctx, res, result.created)
     const user = current ?? toPublicUser(result.created!)
     res.status(result.created ? 201 : 200).json({
       user,
@@ -58,14 +51,14 @@ function publicRoutes(ctx: AppContext): Router {
   return router
 }
 
-function teacherRoutes(ctx: AppContext): Router {
+function teacherRoutes(ctx: AppContext, inviteLimit: ReturnType<typeof mailLimit>): Router {
   const router = Router()
   router.use(requireAuth(ctx), requireRole('teacher'))
   router.get('/', async (req, res) => {
     const query = parse(InvitationListQuerySchema, req, 'query')
     res.json({ invitations: await listInvitations(ctx, req.user!.id, query) })
   })
-  router.post('/:id/resend', async (req, res) => {
+  router.post('/:id/resend', inviteLimit, async (req, res) => {
     const { id } = parse(InvitationIdParamsSchema, req, 'params')
     res.json({ invitation: await resendInvitation(ctx, req.user!.id, id) })
   })
@@ -78,10 +71,12 @@ function teacherRoutes(ctx: AppContext): Router {
 
 /** Mount before the studios: the invite route lives under a studio's path. */
 export function mountInvitations(api: Router, ctx: AppContext) {
+  const inviteLimit = mailLimit(ctx, 'invitation')
   api.post(
     '/studio/studios/:id/invitations',
     requireAuth(ctx),
     requireRole('teacher'),
+    inviteLimit,
     async (req, res) => {
       const { params, body } = parseRequest(req, {
         params: StudioIdParamsSchema,
@@ -91,6 +86,6 @@ export function mountInvitations(api: Router, ctx: AppContext) {
       res.status(result.resent ? 200 : 201).json(result)
     },
   )
-  api.use('/studio/invitations', teacherRoutes(ctx))
+  api.use('/studio/invitations', teacherRoutes(ctx, inviteLimit))
   api.use('/invitations', publicRoutes(ctx))
 }

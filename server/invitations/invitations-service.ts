@@ -55,12 +55,8 @@ export async function invite(ctx: AppContext, teacherId: string, studioId: strin
       email: ['Already a member of this studio.'],
     })
   }
-  const existing = await findUserByEmail(ctx.db, email)
-  if (existing && existing.role !== 'student') {
-    throw conflict('That address belongs to a teacher or admin account.', {
-      email: ['Invite a student account.'],
-    })
-  }
+  // Any address gets the same answer (no hint that it is a teacher's or admin's): a non-student
+  // account is refused when the invitation is accepted.
   const open = await findOpenInvitation(ctx.db, studioId, email)
   if (open) return { invitation: await resendInvitation(ctx, teacherId, open.id), resent: true }
   const { token, tokenHash, expiresAt } = newToken()

@@ -2,6 +2,7 @@
 import type { Request } from 'express'
 import type { z } from 'zod'
 import { badRequest, fieldErrors, type FieldErrors } from './errors'
+import { nulFieldErrors } from './text-guard'
 
 type Part = 'params' | 'query' | 'body'
 
@@ -11,6 +12,12 @@ function parsePart<S extends z.ZodType>(
   part: Part,
   fields: FieldErrors,
 ) {
+  // Bodies parsed after the API-wide guard (multipart fields) are checked here too.
+  const nul = nulFieldErrors(value, part === 'body' ? undefined : part)
+  if (Object.keys(nul).length) {
+    Object.assign(fields, nul)
+    return undefined
+  }
   const result = schema.safeParse(value ?? {})
   if (result.success) return result.data as z.infer<S>
   Object.assign(fields, fieldErrors(result.error, part === 'body' ? undefined : part))

@@ -1,8 +1,9 @@
 // /api/plans: teachers' plans (CRUD, copy, assign), the starter library, a student's assigned plans,
 // and the plan item a drill view opens (/practice/<drill>?planItem=<id>).
-import { Router } from 'express'
+import { Router, type Request } from 'express'
 import { requireAuth, requireRole } from '../auth/auth-middleware'
 import type { AppContext } from '../context'
+import { mailLimit } from '../lib/rate-limits'
 import { parse, parseRequest } from '../lib/validate'
 import { assignmentsOfStudent } from './assigned-plans'
 import { AssignSchema, PlanCreateSchema, PlanUpdateSchema } from '../../src/contract/plans'
@@ -27,7 +28,9 @@ export function planRoutes(ctx: AppContext): Router {
     const { id } = parse(PlanItemIdParamsSchema, req, 'params')
     res.json(await plans.planItemContext(ctx, req.user!, id))
   })
-  router.post('/', teacher, async (req, res) => {
+  const assigning = (req: Request) =>
+    Array.isArray(req.body?.studentIds) && req.body.studentIds.length > 0
+  router.post('/', teacher, mailLimit(ctx, 'assignment', assigning), async (req, res) => {
     res
       .status(201)
       .json({ plan: await plans.createPlan(ctx, req.user!, parse(PlanCreateSchema, req)) })
@@ -51,7 +54,7 @@ export function planRoutes(ctx: AppContext): Router {
     const { id } = parse(PlanIdParamsSchema, req, 'params')
     res.status(201).json({ plan: await plans.copyPlan(ctx, req.user!.id, id) })
   })
-  router.post('/:id/assignments', teacher, async (req, res) => {
+  router.post('/:id/assignments', teacher, mailLimit(ctx, 'assignment'), async (req, res) => {
     const { params, body } = parseRequest(req, { params: PlanIdParamsSchema, body: AssignSchema })
     res.json({ plan: await plans.assignPlan(ctx, req.user!, params.id, body.studentIds) })
   })

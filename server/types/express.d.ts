@@ -5,6 +5,8 @@ declare global {
   namespace Express {
     interface Request {
       user?: PublicUser
+      /** The server-side session the request's cookie names (set by requireAuth). */
+      sessionId?: string
     }
   }
 }

@@ -1,24 +1,26 @@
 // Users table access: the only place that knows its columns.
 import type { Db } from '../lib/db'
-import type { PublicUser, Role, UserListQuery } from './users-schema'
+import type { AdminUser, PublicUser, Role, UserListQuery } from './users-schema'
 
 export interface UserRecord extends PublicUser {
   passwordHash: string
   passwordChangedAt: Date
+  disabledAt: Date | null
 }
 
-interface UserRow {
+export interface UserRow {
   id: string
   email: string
   name: string
   role: Role
   password_hash: string
   password_changed_at: Date
+  disabled_at: Date | null
   created_at: Date
   updated_at: Date
 }
 
-const toRecord = (row: UserRow): UserRecord => ({
+export const toRecord = (row: UserRow): UserRecord => ({
   id: row.id,
   email: row.email,
   name: row.name,
@@ -26,6 +28,7 @@ const toRecord = (row: UserRow): UserRecord => ({
   createdAt: row.created_at.toISOString(),
   passwordHash: row.password_hash,
   passwordChangedAt: row.password_changed_at,
+  disabledAt: row.disabled_at,
 })
 
 /** Strips the secret fields before a user leaves the server. */
@@ -74,10 +77,29 @@ export async function updatePassword(db: Db, id: string, passwordHash: string): 
   return (row as UserRow).password_changed_at
 }
 
+/** What an admin sees of an account: the public fields and whether it is disabled. */
+export const toAdminUser = (user: UserRecord): AdminUser => ({
+  ...toPublicUser(user),
+  disabledAt: user.disabledAt ? user.disabledAt.toISOString() : null,
+})
+
 export async function updateRole(db: Db, id: string, role: Role): Promise<UserRecord | null> {
   const [row] = await db<UserRow>('users')
     .where({ id })
     .update({ role, updated_at: new Date() })
+    .returning('*')
+  return row ? toRecord(row) : null
+}
+
+/** Disables (sign-in refused) or re-enables an account. */
+export async function updateDisabled(
+  db: Db,
+  id: string,
+  disabled: boolean,
+): Promise<UserRecord | null> {
+  const [row] = await db<UserRow>('users')
+    .where({ id })
+    .update({ disabled_at: disabled ? db.fn.now() : null, updated_at: new Date() })
     .returning('*')
   return row ? toRecord(row) : null
 }
@@ -97,5 +119,5 @@ export async function listUsers(db: Db, query: UserListQuery) {
     .orderBy('id')
     .limit(query.pageSize)
     .offset((query.page - 1) * query.pageSize)
-  return { total: Number(count), items: rows.map((r) => toPublicUser(toRecord(r))) }
+  return { total: Number(count), items: rows.map((r) => toAdminUser(toRecord(r))) }
 }

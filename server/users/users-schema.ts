@@ -3,7 +3,15 @@
 import { z } from 'zod'
 import { RoleSchema } from '../../src/contract/users'
 
-export { ROLES, RoleSchema, type PublicUser, type Role } from '../../src/contract/users'
+export {
+  ROLES,
+  RoleSchema,
+  UserChangeSchema,
+  type AdminUser,
+  type PublicUser,
+  type Role,
+  type UserChange,
+} from '../../src/contract/users'
 
 export const EmailSchema = z
   .string()
@@ -33,4 +41,3 @@ export const UserListQuerySchema = z.object({
 })
 export type UserListQuery = z.infer<typeof UserListQuerySchema>
 
-export const RoleChangeSchema = z.object({ role: RoleSchema })

@@ -1,9 +1,9 @@
 // /api/admin endpoints.
 import type { MailMessage, MailSummary } from '../contract/mail-log'
-import type { PublicUser, Role } from '../contract/users'
+import type { AdminUser, Role, UserChange } from '../contract/users'
 import { http } from './http'
 
-export type { MailMessage, MailSummary }
+export type { AdminUser, MailMessage, MailSummary, UserChange }
 
 export interface Page<T> {
   total: number
@@ -18,9 +18,10 @@ export interface PageQuery {
 }
 
 export const listUsers = (query: PageQuery & { role?: Role }) =>
-  http.get<Page<PublicUser>>('/admin/users', { query })
-export const changeRole = (id: string, role: Role) =>
-  http.patch<{ user: PublicUser }>(`/admin/users/${id}`, { role })
+  http.get<Page<AdminUser>>('/admin/users', { query })
+/** Changes an account's role or disables / enables it; the account's sessions end either way. */
+export const changeUser = (id: string, change: UserChange) =>
+  http.patch<{ user: AdminUser }>(`/admin/users/${id}`, change)
 export const listMail = (query: PageQuery) => http.get<Page<MailSummary>>('/admin/mail', { query })
 export const fetchMail = (id: number) => http.get<{ message: MailMessage }>(`/admin/mail/${id}`)
 export const sendDigestsNow = () => http.post<{ sent: number }>('/admin/digests/send')

@@ -17,6 +17,8 @@ export const login = (email: string, password: string) =>
 export const register = (body: RegisterBody) =>
   http.post<{ user: PublicUser }>('/auth/register', body)
 export const logout = () => http.post<void>('/auth/logout')
+/** Ends every session of the signed-in user, on every device (this one too). */
+export const logoutEverywhere = () => http.post<void>('/auth/logout-everywhere')
 export const changePassword = (currentPassword: string, newPassword: string) =>
   http.post<void>('/auth/password', { currentPassword, newPassword })
 export const requestPasswordReset = (email: string) =>

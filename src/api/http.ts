@@ -1,5 +1,11 @@
 // The only place that calls fetch: JSON in and out, same-origin cookies, errors as ApiError.
 
+/**
+ * Sent with every request: the server refuses state-changing requests without it (anti-CSRF; a
+ * form or script on another site cannot add it). Multipart uploads go through here too.
+ */
+export const CSRF_HEADERS = { 'X-Requested-With': 'ambitus' } as const
+
 export type FieldErrors = Record<string, string[]>
 
 /** An error answered by the API ({ error: { code, message, fields? } }) or a network failure. */
@@ -60,7 +66,7 @@ export async function request<T>(
   const init: RequestInit = {
     method,
     credentials: 'same-origin',
-    headers: { accept: 'application/json' },
+    headers: { accept: 'application/json', ...CSRF_HEADERS },
   }
   if (options.body instanceof FormData) init.body = options.body
   else if (options.body !== undefined) {

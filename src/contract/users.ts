@@ -1,4 +1,4 @@
-// Who a user is to the other side: the three roles and a user as the API returns it.
+// Who a user is to the other side: the three roles, a user as the API returns it, an admin's change.
 import { z } from 'zod'
 
 export const ROLES = ['student', 'teacher', 'admin'] as const
@@ -13,3 +13,14 @@ export interface PublicUser {
   role: Role
   createdAt: string
 }
+
+/** A user as the admin list shows it. */
+export interface AdminUser extends PublicUser {
+  disabledAt: string | null
+}
+
+/** An admin's change to an account: its role, and/or disabling or enabling it. */
+export const UserChangeSchema = z
+  .strictObject({ role: RoleSchema.optional(), disabled: z.boolean().optional() })
+  .refine((c) => c.role !== undefined || c.disabled !== undefined, 'Send a role or disabled.')
+export type UserChange = z.infer<typeof UserChangeSchema>

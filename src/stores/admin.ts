@@ -3,10 +3,10 @@ import { defineStore } from 'pinia'
 import { ref } from 'vue'
 import * as adminApi from '../api/admin'
 import { useLoadState } from './load-state'
-import type { PublicUser, Role } from '../contract/users'
+import type { AdminUser, UserChange } from '../contract/users'
 
 export const useAdminStore = defineStore('admin', () => {
-  const users = ref<PublicUser[]>([])
+  const users = ref<AdminUser[]>([])
   const userTotal = ref(0)
   const mail = ref<adminApi.MailSummary[]>([])
   const mailTotal = ref(0)
@@ -20,9 +20,10 @@ export const useAdminStore = defineStore('admin', () => {
       userTotal.value = page.total
     })
 
-  const setRole = (id: string, role: Role) =>
+  /** Applies a confirmed change (role, or disabled); the server ends that account's sessions. */
+  const changeUser = (id: string, change: UserChange) =>
     track(async () => {
-      const { user } = await adminApi.changeRole(id, role)
+      const { user } = await adminApi.changeUser(id, change)
       users.value = users.value.map((u) => (u.id === id ? user : u))
     })
 
@@ -50,7 +51,7 @@ export const useAdminStore = defineStore('admin', () => {
     isLoading,
     error,
     loadUsers,
-    setRole,
+    changeUser,
     loadMail,
     openMail,
     sendDigests,

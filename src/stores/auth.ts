@@ -50,6 +50,13 @@ export const useAuthStore = defineStore('auth', () => {
       user.value = null
     })
 
+  /** Ends every session of this account (all devices, this one included). */
+  const signOutEverywhere = () =>
+    track(async () => {
+      await authApi.logoutEverywhere()
+      user.value = null
+    })
+
   /** Forgets the user locally (the server already ended the session). */
   function expire() {
     user.value = null
@@ -70,6 +77,7 @@ export const useAuthStore = defineStore('auth', () => {
     signIn,
     register,
     signOut,
+    signOutEverywhere,
     expire,
     hasRole,
   }

@@ -106,6 +106,7 @@ describe('progress page', () => {
     const email = `newcomer-${Date.now()}@example.test`
     const res = await page.request.post('/api/auth/register', {
       data: { email, password: 'a long enough password', name: 'Newcomer', role: 'student' },
+      headers: { 'X-Requested-With': 'ambitus' }, // as the app's client sends (anti-CSRF)
     })
     expect(res.status()).toBe(201)
     await page.goto('/progress')

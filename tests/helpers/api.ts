@@ -3,7 +3,7 @@ import { randomBytes, randomUUID } from 'node:crypto'
 import path from 'node:path'
 import { TEST_OUTPUT_DIR } from '../../scripts/lib/paths.mjs'
 import request from 'supertest'
-import type { Express } from 'express'
+import express, { type Express } from 'express'
 import { createApp } from '../../server/app'
 import { loadConfig, type Config } from '../../server/config'
 import type { AppContext } from '../../server/context'
@@ -13,7 +13,9 @@ import { createMailer } from '../../server/lib/mail'
 import { startMailSink, type MailSink } from '../../server/mail-sink/mail-sink'
 import { latestMailTo } from '../../server/admin/mail-log-repository'
 import { hashPassword } from '../../server/auth/password'
-import { SESSION_COOKIE, signSession } from '../../server/auth/session-token'
+import { sessionCookieName } from '../../server/auth/session-token'
+import { issueSessionToken } from '../../server/auth/sessions'
+import { CSRF_HEADER, CSRF_VALUE } from '../../server/lib/csrf'
 import { insertUser, toPublicUser } from '../../server/users/users-repository'
 
 export const TEST_PASSWORD = 'correct horse battery'
@@ -21,7 +23,10 @@ export const TEST_PASSWORD = 'correct horse battery'
 const TEST_JWT_SECRET = randomBytes(32).toString('hex')
 
 export interface TestApi {
+  /** The app as our client calls it: like src/api/http.ts, every request carries the CSRF header. */
   app: Express
+  /** The app with nothing added to requests (for the tests of the CSRF check itself). */
+  bareApp: Express
   ctx: AppContext
   sink: MailSink
   close(): Promise<void>
@@ -37,6 +42,8 @@ export async function startTestApi(
     clientDist: '/nonexistent',
     dataDir: path.join(TEST_OUTPUT_DIR, 'api-data'), // recordings uploaded by tests stay out of .data
     jwtSecret: TEST_JWT_SECRET,
+    // Test files share one database: each app counts its rate limits apart, like its own installation.
+    rateLimitScope: `${randomUUID()}:`,
     ...overrides,
   })
   const db = createDb(base.databaseUrl)
@@ -47,10 +54,13 @@ export async function startTestApi(
     ? createLogger('info', { write: (line: string) => void logLines.push(line) })
     : createLogger('silent')
   const ctx: AppContext = { config, db, mailer, logger }
-  const app = createApp(ctx)
+  const bareApp = createApp(ctx)
+  const app = asOurClient(bareApp)
   contexts.set(app, ctx)
+  contexts.set(bareApp, ctx)
   return {
     app,
+    bareApp,
     ctx,
     sink,
     async close() {
@@ -59,6 +69,18 @@ export async function startTestApi(
       await db.destroy()
     },
   }
+}
+
+/** Wraps the app so each request carries the anti-CSRF header our client always sends. */
+function asOurClient(app: Express): Express {
+  const client = express()
+  client.disable('x-powered-by')
+  client.use((req, _res, next) => {
+    req.headers[CSRF_HEADER.toLowerCase()] ??= CSRF_VALUE
+    next()
+  })
+  client.use(app)
+  return client
 }
 
 /** A fresh, unique e-mail so tests never collide. */
@@ -71,7 +93,7 @@ const contexts = new WeakMap<Express, AppContext>()
 
 /**
  * A new account and a cookie-keeping agent signed in as it. The account is written straight to the
- * database and its session cookie minted with the app's own key (auth.test.ts covers the register and
+ * database and its session (row and cookie) made with the app's own code (auth.test.ts covers the register and
  * sign-in routes themselves); everything after that goes through the real middleware.
  */
 export async function signedInAgent(
@@ -90,7 +112,8 @@ export async function signedInAgent(
     passwordHash: await testPasswordHash,
   })
   const agent = request.agent(app)
-  const cookie = `${SESSION_COOKIE}=${signSession(record, ctx.config.jwtSecret)}; Path=/; HttpOnly`
+  const token = await issueSessionToken(ctx, record.id)
+  const cookie = `${sessionCookieName(ctx.config)}=${token}; Path=/; HttpOnly`
   agent.jar.setCookies([cookie], '127.0.0.1', '/')
   const user = toPublicUser(record)
   return { agent, email, user: user as { id: string; email: string; role: string } }
@@ -99,6 +122,13 @@ export async function signedInAgent(
 /** Promotes an account to admin directly in the database (no API creates admins). */
 export async function makeAdmin(ctx: AppContext, userId: string) {
   await ctx.db('users').where({ id: userId }).update({ role: 'admin' })
+}
+
+/** A signed-in admin: a new account promoted in the database (sessions read the role per request). */
+export async function signedInAdmin(app: Express, name = 'Test Admin') {
+  const admin = await signedInAgent(app, 'teacher', name)
+  await makeAdmin(contexts.get(app)!, admin.user.id)
+  return { ...admin, user: { ...admin.user, role: 'admin' } }
 }
 
 /** Waits for the newest mail to an address to arrive in the sink. */

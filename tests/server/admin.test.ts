@@ -1,7 +1,13 @@
 // Admin routes: users and the mail log; health.
 import request from 'supertest'
 import { afterAll, beforeAll, expect, it } from 'vitest'
-import { makeAdmin, signedInAgent, startTestApi, type TestApi } from '../helpers/api'
+import {
+  signedInAdmin,
+  signedInAgent,
+  startTestApi,
+  TEST_PASSWORD,
+  type TestApi,
+} from '../helpers/api'
 
 let api: TestApi
 beforeAll(async () => {
@@ -16,8 +22,7 @@ it('when the database is up, then /api/health reports it', async () => {
 })
 
 it('when an admin lists users with a search, then only matches come back, paged', async () => {
-  const admin = await signedInAgent(api.app, 'teacher', 'Admin Person')
-  await makeAdmin(api.ctx, admin.user.id)
+  const admin = await signedInAdmin(api.app, 'Admin Person')
   const target = await signedInAgent(api.app, 'student', 'Zebulon Quartz')
   const res = await admin.agent
     .get('/api/admin/users')
@@ -28,20 +33,22 @@ it('when an admin lists users with a search, then only matches come back, paged'
 })
 
 it('when an admin changes a role, then it sticks; an invalid role or id is a 400', async () => {
-  const admin = await signedInAgent(api.app, 'teacher')
-  await makeAdmin(api.ctx, admin.user.id)
+  const admin = await signedInAdmin(api.app)
   const target = await signedInAgent(api.app, 'student')
   const ok = await admin.agent.patch(`/api/admin/users/${target.user.id}`).send({ role: 'teacher' })
   expect(ok.status).toBe(200)
-  expect((await target.agent.get('/api/auth/me')).body.user.role).toBe('teacher')
+  expect(ok.body.user).toMatchObject({ id: target.user.id, role: 'teacher', disabledAt: null })
+  const signIn = await request(api.app)
+    .post('/api/auth/login')
+    .send({ email: target.email, password: TEST_PASSWORD })
+  expect(signIn.body.user.role).toBe('teacher')
   const bad = await admin.agent.patch('/api/admin/users/not-a-uuid').send({ role: 'wizard' })
   expect(bad.status).toBe(400)
   expect(Object.keys(bad.body.error.fields).sort()).toEqual(['params.id', 'role'])
 })
 
-it('when mail has been sent, then the admin mail log lists and opens it', async () => {
-  const admin = await signedInAgent(api.app, 'teacher')
-  await makeAdmin(api.ctx, admin.user.id)
+it('when mail has been sent, then the admin mail log lists and opens it, its link hidden', async () => {
+  const admin = await signedInAdmin(api.app)
   const someone = await signedInAgent(api.app)
   await request(api.app).post('/api/auth/password-reset').send({ email: someone.email })
   let listed: { items: { id: number; subject: string }[] } = { items: [] }
@@ -51,6 +58,7 @@ it('when mail has been sent, then the admin mail log lists and opens it', async 
   }
   expect(listed.items).toHaveLength(1)
   const open = await admin.agent.get(`/api/admin/mail/${listed.items[0]!.id}`)
-  expect(open.body.message.text).toContain('/reset-password?token=')
+  expect(open.body.message.text).toContain('[link to /reset-password (hidden)]')
+  expect(open.body.message.text).not.toContain('token=')
   expect((await admin.agent.get('/api/admin/mail/999999999')).status).toBe(404)
 })
