@@ -43,9 +43,10 @@ export function specifiersOf(text: string): string[] {
 }
 
 function resolve(from: string, specifier: string): string | null {
-  const base = specifier.startsWith('@/')
-    ? path.join('src', specifier.slice(2))
-    : path.join(path.dirname(from), specifier)
+  const bare = specifier.replace(/\?.*$/, '') // Vite's query suffixes (?worker&url, ?raw)
+  const base = bare.startsWith('@/')
+    ? path.join('src', bare.slice(2))
+    : path.join(path.dirname(from), bare)
   for (const ext of EXTENSIONS) {
     const candidate = `${base}${ext}`
     if (existsSync(path.join(ROOT, candidate)) && statSync(path.join(ROOT, candidate)).isFile())
