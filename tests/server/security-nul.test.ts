@@ -118,7 +118,7 @@ describe('NUL in text', () => {
 
   it('when a multipart field holds NUL, then 400 on that field', async () => {
     const res = await student.agent
-      .post('/api/recordings')
+      .post(`/api/assignments/${randomUUID()}/recordings`)
       .field('planItemId', `x${NUL}`)
       .attach('file', Buffer.from('RIFF'), 'take.wav')
     expect(res.status).toBe(400)
