@@ -1,12 +1,14 @@
 // The attempts recorder: drills call record() for every graded answer; answers wait in a queue kept in
-// localStorage (per player) and go to POST /api/attempts in batches — every few seconds, at 20
-// answers, on flush() and when the page is hidden. Network and server errors are retried with
-// exponential back-off; answers the server refuses (400) are dropped with a visible error, so one
-// bad answer never blocks the rest. The server ignores ids it already has, so re-sending is safe.
+// IndexedDB (per player, attempt-queue.ts) and go to POST /api/attempts in batches — every few
+// seconds, at 20 answers, on flush(), when the page is hidden and when the network comes back.
+// Network and server errors are retried with exponential back-off; answers the server refuses (400)
+// are dropped with a visible error, so one bad answer never blocks the rest. The server ignores ids
+// it already has, so re-sending (another tab, a lost reply) is safe.
 import { defineStore } from 'pinia'
 import { computed, ref, watch } from 'vue'
 import { postAttempts, type AttemptInput } from '../api/attempts'
 import { ApiError } from '../api/http'
+import { loadAttempts, removeAttempts, saveAttempts } from './attempt-queue'
 import { useAuthStore } from './auth'
 
 export const FLUSH_DELAY_MS = 3000
@@ -15,17 +17,13 @@ export const BATCH_SIZE = 20
 export const MAX_BATCH = 200
 export const RETRY_BASE_MS = 1000
 export const RETRY_MAX_MS = 60_000
-const STORAGE_PREFIX = 'ambitus.attempts.v1.'
 
-const storageKey = (userId: string | null) => `${STORAGE_PREFIX}${userId ?? 'signed-out'}`
+const queueOwner = (userId: string | null) => userId ?? 'signed-out'
 
-function load(userId: string | null): AttemptInput[] {
-  try {
-    const stored = JSON.parse(localStorage.getItem(storageKey(userId)) ?? '[]') as unknown
-    return Array.isArray(stored) ? (stored as AttemptInput[]) : []
-  } catch {
-    return []
-  }
+/** The stored queue, then answers recorded while it loaded (each id once). */
+function merged(stored: AttemptInput[], recorded: AttemptInput[]) {
+  const ids = new Set(stored.map((a) => a.id))
+  return [...stored, ...recorded.filter((a) => !ids.has(a.id))]
 }
 
 /** Indices of the attempts a 400 names ("attempts.3.fret"); empty when the whole batch was refused. */
@@ -48,19 +46,20 @@ const localTimeZone = () => {
   }
 }
 
-// One pair of page listeners for the app's one recorder (the latest store created).
-let flushOnHide: (() => Promise<void>) | null = null
+// One set of page listeners for the app's one recorder (the latest store created).
+let flushNow: (() => Promise<void>) | null = null
 if (typeof document !== 'undefined') {
   document.addEventListener('visibilitychange', () => {
-    if (document.visibilityState === 'hidden') void flushOnHide?.()
+    if (document.visibilityState === 'hidden') void flushNow?.()
   })
-  window.addEventListener('pagehide', () => void flushOnHide?.())
+  window.addEventListener('pagehide', () => void flushNow?.())
+  window.addEventListener('online', () => void flushNow?.())
 }
 
 export const useAttemptsStore = defineStore('attempts', () => {
   const auth = useAuthStore()
   const owner = ref<string | null>(auth.user?.id ?? null)
-  const queue = ref<AttemptInput[]>(load(owner.value))
+  const queue = ref<AttemptInput[]>([])
   const isSending = ref(false)
   const lastError = ref<ApiError | null>(null)
   /** Answers the server refused and that were dropped (shown with lastError). */
@@ -72,13 +71,26 @@ export const useAttemptsStore = defineStore('attempts', () => {
   let retryTimer: ReturnType<typeof setTimeout> | undefined
   let failures = 0
   let inFlight: Promise<void> | null = null
+  // IndexedDB writes run one after another, in the order the queue changed.
+  let writes: Promise<void> = Promise.resolve()
+  let loading = load(owner.value)
+  // Answers left from an earlier visit (e.g. practised offline) go out as soon as they are loaded.
+  void loading.then((stored) => {
+    if (stored && owner.value) void flush()
+  })
 
-  function persist() {
-    try {
-      localStorage.setItem(storageKey(owner.value), JSON.stringify(queue.value))
-    } catch {
-      // Storage full or blocked: the answers stay in memory and are still sent.
-    }
+  function store(work: () => Promise<void>) {
+    // Blocked or full storage: the answers stay in memory and are still sent.
+    writes = writes.then(work).catch(() => undefined)
+  }
+
+  /** Loads a player's stored queue into memory; resolves to how many came from an earlier visit. */
+  async function load(userId: string | null) {
+    const stored = await loadAttempts(queueOwner(userId)).catch(() => [])
+    if (userId !== owner.value) return 0
+    const recordedNow = new Set(queue.value.map((a) => a.id))
+    queue.value = merged(stored, queue.value)
+    return stored.filter((a) => !recordedNow.has(a.id)).length
   }
 
   function schedule(delayMs: number) {
@@ -89,7 +101,8 @@ export const useAttemptsStore = defineStore('attempts', () => {
   /** Queues one graded answer (the caller sets id with crypto.randomUUID() and createdAt). */
   function record(attempt: AttemptInput) {
     queue.value = [...queue.value, attempt]
-    persist()
+    const who = queueOwner(owner.value)
+    store(() => saveAttempts(who, [attempt]))
     if (retryTimer || inFlight) return // the back-off or the send under way will take it
     if (queue.value.length >= BATCH_SIZE) void flush()
     else schedule(FLUSH_DELAY_MS)
@@ -98,7 +111,7 @@ export const useAttemptsStore = defineStore('attempts', () => {
   function remove(sent: AttemptInput[]) {
     const ids = new Set(sent.map((a) => a.id))
     queue.value = queue.value.filter((a) => !ids.has(a.id))
-    persist()
+    store(() => removeAttempts([...ids]))
   }
 
   function dropRefused(batch: AttemptInput[], error: ApiError) {
@@ -153,8 +166,9 @@ export const useAttemptsStore = defineStore('attempts', () => {
   }
 
   async function drain() {
-    isSending.value = true
     try {
+      await loading
+      isSending.value = true
       while (queue.value.length && (await sendOne()));
     } finally {
       isSending.value = false
@@ -162,15 +176,18 @@ export const useAttemptsStore = defineStore('attempts', () => {
     }
   }
 
-  /** Sends everything queued now (waits for a send already under way); resolves when done or failed. */
-  function flush(): Promise<void> {
+  /**
+   * Sends everything queued now (waits for a send already under way); resolves when done or failed,
+   * with the stored queue up to date.
+   */
+  async function flush(): Promise<void> {
     clearTimeout(flushTimer)
     if (retryTimer) {
       clearTimeout(retryTimer)
       retryTimer = undefined
     }
-    if (!inFlight && queue.value.length) inFlight = drain()
-    return inFlight ?? Promise.resolve()
+    await (inFlight ??= drain())
+    await writes
   }
 
   function clearError() {
@@ -185,12 +202,15 @@ export const useAttemptsStore = defineStore('attempts', () => {
     (id) => {
       if (id === owner.value) return
       owner.value = id
-      queue.value = load(id)
-      if (id && queue.value.length) void flush()
+      queue.value = []
+      loading = load(id)
+      void loading.then((stored) => {
+        if (stored && id) void flush()
+      })
     },
   )
 
-  flushOnHide = flush
+  flushNow = flush
 
   return { queue, pending, isSending, lastError, dropped, record, flush, clearError }
 })
