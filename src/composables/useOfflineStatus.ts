@@ -7,10 +7,13 @@ import { computed, onBeforeUnmount, onMounted, ref, watchEffect, type WatchHandl
 
 const plural = (n: number) => (n === 1 ? '1 answer' : `${n} answers`)
 
-/** The words for the connection state; null when there is nothing to say. */
+/** The words for the connection state (and a short form for phones); null when all is well. */
 export function offlineMessage(online: boolean, waiting: number, unreachable: boolean) {
-  if (!online) return waiting ? `Offline — ${plural(waiting)} waiting` : 'Offline'
-  if (unreachable && waiting) return `${plural(waiting)} waiting to be sent`
+  if (!online && !waiting) return { long: 'Offline', short: 'Offline' }
+  if (!online)
+    return { long: `Offline — ${plural(waiting)} waiting`, short: `Offline · ${waiting}` }
+  if (unreachable && waiting)
+    return { long: `${plural(waiting)} waiting to be sent`, short: `${waiting} waiting` }
   return null
 }
 

@@ -54,15 +54,20 @@ afterEach(() => {
 
 describe('connection note in the app bar', () => {
   it.each([
-    [true, 0, false, null],
-    [true, 3, false, null],
-    [false, 0, false, 'Offline'],
-    [false, 1, false, 'Offline — 1 answer waiting'],
-    [false, 12, false, 'Offline — 12 answers waiting'],
-    [true, 4, true, '4 answers waiting to be sent'],
-  ])('online=%s, %i waiting, unreachable=%s → %s', (isOnline, waiting, unreachable, words) => {
-    expect(offlineMessage(isOnline, waiting, unreachable)).toBe(words)
-  })
+    [true, 0, false, null, null],
+    [true, 3, false, null, null],
+    [false, 0, false, 'Offline', 'Offline'],
+    [false, 1, false, 'Offline — 1 answer waiting', 'Offline · 1'],
+    [false, 12, false, 'Offline — 12 answers waiting', 'Offline · 12'],
+    [true, 4, true, '4 answers waiting to be sent', '4 waiting'],
+  ])(
+    'online=%s, %i waiting, unreachable=%s → %s',
+    (isOnline, waiting, unreachable, long, short) => {
+      const words = offlineMessage(isOnline, waiting, unreachable)
+      expect(words?.long ?? null).toBe(long)
+      expect(words?.short ?? null).toBe(short)
+    },
+  )
 
   it('when the browser goes offline and answers are recorded, then it says how many wait, and goes quiet once they are sent', async () => {
     vi.stubGlobal(
@@ -74,12 +79,14 @@ describe('connection note in the app bar', () => {
 
     goOffline(true)
     await flushPromises()
-    expect(status().text()).toBe('Offline')
+    expect(status().find('.d-sm-inline').text()).toBe('Offline')
     const attempts = useAttemptsStore()
     attempts.record(answer(1))
     attempts.record(answer(2))
     // the composable loads the store on its own, after mounting
-    await vi.waitFor(() => expect(status().text()).toBe('Offline — 2 answers waiting'))
+    await vi.waitFor(() =>
+      expect(status().find('.d-sm-inline').text()).toBe('Offline — 2 answers waiting'),
+    )
     expect(status().attributes('data-waiting')).toBe('2')
 
     const sent = vi.fn(async (_url: string, init: RequestInit) => {
