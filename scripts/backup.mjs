@@ -10,6 +10,7 @@ import {
   formatBytes,
   keepCount,
   rotate,
+  runWithCluster,
   shown,
 } from './lib/backups.mjs'
 
@@ -31,15 +32,5 @@ export async function backup(argv = []) {
 }
 
 if (import.meta.url === pathToFileURL(process.argv[1] ?? '').href) {
-  const db = await import('./db.mjs')
-  let startedDb = false
-  try {
-    startedDb = await db.startCluster()
-    await backup(process.argv.slice(2))
-  } catch (error) {
-    console.error(`[backup] ${error.message}`)
-    process.exitCode = 1
-  } finally {
-    if (startedDb) db.stopCluster()
-  }
+  await runWithCluster('backup', () => backup(process.argv.slice(2)))
 }

@@ -98,16 +98,8 @@ export async function restore(argv) {
 }
 
 if (import.meta.url === pathToFileURL(process.argv[1] ?? '').href) {
-  const db = await import('./db.mjs')
-  let startedDb = false
-  try {
-    startedDb = await db.startCluster()
+  await backups.runWithCluster('restore', async () => {
     if (!(await restore(process.argv.slice(2))))
       log('restore', 'not confirmed: nothing was changed')
-  } catch (error) {
-    console.error(`[restore] ${error.message}`)
-    process.exitCode = 1
-  } finally {
-    if (startedDb) db.stopCluster()
-  }
+  })
 }

@@ -110,3 +110,18 @@ export function formatBytes(bytes) {
   if (bytes < 1024 ** 2) return `${(bytes / 1024).toFixed(1)} kB`
   return `${(bytes / 1024 ** 2).toFixed(1)} MB`
 }
+
+/** Runs a command-line tool's work with the local cluster up (and stops it after, if it started it). */
+export async function runWithCluster(tag, work) {
+  const db = await import('../db.mjs')
+  let startedDb = false
+  try {
+    startedDb = await db.startCluster()
+    await work()
+  } catch (error) {
+    console.error(`[${tag}] ${error.message}`)
+    process.exitCode = 1
+  } finally {
+    if (startedDb) db.stopCluster()
+  }
+}

@@ -13,6 +13,7 @@ import {
   useAttemptsStore,
 } from '../../src/stores/attempts'
 import { useAuthStore } from '../../src/stores/auth'
+import { attemptInput } from '../helpers/attempt-input'
 
 const NOOR = {
   id: 'player-1',
@@ -21,30 +22,11 @@ const NOOR = {
   role: 'student' as const,
   createdAt: '',
 }
-let sequence = 0
 let players = 0
 /** Noor, with an id of her own in each test: queues of earlier tests never leak in. */
 let PLAYER = NOOR
 
-function attempt(): AttemptInput {
-  sequence += 1
-  return {
-    id: `00000000-0000-4000-8000-${String(sequence).padStart(12, '0')}`,
-    instrumentId: null,
-    tuning: [28, 33, 38, 43],
-    drill: 'recall',
-    sessionId: '00000000-0000-4000-8000-aaaaaaaaaaaa',
-    string: 1,
-    fret: 3,
-    expectedPitch: 36,
-    answer: 'C',
-    correct: true,
-    responseMs: 1200,
-    createdAt: new Date().toISOString(),
-    detail: {},
-    planItemId: null,
-  }
-}
+const attempt = () => attemptInput()
 
 type Reply = 'network' | number | { status: number; body: unknown }
 

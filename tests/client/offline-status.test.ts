@@ -8,6 +8,7 @@ import OfflineStatus from '../../src/components/OfflineStatus.vue'
 import { offlineMessage } from '../../src/composables/useOfflineStatus'
 import { useAttemptsStore } from '../../src/stores/attempts'
 import { useAuthStore } from '../../src/stores/auth'
+import { attemptInput } from '../helpers/attempt-input'
 import { mountWithApp } from '../helpers/mount'
 
 let online = true
@@ -18,22 +19,7 @@ function goOffline(offline: boolean) {
   window.dispatchEvent(new Event(offline ? 'offline' : 'online'))
 }
 
-const answer = (n: number): AttemptInput => ({
-  id: `00000000-0000-4000-8000-${String(n).padStart(12, '0')}`,
-  instrumentId: null,
-  tuning: [28, 33, 38, 43],
-  drill: 'recall',
-  sessionId: '00000000-0000-4000-8000-bbbbbbbbbbbb',
-  string: 0,
-  fret: 1,
-  expectedPitch: 29,
-  answer: 'F',
-  correct: true,
-  responseMs: 900,
-  createdAt: new Date().toISOString(),
-  detail: {},
-  planItemId: null,
-})
+const answer = () => attemptInput()
 
 async function mountStatus(userId: string) {
   const mounted = mountWithApp(OfflineStatus)
@@ -81,8 +67,8 @@ describe('connection note in the app bar', () => {
     await flushPromises()
     expect(status().find('.d-sm-inline').text()).toBe('Offline')
     const attempts = useAttemptsStore()
-    attempts.record(answer(1))
-    attempts.record(answer(2))
+    attempts.record(answer())
+    attempts.record(answer())
     // the composable loads the store on its own, after mounting
     await vi.waitFor(() =>
       expect(status().find('.d-sm-inline').text()).toBe('Offline — 2 answers waiting'),
