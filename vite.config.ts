@@ -65,6 +65,8 @@ export default defineConfig({
           // Pure modules: one module graph for all files saves re-importing tonal per file.
           isolate: false,
           include: ['src/**/*.test.ts', 'tests/unit/**/*.test.ts'],
+          // Property tests (fast-check) take 1–2 s alone and far longer beside the browser tests.
+          testTimeout: 20_000,
         },
       },
       {

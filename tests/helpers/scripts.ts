@@ -2,6 +2,12 @@
 import { runCaptured } from '../../scripts/lib/proc.mjs'
 import { ROOT } from '../../scripts/lib/paths.mjs'
 
+/**
+ * Time allowed for a test that runs several scripts as their own Node processes (each start costs
+ * well under a second on an idle machine, many seconds on two cores shared with other test runs).
+ */
+export const SCRIPT_TIMEOUT = 180_000
+
 /** The test process's environment without its database choice, plus the given variables. */
 export function scriptEnv(vars: Record<string, string>): NodeJS.ProcessEnv {
   const env: NodeJS.ProcessEnv = { ...process.env, ...vars }

@@ -8,7 +8,7 @@ import { afterAll, beforeAll, describe, expect, it } from 'vitest'
 import { createDatabase, dropDatabase } from '../../scripts/db.mjs'
 import { databaseUrl, TEST_API_DATABASE } from '../../scripts/lib/paths.mjs'
 import { prepareDatabase } from '../../scripts/lib/setup.mjs'
-import { runScript, scriptEnv } from '../helpers/scripts'
+import { runScript, SCRIPT_TIMEOUT, scriptEnv } from '../helpers/scripts'
 
 const DATABASE = `${TEST_API_DATABASE}_backup`
 const BACKUPS = mkdtempSync(path.join(os.tmpdir(), 'ambitus-backups-'))
@@ -55,14 +55,14 @@ beforeAll(async () => {
   await dropDatabase(DATABASE)
   await createDatabase(DATABASE)
   await prepareDatabase(DATABASE) // migrated and seeded with the demo studio
-})
+}, SCRIPT_TIMEOUT)
 
 afterAll(async () => {
   await dropDatabase(DATABASE)
   rmSync(BACKUPS, { recursive: true, force: true })
-})
+}, SCRIPT_TIMEOUT)
 
-describe('backup and restore', () => {
+describe('backup and restore', { timeout: SCRIPT_TIMEOUT }, () => {
   it('when a backup is restored after the data changed, then the data is exactly as it was, and what it replaced is kept', async () => {
     const before = await contents()
     expect(before.attempts.length).toBeGreaterThan(100) // the demo history

@@ -17,7 +17,7 @@ import { afterAll, beforeAll, describe, expect, it } from 'vitest'
 import { IS_ROOT } from '../../scripts/lib/cluster-home.mjs'
 import { ROOT } from '../../scripts/lib/paths.mjs'
 import { freePort, runCaptured } from '../../scripts/lib/proc.mjs'
-import { runScript, scriptEnv } from '../helpers/scripts'
+import { runScript, SCRIPT_TIMEOUT, scriptEnv } from '../helpers/scripts'
 
 const PRIVATE = mkdtempSync(path.join(os.tmpdir(), 'ambitus-private-'))
 const CHECKOUT = path.join(PRIVATE, 'ambitus')
@@ -33,14 +33,14 @@ beforeAll(async () => {
   cpSync(path.join(ROOT, 'scripts'), path.join(CHECKOUT, 'scripts'), { recursive: true })
   symlinkSync(path.join(ROOT, 'node_modules'), path.join(CHECKOUT, 'node_modules'))
   env = scriptEnv({ PGPORT: String(await freePort()) })
-})
+}, SCRIPT_TIMEOUT)
 
 afterAll(async () => {
   await db('destroy')
   rmSync(PRIVATE, { recursive: true, force: true })
-})
+}, SCRIPT_TIMEOUT)
 
-describe('a checkout in a private folder', () => {
+describe('a checkout in a private folder', { timeout: SCRIPT_TIMEOUT }, () => {
   it('when its folder is closed to others, then its cluster starts and a migrated database is made from there', async () => {
     expect(statSync(PRIVATE).mode & 0o777).toBe(0o700)
 
