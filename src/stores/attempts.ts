@@ -73,15 +73,20 @@ export const useAttemptsStore = defineStore('attempts', () => {
   let inFlight: Promise<void> | null = null
   // IndexedDB writes run one after another, in the order the queue changed.
   let writes: Promise<void> = Promise.resolve()
-  let loading = load(owner.value)
-  // Answers left from an earlier visit (e.g. practised offline) go out as soon as they are loaded.
-  void loading.then((stored) => {
-    if (stored && owner.value) void flush()
-  })
+  let loading: Promise<number> = startLoading(owner.value)
 
   function store(work: () => Promise<void>) {
     // Blocked or full storage: the answers stay in memory and are still sent.
     writes = writes.then(work).catch(() => undefined)
+  }
+
+  /** Loads a player's queue; answers left from an earlier visit (e.g. offline) go out at once. */
+  function startLoading(userId: string | null) {
+    const loaded = load(userId)
+    void loaded.then((earlier) => {
+      if (earlier && userId) void flush()
+    })
+    return loaded
   }
 
   /** Loads a player's stored queue into memory; resolves to how many came from an earlier visit. */
@@ -203,10 +208,7 @@ export const useAttemptsStore = defineStore('attempts', () => {
       if (id === owner.value) return
       owner.value = id
       queue.value = []
-      loading = load(id)
-      void loading.then((stored) => {
-        if (stored && id) void flush()
-      })
+      loading = startLoading(id)
     },
   )
 
