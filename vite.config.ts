@@ -3,13 +3,50 @@ import { fileURLToPath, URL } from 'node:url'
 import { defineConfig } from 'vitest/config'
 import vue from '@vitejs/plugin-vue'
 import vuetify from 'vite-plugin-vuetify'
+import { VitePWA } from 'vite-plugin-pwa'
 import { databaseUrl, TEST_API_DATABASE } from './scripts/lib/paths.mjs'
 
 const API_PORT = Number(process.env.API_PORT ?? process.env.PORT ?? 3000)
 const alias = { '@': fileURLToPath(new URL('./src', import.meta.url)) }
 
 export default defineConfig({
-  plugins: [vue(), vuetify({ autoImport: true })],
+  plugins: [
+    vue(),
+    vuetify({ autoImport: true }),
+    // Installable and usable offline (production builds; no service worker in `npm run dev`): the
+    // worker is src/service-worker/sw.ts, its precache every built file, font and sampled sound.
+    VitePWA({
+      strategies: 'injectManifest',
+      srcDir: 'src/service-worker',
+      filename: 'sw.ts',
+      injectRegister: 'script-defer',
+      devOptions: { enabled: false },
+      injectManifest: {
+        globPatterns: ['**/*.{js,css,html,svg,png,woff2,mp3}'],
+        globIgnores: ['**/LICENSE*'],
+      },
+      manifest: {
+        name: 'Ambitus — fretboard practice',
+        short_name: 'Ambitus',
+        description: 'Fretboard fluency drills for bass and guitar students and their teachers.',
+        start_url: '/practice',
+        scope: '/',
+        display: 'standalone',
+        background_color: '#F4EBDD',
+        theme_color: '#1E4D6B',
+        icons: [
+          { src: '/icons/icon-192.png', sizes: '192x192', type: 'image/png' },
+          { src: '/icons/icon-512.png', sizes: '512x512', type: 'image/png' },
+          {
+            src: '/icons/maskable-512.png',
+            sizes: '512x512',
+            type: 'image/png',
+            purpose: 'maskable',
+          },
+        ],
+      },
+    }),
+  ],
   resolve: { alias },
   server: {
     host: '127.0.0.1',

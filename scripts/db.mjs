@@ -1,89 +1,52 @@
 #!/usr/bin/env node
-// Project-local PostgreSQL: installs Debian's server when missing, keeps a cluster in .data/pg,
-// listens on 127.0.0.1 only. Usage: node scripts/db.mjs start|stop|status|create <db>|drop <db>
-import { execFileSync } from 'node:child_process'
-import { chownSync, existsSync, mkdirSync, readdirSync, readFileSync, writeFileSync } from 'node:fs'
+// Project-local PostgreSQL: installs Debian's server when missing, keeps this checkout's own cluster
+// (see lib/cluster-home.mjs for where), listens on 127.0.0.1 only.
+// Usage: node scripts/db.mjs start|stop|status|create <db>|drop <db>|url [db]|destroy
+import { chownSync, existsSync, readFileSync, rmSync, writeFileSync } from 'node:fs'
+import net from 'node:net'
 import path from 'node:path'
 import { pathToFileURL } from 'node:url'
-import { DATA_DIR, PG_HOST, PG_PORT, PG_USER, databaseUrl, localSecret } from './lib/paths.mjs'
+import { PG_HOST, PG_PORT, PG_USER, databaseUrl, localSecret } from './lib/paths.mjs'
 import { log } from './lib/proc.mjs'
+import {
+  IS_ROOT,
+  clusterHome,
+  folderBlockingPostgres,
+  postgresIds,
+  prepareSharedHome,
+} from './lib/cluster-home.mjs'
+import { asOwner, ensureInstalled, findBinDir, toolFailure } from './lib/pg-tools.mjs'
 
-export const CLUSTER_DIR = path.join(DATA_DIR, 'pg')
-const LOG_FILE = path.join(DATA_DIR, 'postgres.log')
-const IS_ROOT = process.getuid?.() === 0
-
-function findBinDir() {
-  const base = '/usr/lib/postgresql'
-  if (!existsSync(base)) return null
-  const versions = readdirSync(base).filter((v) => existsSync(path.join(base, v, 'bin', 'initdb')))
-  versions.sort((a, b) => Number(b) - Number(a))
-  return versions.length ? path.join(base, versions[0], 'bin') : null
-}
-
-/** Installs PostgreSQL from Debian's packages when no server binaries are present. */
-export function ensureInstalled() {
-  let bin = findBinDir()
-  if (bin) return bin
-  if (!IS_ROOT)
-    throw new Error('PostgreSQL is not installed; run as root once, or: apt-get install postgresql')
-  log('db', 'installing PostgreSQL from Debian packages (first run only)…')
-  const env = { ...process.env, DEBIAN_FRONTEND: 'noninteractive' }
-  execFileSync('apt-get', ['update', '-qq'], { stdio: 'inherit', env })
-  execFileSync('apt-get', ['install', '-y', '-qq', 'postgresql'], { stdio: 'inherit', env })
-  bin = findBinDir()
-  if (!bin) throw new Error('PostgreSQL install finished but no server binaries were found')
-  return bin
-}
-
-/** Runs a PostgreSQL tool as the cluster owner (the postgres user when we are root). */
-function asOwner(bin, tool, args, options = {}) {
-  const file = path.join(bin, tool)
-  if (!IS_ROOT) return execFileSync(file, args, { stdio: 'pipe', ...options })
-  return execFileSync('runuser', ['-u', 'postgres', '--', file, ...args], {
-    cwd: '/',
-    stdio: 'pipe',
-    ...options,
-  })
-}
+let location = null
+/** This checkout's cluster folders `{ home, cluster, logFile, shared }`, decided on first use. */
+export const clusterLocation = () => (location ??= clusterHome())
 
 function initCluster(bin) {
-  log('db', `creating cluster in ${CLUSTER_DIR}`)
-  mkdirSync(CLUSTER_DIR, { recursive: true, mode: 0o700 })
-  const pwFile = path.join(DATA_DIR, 'initdb-pw')
+  const { home, cluster, shared } = clusterLocation()
+  log('db', `creating cluster in ${cluster}`)
+  if (shared) prepareSharedHome(home)
+  // The password file sits beside the cluster, where its owner can read it.
+  const pwFile = path.join(home, 'initdb-pw')
   writeFileSync(pwFile, localSecret('postgres'), { mode: 0o600 })
-  if (IS_ROOT) {
-    const { uid, gid } = postgresIds()
-    chownSync(CLUSTER_DIR, uid, gid)
-    chownSync(pwFile, uid, gid)
+  if (IS_ROOT) chownSync(pwFile, postgresIds().uid, postgresIds().gid)
+  const args = ['-D', cluster, '-U', PG_USER, '--pwfile', pwFile, '-E', 'UTF8']
+  try {
+    asOwner(bin, 'initdb', [
+      ...args,
+      '--locale=C.UTF-8',
+      '--auth-host=scram-sha-256',
+      '--auth-local=peer',
+    ])
+  } catch (error) {
+    throw toolFailure('initdb could not create the cluster', error)
+  } finally {
+    rmSync(pwFile, { force: true })
   }
-  const args = [
-    '-D',
-    CLUSTER_DIR,
-    '-U',
-    PG_USER,
-    '--pwfile',
-    pwFile,
-    '-E',
-    'UTF8',
-    '--locale=C.UTF-8',
-  ]
-  asOwner(bin, 'initdb', [...args, '--auth-host=scram-sha-256', '--auth-local=peer'])
-  execFileSync('rm', ['-f', pwFile])
-}
-
-function postgresIds() {
-  const line = readFileSync('/etc/passwd', 'utf8')
-    .split('\n')
-    .find((l) => l.startsWith('postgres:'))
-  if (!line)
-    throw new Error('the postgres system user is missing (is the postgresql package installed?)')
-  const [, , uid, gid] = line.split(':')
-  return { uid: Number(uid), gid: Number(gid) }
 }
 
 /** The port the running cluster listens on, or null when it is not running. */
 function runningPort() {
-  const pidFile = path.join(CLUSTER_DIR, 'postmaster.pid')
+  const pidFile = path.join(clusterLocation().cluster, 'postmaster.pid')
   if (!existsSync(pidFile)) return null
   const lines = readFileSync(pidFile, 'utf8').split('\n')
   try {
@@ -94,30 +57,55 @@ function runningPort() {
   return Number(lines[3])
 }
 
+function portTaken(port) {
+  return new Promise((resolve) => {
+    const socket = net.connect({ host: PG_HOST, port })
+    socket.once('connect', () => (socket.destroy(), resolve(true)))
+    socket.once('error', () => resolve(false))
+  })
+}
+
+/** Says plainly why the cluster cannot start, before pg_ctl fails with a terse message. */
+async function checkStartable() {
+  const { cluster } = clusterLocation()
+  const blocking = folderBlockingPostgres(cluster)
+  if (blocking)
+    throw new Error(
+      `the cluster in ${cluster} runs as the postgres user, who cannot enter ${blocking}. ` +
+        `Move the checkout to a folder others can enter, or remove ${cluster} (its data is ` +
+        'lost; back it up first) so that a new cluster is made outside the checkout.',
+    )
+  if (await portTaken(PG_PORT))
+    throw new Error(
+      `port ${PG_PORT} on ${PG_HOST} is already taken (another checkout's cluster?). ` +
+        'Give each checkout its own port, e.g. PGPORT=54330 npm start',
+    )
+}
+
+function tailOfLog(logFile) {
+  if (!existsSync(logFile)) return ''
+  return readFileSync(logFile, 'utf8').trim().split('\n').slice(-8).join('\n')
+}
+
 /** Installs, initialises and starts the cluster; returns true when this call started it. */
 export async function startCluster() {
   if (process.env.DATABASE_URL) return false
-  mkdirSync(DATA_DIR, { recursive: true, mode: 0o755 })
   const bin = ensureInstalled()
-  if (!existsSync(path.join(CLUSTER_DIR, 'PG_VERSION'))) initCluster(bin)
+  const { cluster, logFile } = clusterLocation()
+  if (!existsSync(path.join(cluster, 'PG_VERSION'))) initCluster(bin)
   const port = runningPort()
   if (port === PG_PORT) return false
   if (port !== null) stopCluster()
+  await checkStartable()
   const options = `-p ${PG_PORT} -c listen_addresses=${PG_HOST} -c unix_socket_directories=''`
-  if (IS_ROOT && !existsSync(LOG_FILE)) writeFileSync(LOG_FILE, '')
-  if (IS_ROOT) chownSync(LOG_FILE, postgresIds().uid, postgresIds().gid)
-  asOwner(bin, 'pg_ctl', [
-    'start',
-    '-D',
-    CLUSTER_DIR,
-    '-l',
-    LOG_FILE,
-    '-w',
-    '-t',
-    '60',
-    '-o',
-    options,
-  ])
+  if (IS_ROOT && !existsSync(logFile)) writeFileSync(logFile, '')
+  if (IS_ROOT) chownSync(logFile, postgresIds().uid, postgresIds().gid)
+  const args = ['start', '-D', cluster, '-l', logFile, '-w', '-t', '60', '-o', options]
+  try {
+    asOwner(bin, 'pg_ctl', args)
+  } catch (error) {
+    throw toolFailure(`PostgreSQL did not start (log ${logFile}):\n${tailOfLog(logFile)}`, error)
+  }
   log('db', `PostgreSQL listening on ${PG_HOST}:${PG_PORT}`)
   return true
 }
@@ -126,8 +114,18 @@ export async function startCluster() {
 export function stopCluster() {
   const bin = findBinDir()
   if (!bin || runningPort() === null) return
-  asOwner(bin, 'pg_ctl', ['stop', '-D', CLUSTER_DIR, '-m', 'fast', '-w'])
+  asOwner(bin, 'pg_ctl', ['stop', '-D', clusterLocation().cluster, '-m', 'fast', '-w'])
   log('db', 'PostgreSQL stopped')
+}
+
+/** Stops the cluster and deletes it with every database in it (the checkout's secrets stay). */
+export function destroyCluster() {
+  const { home, cluster, logFile, shared } = clusterLocation()
+  stopCluster()
+  rmSync(cluster, { recursive: true, force: true })
+  rmSync(logFile, { force: true })
+  if (shared) rmSync(home, { recursive: true, force: true })
+  log('db', `cluster ${cluster} deleted`)
 }
 
 async function withAdmin(work) {
@@ -145,11 +143,16 @@ const quoteIdent = (name) => `"${name.replace(/"/g, '""')}"`
 
 /** Creates a database in the local cluster unless it exists; returns true when created. */
 export async function createDatabase(name) {
+  if (await databaseExists(name)) return false
+  await withAdmin((client) => client.query(`create database ${quoteIdent(name)}`))
+  return true
+}
+
+/** True when the local cluster has a database of that name. */
+export async function databaseExists(name) {
   return withAdmin(async (client) => {
     const found = await client.query('select 1 from pg_database where datname = $1', [name])
-    if (found.rowCount) return false
-    await client.query(`create database ${quoteIdent(name)}`)
-    return true
+    return found.rowCount > 0
   })
 }
 
@@ -160,22 +163,47 @@ export async function dropDatabase(name) {
   )
 }
 
+/** Renames a database, closing the sessions on either name first (a running app reconnects). */
+export async function renameDatabase(from, to) {
+  await withAdmin(async (client) => {
+    const close =
+      'select pg_terminate_backend(pid) from pg_stat_activity where datname = any($1::text[])'
+    for (let attempt = 1; ; attempt++) {
+      await client.query(close, [[from, to]])
+      try {
+        return await client.query(`alter database ${quoteIdent(from)} rename to ${quoteIdent(to)}`)
+      } catch (error) {
+        // 55006: a client reconnected in between; try again a few times.
+        if (error.code !== '55006' || attempt === 5) throw error
+      }
+    }
+  })
+}
+
+function status() {
+  const port = runningPort()
+  const state = port ? `running on ${PG_HOST}:${port}` : 'stopped'
+  return `${state} (cluster in ${clusterLocation().cluster})`
+}
+
 async function main([command, name]) {
   if (command === 'start') await startCluster()
   else if (command === 'stop') stopCluster()
-  else if (command === 'status')
-    console.log(runningPort() ? `running on ${runningPort()}` : 'stopped')
+  else if (command === 'status') console.log(status())
   else if (command === 'create' && name)
     console.log((await createDatabase(name)) ? 'created' : 'exists')
   else if (command === 'drop' && name) await dropDatabase(name)
   else if (command === 'url') console.log(databaseUrl(name))
+  else if (command === 'destroy') destroyCluster()
   else
-    throw new Error('usage: node scripts/db.mjs start|stop|status|create <db>|drop <db>|url [db]')
+    throw new Error(
+      'usage: node scripts/db.mjs start|stop|status|create <db>|drop <db>|url [db]|destroy',
+    )
 }
 
 if (import.meta.url === pathToFileURL(process.argv[1] ?? '').href) {
   main(process.argv.slice(2)).catch((error) => {
-    console.error(error.message)
+    console.error(`[db] ${error.message}`)
     process.exit(1)
   })
 }

@@ -1,12 +1,14 @@
 // The attempts recorder: drills call record() for every graded answer; answers wait in a queue kept in
-// localStorage (per player) and go to POST /api/attempts in batches — every few seconds, at 20
-// answers, on flush() and when the page is hidden. Network and server errors are retried with
-// exponential back-off; answers the server refuses (400) are dropped with a visible error, so one
-// bad answer never blocks the rest. The server ignores ids it already has, so re-sending is safe.
+// IndexedDB (per player, attempt-queue.ts) and go to POST /api/attempts in batches — every few
+// seconds, at 20 answers, on flush(), when the page is hidden and when the network comes back.
+// Network and server errors are retried with exponential back-off; answers the server refuses (400)
+// are dropped with a visible error, so one bad answer never blocks the rest. The server ignores ids
+// it already has, so re-sending (another tab, a lost reply) is safe.
 import { defineStore } from 'pinia'
 import { computed, ref, watch, type Ref } from 'vue'
 import { postAttempts, type AttemptInput } from '../api/attempts'
 import { ApiError } from '../api/http'
+import { loadAttempts, removeAttempts, saveAttempts } from './attempt-queue'
 import { useAuthStore } from './auth'
 
 export const FLUSH_DELAY_MS = 3000
@@ -15,17 +17,13 @@ export const BATCH_SIZE = 20
 export const MAX_BATCH = 200
 export const RETRY_BASE_MS = 1000
 export const RETRY_MAX_MS = 60_000
-const STORAGE_PREFIX = 'ambitus.attempts.v1.'
 
-const storageKey = (userId: string | null) => `${STORAGE_PREFIX}${userId ?? 'signed-out'}`
+const queueOwner = (userId: string | null) => userId ?? 'signed-out'
 
-function load(userId: string | null): AttemptInput[] {
-  try {
-    const stored = JSON.parse(localStorage.getItem(storageKey(userId)) ?? '[]') as unknown
-    return Array.isArray(stored) ? (stored as AttemptInput[]) : []
-  } catch {
-    return []
-  }
+/** The stored queue, then answers recorded while it loaded (each id once). */
+function merged(stored: AttemptInput[], recorded: AttemptInput[]) {
+  const ids = new Set(stored.map((a) => a.id))
+  return [...stored, ...recorded.filter((a) => !ids.has(a.id))]
 }
 
 /** Indices of the attempts a 400 names ("attempts.3.fret"); empty when the whole batch was refused. */
@@ -48,13 +46,14 @@ const localTimeZone = () => {
   }
 }
 
-// One pair of page listeners for the app's one recorder (the latest store created).
-let flushOnHide: (() => Promise<void>) | null = null
+// One set of page listeners for the app's one recorder (the latest store created).
+let flushNow: (() => Promise<void>) | null = null
 if (typeof document !== 'undefined') {
   document.addEventListener('visibilitychange', () => {
-    if (document.visibilityState === 'hidden') void flushOnHide?.()
+    if (document.visibilityState === 'hidden') void flushNow?.()
   })
-  window.addEventListener('pagehide', () => void flushOnHide?.())
+  window.addEventListener('pagehide', () => void flushNow?.())
+  window.addEventListener('online', () => void flushNow?.())
 }
 
 // The recorder's state: the queue and what is shown (refs), and the timers and counters of sending.
@@ -71,14 +70,32 @@ interface Recorder {
   retryTimer?: ReturnType<typeof setTimeout>
   failures: number
   inFlight: Promise<void> | null
+  // IndexedDB writes run one after another, in the order the queue changed.
+  writes: Promise<void>
+  /** The stored queue loading; resolves to how many answers came from an earlier visit. */
+  loading: Promise<number>
 }
 
-function persist(r: Recorder) {
-  try {
-    localStorage.setItem(storageKey(r.owner.value), JSON.stringify(r.queue.value))
-  } catch {
-    // Storage full or blocked: the answers stay in memory and are still sent.
-  }
+function store(r: Recorder, work: () => Promise<void>) {
+  // Blocked or full storage: the answers stay in memory and are still sent.
+  r.writes = r.writes.then(work).catch(() => undefined)
+}
+
+/** Loads a player's stored queue into memory; resolves to how many came from an earlier visit. */
+async function load(r: Recorder, userId: string | null) {
+  const stored = await loadAttempts(queueOwner(userId)).catch(() => [])
+  if (userId !== r.owner.value) return 0
+  const recordedNow = new Set(r.queue.value.map((a) => a.id))
+  r.queue.value = merged(stored, r.queue.value)
+  return stored.filter((a) => !recordedNow.has(a.id)).length
+}
+
+/** Starts loading a player's queue; answers left from an earlier visit (e.g. offline) go out at once. */
+function startLoading(r: Recorder, userId: string | null) {
+  r.loading = load(r, userId)
+  void r.loading.then((earlier) => {
+    if (earlier && userId) void flush(r)
+  })
 }
 
 function schedule(r: Recorder, delayMs: number) {
@@ -89,7 +106,8 @@ function schedule(r: Recorder, delayMs: number) {
 /** Queues one graded answer (the caller sets id with crypto.randomUUID() and createdAt). */
 function record(r: Recorder, attempt: AttemptInput) {
   r.queue.value = [...r.queue.value, attempt]
-  persist(r)
+  const who = queueOwner(r.owner.value)
+  store(r, () => saveAttempts(who, [attempt]))
   if (r.retryTimer || r.inFlight) return // the back-off or the send under way will take it
   if (r.queue.value.length >= BATCH_SIZE) void flush(r)
   else schedule(r, FLUSH_DELAY_MS)
@@ -98,7 +116,7 @@ function record(r: Recorder, attempt: AttemptInput) {
 function remove(r: Recorder, sent: AttemptInput[]) {
   const ids = new Set(sent.map((a) => a.id))
   r.queue.value = r.queue.value.filter((a) => !ids.has(a.id))
-  persist(r)
+  store(r, () => removeAttempts([...ids]))
 }
 
 function dropRefused(r: Recorder, batch: AttemptInput[], error: ApiError) {
@@ -153,8 +171,9 @@ async function sendOne(r: Recorder): Promise<boolean> {
 }
 
 async function drain(r: Recorder) {
-  r.isSending.value = true
   try {
+    await r.loading
+    r.isSending.value = true
     while (r.queue.value.length && (await sendOne(r)));
   } finally {
     r.isSending.value = false
@@ -162,15 +181,18 @@ async function drain(r: Recorder) {
   }
 }
 
-/** Sends everything queued now (waits for a send already under way); resolves when done or failed. */
-function flush(r: Recorder): Promise<void> {
+/**
+ * Sends everything queued now (waits for a send already under way); resolves when done or failed,
+ * with the stored queue up to date.
+ */
+async function flush(r: Recorder): Promise<void> {
   clearTimeout(r.flushTimer)
   if (r.retryTimer) {
     clearTimeout(r.retryTimer)
     r.retryTimer = undefined
   }
-  if (!r.inFlight && r.queue.value.length) r.inFlight = drain(r)
-  return r.inFlight ?? Promise.resolve()
+  await (r.inFlight ??= drain(r))
+  await r.writes
 }
 
 function clearError(r: Recorder) {
@@ -184,14 +206,17 @@ export const useAttemptsStore = defineStore('attempts', () => {
   const owner = ref<string | null>(auth.user?.id ?? null)
   const r: Recorder = {
     owner,
-    queue: ref<AttemptInput[]>(load(owner.value)),
+    queue: ref<AttemptInput[]>([]),
     isSending: ref(false),
     lastError: ref<ApiError | null>(null),
     dropped: ref(0),
     errorIsRefusal: false,
     failures: 0,
     inFlight: null,
+    writes: Promise.resolve(),
+    loading: Promise.resolve(0),
   }
+  startLoading(r, owner.value)
 
   // Each player has their own queue: another sign-in on this browser never sends someone else's answers.
   watch(
@@ -199,12 +224,12 @@ export const useAttemptsStore = defineStore('attempts', () => {
     (id) => {
       if (id === owner.value) return
       owner.value = id
-      r.queue.value = load(id)
-      if (id && r.queue.value.length) void flush(r)
+      r.queue.value = []
+      startLoading(r, id)
     },
   )
 
-  flushOnHide = () => flush(r)
+  flushNow = () => flush(r)
 
   return {
     ...{ queue: r.queue, isSending: r.isSending, lastError: r.lastError, dropped: r.dropped },

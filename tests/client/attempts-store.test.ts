@@ -1,39 +1,32 @@
-// The attempts recorder: batching, retry with back-off, a queue that survives reloads, and answers
-// the server refuses dropped with a visible error. fetch is stubbed; time is faked.
+// The attempts recorder: batching, retry with back-off, a queue in IndexedDB that survives reloads and
+// a time offline, and answers the server refuses dropped with a visible error. fetch is stubbed;
+// timers are faked; IndexedDB is fake-indexeddb (whose own tasks run on the real clock).
+import 'fake-indexeddb/auto'
 import { createPinia, setActivePinia } from 'pinia'
 import { afterEach, beforeEach, describe, expect, it, vi } from 'vitest'
 import type { AttemptInput } from '../../src/api/attempts'
-import { BATCH_SIZE, FLUSH_DELAY_MS, useAttemptsStore } from '../../src/stores/attempts'
+import { loadAttempts } from '../../src/stores/attempt-queue'
+import {
+  BATCH_SIZE,
+  FLUSH_DELAY_MS,
+  RETRY_BASE_MS,
+  useAttemptsStore,
+} from '../../src/stores/attempts'
 import { useAuthStore } from '../../src/stores/auth'
+import { attemptInput } from '../helpers/attempt-input'
 
-const PLAYER = {
+const NOOR = {
   id: 'player-1',
   email: 'noor@example.test',
   name: 'Noor',
   role: 'student' as const,
   createdAt: '',
 }
-let sequence = 0
+let players = 0
+/** Noor, with an id of her own in each test: queues of earlier tests never leak in. */
+let PLAYER = NOOR
 
-function attempt(): AttemptInput {
-  sequence += 1
-  return {
-    id: `00000000-0000-4000-8000-${String(sequence).padStart(12, '0')}`,
-    instrumentId: null,
-    tuning: [28, 33, 38, 43],
-    drill: 'recall',
-    sessionId: '00000000-0000-4000-8000-aaaaaaaaaaaa',
-    string: 1,
-    fret: 3,
-    expectedPitch: 36,
-    answer: 'C',
-    correct: true,
-    responseMs: 1200,
-    createdAt: new Date().toISOString(),
-    detail: {},
-    planItemId: null,
-  }
-}
+const attempt = () => attemptInput()
 
 type Reply = 'network' | number | { status: number; body: unknown }
 
@@ -41,8 +34,11 @@ type Reply = 'network' | number | { status: number; body: unknown }
 function stubFetch(...replies: Reply[]) {
   const bodies: { attempts: AttemptInput[]; timeZone?: string }[] = []
   const statuses: number[] = []
+  /** The (fake) clock at each call. */
+  const times: number[] = []
   let call = 0
   const fetch = vi.fn(async (_url: string, init: RequestInit) => {
+    times.push(Date.now())
     const reply = replies[Math.min(call++, replies.length - 1)]!
     const body = JSON.parse(String(init.body))
     bodies.push(body)
@@ -59,7 +55,15 @@ function stubFetch(...replies: Reply[]) {
     })
   })
   vi.stubGlobal('fetch', fetch)
-  return { fetch, bodies, statuses }
+  return { fetch, bodies, statuses, times }
+}
+
+/** Moves the fake clock on in steps, letting IndexedDB (real tasks) keep up, until `done()`. */
+async function runClockUntil(done: () => boolean, stepMs = 100, maxMs = 120_000) {
+  for (let ms = 0; ms < maxMs && !done(); ms += stepMs) {
+    await new Promise((resolve) => setImmediate(resolve))
+    await vi.advanceTimersByTimeAsync(stepMs)
+  }
 }
 
 function freshStore() {
@@ -69,8 +73,13 @@ function freshStore() {
 }
 
 beforeEach(() => {
-  vi.useFakeTimers()
+  players += 1
+  PLAYER = { ...NOOR, id: `player-${players}` }
   localStorage.clear()
+  // setImmediate stays real: fake-indexeddb runs its work on it.
+  vi.useFakeTimers({
+    toFake: ['setTimeout', 'clearTimeout', 'setInterval', 'clearInterval', 'Date'],
+  })
 })
 afterEach(() => {
   vi.useRealTimers()
@@ -105,43 +114,87 @@ describe('attempts recorder', () => {
   })
 
   it('when fewer than 20 answers wait, then they go out together a few seconds later', async () => {
-    const { fetch, bodies } = stubFetch(201)
+    const { fetch, bodies, times } = stubFetch(201)
     const store = freshStore()
+    const start = Date.now()
     store.record(attempt())
     store.record(attempt())
 
-    await vi.advanceTimersByTimeAsync(FLUSH_DELAY_MS - 100)
-    expect(fetch).not.toHaveBeenCalled()
-    await vi.advanceTimersByTimeAsync(200)
+    await runClockUntil(() => fetch.mock.calls.length > 0)
 
-    expect(fetch).toHaveBeenCalledTimes(1)
+    expect(times[0]! - start).toBeGreaterThanOrEqual(FLUSH_DELAY_MS)
+    expect(times[0]! - start).toBeLessThan(FLUSH_DELAY_MS + 500)
     expect(bodies[0]!.attempts).toHaveLength(2)
     expect(bodies[0]!.timeZone).toBeTypeOf('string')
   })
 
   it('when the 20th answer is recorded, then the batch goes out at once', async () => {
-    const { fetch, bodies } = stubFetch(201)
+    const { fetch, bodies, times } = stubFetch(201)
     const store = freshStore()
+    const start = Date.now()
     for (let i = 0; i < BATCH_SIZE; i++) store.record(attempt())
-    await vi.advanceTimersByTimeAsync(0)
+    await runClockUntil(() => fetch.mock.calls.length > 0, 10)
     expect(fetch).toHaveBeenCalledTimes(1)
+    expect(times[0]! - start).toBeLessThan(FLUSH_DELAY_MS / 2) // not the timer's doing
     expect(bodies[0]!.attempts).toHaveLength(BATCH_SIZE)
   })
 
-  it('when the page is reloaded before sending, then the queued answers are still there and are sent', async () => {
+  it('when the page is reloaded before sending, then the stored answers are sent as the app starts, once', async () => {
     stubFetch('network')
     const first = freshStore()
     const answers = [attempt(), attempt()]
     answers.forEach((a) => first.record(a))
     await first.flush()
+    expect(await loadAttempts(PLAYER.id)).toHaveLength(2)
 
-    const { bodies } = stubFetch(201)
+    const { fetch, bodies, times } = stubFetch(201)
+    const start = Date.now()
     const reloaded = freshStore() // a new Pinia: what a page reload gives
-    expect(reloaded.pending).toBe(2)
+    await runClockUntil(() => fetch.mock.calls.length > 0, 10, FLUSH_DELAY_MS / 2)
+    expect(times[0]! - start).toBeLessThan(FLUSH_DELAY_MS / 2) // on start, not by a timer
     await reloaded.flush()
 
     expect(bodies[0]!.attempts.map((a) => a.id)).toEqual(answers.map((a) => a.id))
     expect(reloaded.pending).toBe(0)
+    expect(await loadAttempts(PLAYER.id)).toEqual([])
+    expect(fetch).toHaveBeenCalledTimes(1)
+  })
+
+  it('when the network comes back, then the waiting answers go out at once, each once', async () => {
+    const { fetch, bodies, times } = stubFetch('network', 201)
+    const store = freshStore()
+    const answers = [attempt(), attempt(), attempt()]
+    answers.forEach((a) => store.record(a))
+    await store.flush()
+    expect(store.pending).toBe(3)
+
+    const back = Date.now()
+    window.dispatchEvent(new Event('online'))
+    await runClockUntil(() => store.pending === 0, 10)
+
+    expect(times[1]! - back).toBeLessThan(RETRY_BASE_MS / 2) // not the back-off's doing
+    expect(fetch).toHaveBeenCalledTimes(2)
+    expect(bodies[1]!.attempts.map((a) => a.id)).toEqual(answers.map((a) => a.id))
+    await vi.advanceTimersByTimeAsync(120_000)
+    expect(fetch).toHaveBeenCalledTimes(2) // the back-off timer sends nothing again
+  })
+
+  it('when an earlier version left a queue in localStorage, then it moves to IndexedDB once and is sent', async () => {
+    const legacy = [attempt(), attempt()]
+    localStorage.setItem(`ambitus.attempts.v1.${PLAYER.id}`, JSON.stringify(legacy))
+    const { fetch, bodies, times } = stubFetch(201)
+    const start = Date.now()
+
+    const store = freshStore()
+    await runClockUntil(() => fetch.mock.calls.length > 0, 10, FLUSH_DELAY_MS / 2)
+    expect(times[0]! - start).toBeLessThan(FLUSH_DELAY_MS / 2) // on start
+    await store.flush()
+
+    expect(bodies[0]!.attempts.map((a) => a.id)).toEqual(legacy.map((a) => a.id))
+    expect(localStorage.getItem(`ambitus.attempts.v1.${PLAYER.id}`)).toBeNull()
+    freshStore() // another start finds nothing left to send
+    await vi.advanceTimersByTimeAsync(FLUSH_DELAY_MS * 2)
+    expect(fetch).toHaveBeenCalledTimes(1)
   })
 
   it('when the server refuses one answer of a batch, then only that one is dropped, with a visible error, and the rest are sent', async () => {
@@ -196,18 +249,20 @@ describe('attempts recorder', () => {
     await store.flush()
     expect(store.pending).toBe(1)
     expect(store.lastError?.status).toBe(401)
-    expect(JSON.parse(localStorage.getItem('ambitus.attempts.v1.player-1')!)).toHaveLength(1)
+    expect(await loadAttempts(PLAYER.id)).toHaveLength(1)
   })
 
   it('when the page is hidden, then waiting answers are sent without waiting for the timer', async () => {
-    const { fetch } = stubFetch(201)
+    const { fetch, times } = stubFetch(201)
     const store = freshStore()
+    const start = Date.now()
     store.record(attempt())
     Object.defineProperty(document, 'visibilityState', { value: 'hidden', configurable: true })
     document.dispatchEvent(new Event('visibilitychange'))
-    await vi.advanceTimersByTimeAsync(0)
     Object.defineProperty(document, 'visibilityState', { value: 'visible', configurable: true })
+    await runClockUntil(() => fetch.mock.calls.length > 0, 10)
     expect(fetch).toHaveBeenCalledTimes(1)
+    expect(times[0]! - start).toBeLessThan(FLUSH_DELAY_MS / 2)
   })
 
   it("when another player signs in on this browser, then they never send the first player's answers", async () => {
@@ -216,12 +271,15 @@ describe('attempts recorder', () => {
     store.record(attempt())
     await store.flush()
     const auth = useAuthStore()
-    auth.user = { ...PLAYER, id: 'player-2' }
+    auth.user = { ...PLAYER, id: `${PLAYER.id}-other` }
     await vi.advanceTimersByTimeAsync(0)
+    await store.flush()
     expect(store.pending).toBe(0)
+    expect(bodies).toHaveLength(1)
     auth.user = PLAYER
-    await vi.advanceTimersByTimeAsync(0)
-    expect(store.pending).toBe(0) // sent again for player 1 on their return
+    await runClockUntil(() => bodies.length === 2) // sent again for player 1 on their return
     expect(bodies.at(-1)!.attempts).toHaveLength(1)
+    await store.flush()
+    expect(store.pending).toBe(0)
   })
 })

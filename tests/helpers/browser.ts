@@ -35,9 +35,21 @@ export function launchBrowser(options: { microphoneFile?: string } = {}): Promis
 
 export const baseUrl = () => inject('baseUrl')
 
-/** A new page whose requests to any other origin are recorded, so tests can assert there are none. */
-export async function newPage(browser: Browser, viewport = LAPTOP) {
-  const context: BrowserContext = await browser.newContext({ viewport, baseURL: baseUrl() })
+/**
+ * A new page whose requests to any other origin are recorded, so tests can assert there are none.
+ * The service worker is off unless asked for: its one-time download of the whole app (~150 files)
+ * would weigh on every context; tests/e2e/offline.spec.ts turns it on.
+ */
+export async function newPage(
+  browser: Browser,
+  viewport = LAPTOP,
+  { serviceWorkers = 'block' }: { serviceWorkers?: 'allow' | 'block' } = {},
+) {
+  const context: BrowserContext = await browser.newContext({
+    viewport,
+    baseURL: baseUrl(),
+    serviceWorkers,
+  })
   const page = await context.newPage()
   const foreign: string[] = []
   const origin = new URL(baseUrl()).origin

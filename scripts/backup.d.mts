@@ -1,0 +1,1 @@
+export function backup(argv?: string[]): Promise<string>

@@ -1,0 +1,65 @@
+// The answers waiting to be sent, kept in IndexedDB (Dexie), one queue per player, so a reload, a
+// closed tab or a day without network loses nothing. A queue that earlier versions kept in
+// localStorage is moved over once. Only the attempts store imports this (and so Dexie).
+import Dexie, { type EntityTable } from 'dexie'
+import type { AttemptInput } from '../api/attempts'
+
+interface QueuedAttempt {
+  id: string
+  owner: string
+  /** Microseconds since the epoch plus a counter: the order answers were given in. */
+  queuedAt: number
+  attempt: AttemptInput
+}
+
+type QueueDb = Dexie & { attempts: EntityTable<QueuedAttempt, 'id'> }
+
+const LEGACY_PREFIX = 'ambitus.attempts.v1.'
+let db: QueueDb | null = null
+let counter = 0
+
+function database(): QueueDb {
+  if (db) return db
+  db = new Dexie('ambitus-attempts') as QueueDb
+  db.version(1).stores({ attempts: 'id, [owner+queuedAt]' })
+  return db
+}
+
+/** Adds answers to a player's queue (an id already queued is overwritten, never doubled). */
+export async function saveAttempts(owner: string, attempts: AttemptInput[]) {
+  const now = Date.now() * 1000
+  const rows = attempts.map((attempt) => ({
+    id: attempt.id,
+    owner,
+    queuedAt: now + (counter++ % 1000),
+    attempt,
+  }))
+  await database().attempts.bulkPut(rows)
+}
+
+/** Removes answers (sent, or refused by the server) from every queue. */
+export async function removeAttempts(ids: string[]) {
+  await database().attempts.bulkDelete(ids)
+}
+
+/** A player's queued answers, oldest first; adopts a localStorage queue left by earlier versions. */
+export async function loadAttempts(owner: string): Promise<AttemptInput[]> {
+  await adoptLegacyQueue(owner)
+  const rows = await database()
+    .attempts.where('[owner+queuedAt]')
+    .between([owner, Dexie.minKey], [owner, Dexie.maxKey])
+    .toArray()
+  return rows.map((row) => row.attempt)
+}
+
+async function adoptLegacyQueue(owner: string) {
+  const key = `${LEGACY_PREFIX}${owner}`
+  let legacy: unknown
+  try {
+    legacy = JSON.parse(localStorage.getItem(key) ?? 'null')
+  } catch {
+    legacy = null // unreadable: nothing to adopt
+  }
+  if (Array.isArray(legacy) && legacy.length) await saveAttempts(owner, legacy as AttemptInput[])
+  localStorage.removeItem(key)
+}
