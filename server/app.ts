@@ -21,6 +21,7 @@ import { planRoutes } from './plans/plans-routes'
 import { commentRoutes } from './comments/comments-routes'
 import { recordingRoutes } from './recordings/recordings-routes'
 import { digestRoutes } from './notifications/digest-routes'
+import { worksheetRoutes } from './worksheets/worksheets-routes'
 
 // Same-origin only; blob: for recorded audio, audio worklets and exported board images.
 const CSP_DIRECTIVES = {
@@ -48,6 +49,7 @@ function apiRouter(ctx: AppContext) {
   api.use('/attempts', attemptsRoutes(ctx))
   api.use('/progress', progressRoutes(ctx))
   api.use('/focus', focusRoutes(ctx))
+  api.use('/worksheets', worksheetRoutes(ctx))
   api.use(apiNotFound)
   return api
 }
