@@ -80,6 +80,21 @@ describe('placeOnNeck', () => {
     ])
   })
 
+  it('crosses strings inside one hand position instead of climbing a string', () => {
+    // C major from C2 (A string, fret 3): the hand covers frets 2–5 and open strings are free, so
+    // D2 and G2 are open strings, E2 D 2, F2 D 3, A2 G 2, B2 G 4 (open string + fret, arithmetic).
+    const run = [36, 38, 40, 41, 43, 45, 47]
+    expect(placeOnNeck(run, BASS.tuning, 20).map((p) => `${p.string}:${p.fret}`)).toEqual([
+      '1:3',
+      '2:0',
+      '2:2',
+      '2:3',
+      '3:0',
+      '3:2',
+      '3:4',
+    ])
+  })
+
   it('refuses a pitch out of reach, naming it', () => {
     // The guitar's lowest note is E2 (40): D2 (38) is out of reach.
     expect(() => placeOnNeck([38], GUITAR.tuning, 22)).toThrow('D2 is out of reach')

@@ -1,10 +1,21 @@
 // Where to play a sequence of pitches when a drill gives none (TAB needs a string and fret per note).
 import { pitchName, positionsOf, type Position } from '../theory'
 
+/** Frets one hand position covers (one finger per fret). */
+const HAND_SPAN = 4
+
+/** How far a fret lies outside the hand's frets (0 inside; open strings are always in reach). */
+function reach(fret: number, handLow: number | null): number {
+  if (fret === 0 || handLow === null) return 0
+  if (fret < handLow) return handLow - fret
+  return Math.max(0, fret - (handLow + HAND_SPAN - 1))
+}
+
 /**
- * A string and fret for every pitch, keeping the hand still where it can: the first note takes its
- * lowest-fret place, each later one the place nearest the previous fret (the lower fret on a tie,
- * then the lower string). Throws a RangeError naming a pitch the instrument cannot play.
+ * A string and fret for every pitch, in one hand position where it can: the first fretted note
+ * sets the position (under the second finger), each later note takes a place inside it — the lower
+ * fret first, then the lower string — else the nearest place outside, and the hand shifts there.
+ * Throws a RangeError naming a pitch the instrument cannot play.
  *
  * @example
  * placeOnNeck([28, 33, 45], [28, 33, 38, 43], 20) // [{ string: 0, fret: 0 }, { string: 1, fret: 0 }, { string: 3, fret: 2 }]
@@ -14,20 +25,21 @@ export function placeOnNeck(
   tuning: readonly number[],
   frets: number,
 ): Position[] {
-  const placed: Position[] = []
-  for (const pitch of pitches) {
+  let handLow: number | null = null
+  return pitches.map((pitch) => {
     const candidates = positionsOf(tuning, frets, pitch)
     if (candidates.length === 0) {
       throw new RangeError(`${pitchName(pitch)} is out of reach on this instrument.`)
     }
-    const anchor = placed.at(-1)?.fret
-    const cost = (place: Position) =>
-      anchor === undefined ? place.fret : Math.abs(place.fret - anchor)
+    const hand = handLow
     const best = candidates.reduce((chosen, place) => {
-      const difference = cost(place) - cost(chosen) || place.fret - chosen.fret
+      const difference =
+        reach(place.fret, hand) - reach(chosen.fret, hand) || place.fret - chosen.fret
       return difference < 0 ? place : chosen
     })
-    placed.push(best)
-  }
-  return placed
+    if (best.fret > 0 && (handLow === null || reach(best.fret, handLow) > 0)) {
+      handLow = Math.max(1, best.fret - 1)
+    }
+    return best
+  })
 }

@@ -129,6 +129,12 @@ export const routes: RouteRecordRaw[] = [
     meta: { roles: [...ANY_USER], title: 'Instruments' },
   },
   {
+    path: '/worksheets',
+    name: 'worksheets',
+    component: () => import('../views/WorksheetsView.vue'),
+    meta: { roles: [...ANY_USER], title: 'Print & export' },
+  },
+  {
     path: '/account',
     name: 'account',
     component: () => import('../views/AccountView.vue'),
