@@ -23,6 +23,7 @@ import { mountInvitations } from './invitations/invitations-routes'
 import { planRoutes } from './plans/plans-routes'
 import { mountRoster } from './roster/roster-routes'
 import { mountStudios } from './studios/studios-routes'
+import { worksheetRoutes } from './worksheets/worksheets-routes'
 
 // Same-origin only; blob: for recorded audio, audio worklets and exported board images.
 const CSP_DIRECTIVES = {
@@ -52,6 +53,7 @@ function apiRouter(ctx: AppContext) {
   api.use('/attempts', attemptsRoutes(ctx))
   api.use('/progress', progressRoutes(ctx))
   api.use('/focus', focusRoutes(ctx))
+  api.use('/worksheets', worksheetRoutes(ctx))
   api.use(apiNotFound)
   return api
 }

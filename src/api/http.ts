@@ -46,6 +46,8 @@ export interface RequestOptions {
   body?: unknown
   /** Skip the global 401 handler (used by the session check itself). */
   quiet401?: boolean
+  /** Read the answer as a Blob (files such as PDFs) instead of JSON. */
+  blob?: boolean
 }
 
 /** The path with its query string (empty values left out). */
@@ -89,6 +91,7 @@ export async function request<T>(
     throw error
   }
   if (response.status === 204) return undefined as T
+  if (options.blob) return (await response.blob()) as T
   return (await response.json()) as T
 }
 
@@ -101,4 +104,7 @@ export const http = {
   patch: <T>(path: string, body?: unknown, options?: RequestOptions) =>
     request<T>('PATCH', path, { ...options, body }),
   delete: <T>(path: string, options?: RequestOptions) => request<T>('DELETE', path, options),
+  /** GET a file: resolves to a Blob, errors as ApiError like every other call. */
+  file: (path: string, options?: RequestOptions) =>
+    request<Blob>('GET', path, { ...options, blob: true }),
 }

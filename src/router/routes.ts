@@ -48,6 +48,12 @@ export const routes: RouteRecordRaw[] = [
     signedIn(drill.route, drillRouteName(drill.id), drill.page, drill.name),
   ),
   signedIn('/tuner', 'tuner', () => import('../views/TunerView.vue'), 'Tuner'),
+  signedIn(
+    '/worksheets',
+    'worksheets',
+    () => import('../views/WorksheetsView.vue'),
+    'Print & export',
+  ),
   signedIn('/progress', 'progress', () => import('../views/ProgressView.vue'), 'Progress'),
   signedIn('/studio', 'studio', () => import('../views/StudioView.vue'), 'Studio', ['teacher']),
   signedIn(

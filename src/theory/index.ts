@@ -84,3 +84,4 @@ export { chordTonesInWindow, chordTonesInRegion, chordArpeggio } from './chord-p
 export type { PlacedChordTone } from './chord-place'
 export { twoFiveOne, twoFiveOneCycle, twelveBarBlues, customProgression } from './progression'
 export type { KeyProgression, ProgressionQuality } from './progression'
+export { placeOnNeck } from './neck-placement'
