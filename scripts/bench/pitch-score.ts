@@ -8,6 +8,8 @@ export interface Heard {
   verdictMs: number
 }
 
+type Played = Take['played'][number]
+
 interface Group {
   notes: number
   latencies: number[]
@@ -36,95 +38,111 @@ const quantile = (values: number[], q: number) => {
 }
 const median = (values: number[]) => quantile(values, 0.5)
 
-export function createScore() {
-  const groups = new Map<string, Group>()
-  const atNote = new Map<number, number[]>()
-  let inSilence = 0
-  let repeats = 0
-  let repeatsHeard = 0
-  const group = (pitch: number) => {
-    const key = groupOf(pitch)
-    if (!groups.has(key))
-      groups.set(key, { notes: 0, latencies: [], wrong: 0, octave: 0, miss: 0, extra: 0 })
-    return groups.get(key)!
+const emptyGroup = (): Group => ({
+  notes: 0,
+  latencies: [],
+  wrong: 0,
+  octave: 0,
+  miss: 0,
+  extra: 0,
+})
+
+// BENCH_DEBUG=1 prints every played note not heard exactly once at its pitch.
+function debugLine(played: Played, heard: Heard[], repeated: boolean, take: Take) {
+  if (!process.env.BENCH_DEBUG || (heard.length === 1 && heard[0]?.pitch === played.pitch)) return
+  console.log(
+    `${take.instrument.name} ${take.source} ${take.condition} ${take.label} @${played.onsetMs}: played ${played.pitch}${repeated ? ' (repeat)' : ''}, heard ${heard.map((n) => `${n.pitch}@${n.onsetMs.toFixed(0)}`).join(' ') || 'nothing'}`,
+  )
+}
+
+export function createScore(): Score {
+  return new Score()
+}
+
+export class Score {
+  readonly groups = new Map<string, Group>()
+  private readonly atNote = new Map<number, number[]>()
+  private inSilence = 0
+  private repeats = 0
+  private repeatsHeard = 0
+
+  add(take: Take, heard: Heard[]) {
+    const first = take.played[0]?.onsetMs ?? Infinity
+    this.inSilence += heard.filter((n) => n.onsetMs < first - EARLY_MS).length
+    take.played.forEach((played, k) => {
+      const next = take.played[k + 1]?.onsetMs ?? Infinity
+      const mine = heard.filter(
+        (n) => n.onsetMs >= played.onsetMs - EARLY_MS && n.onsetMs < next - EARLY_MS,
+      )
+      this.judge(played, mine, take.played[k - 1]?.pitch === played.pitch, take)
+    })
   }
 
-  function judge(
-    played: { pitch: number; onsetMs: number },
-    heard: Heard[],
-    repeated: boolean,
-    take: Take,
-  ) {
-    if (process.env.BENCH_DEBUG && (heard.length !== 1 || heard[0]?.pitch !== played.pitch))
-      console.log(
-        `${take.instrument.name} ${take.source} ${take.condition} ${take.label} @${played.onsetMs}: played ${played.pitch}${repeated ? ' (repeat)' : ''}, heard ${heard.map((n) => `${n.pitch}@${n.onsetMs.toFixed(0)}`).join(' ') || 'nothing'}`,
-      )
-    const g = group(played.pitch)
+  totals() {
+    const all = [...this.groups.values()]
+    const sum = (key: 'notes' | 'wrong' | 'octave' | 'miss' | 'extra') =>
+      all.reduce((s, g) => s + g[key], 0)
+    return {
+      notes: sum('notes'),
+      wrong: sum('wrong') + this.inSilence,
+      octave: sum('octave'),
+      miss: sum('miss'),
+      extra: sum('extra'),
+      inSilence: this.inSilence,
+      repeats: this.repeats,
+      repeatsHeard: this.repeatsHeard,
+    }
+  }
+
+  medianAt(pitch: number): number {
+    return median(this.atNote.get(pitch) ?? [])
+  }
+
+  /** The slowest octave row's median from G2 up. */
+  worstFrom(pitch: number): number {
+    const rows = [...this.groups.entries()].filter(
+      ([key]) => key === '2 (G2–B2)' || Number(key) > Math.floor(pitch / 12) - 1,
+    )
+    return Math.max(...rows.map(([, g]) => median(g.latencies)))
+  }
+
+  summaryLine(): string {
+    const t = this.totals()
+    const pct = (n: number) => ((100 * n) / Math.max(1, t.notes)).toFixed(2)
+    const ms = (v: number) => v.toFixed(0)
+    return `pitch: E1=${ms(this.medianAt(E1))} B0=${ms(this.medianAt(B0))} G2=${ms(this.worstFrom(G2))} wrong=${t.wrong} octave=${pct(t.octave)} miss=${pct(t.miss)}`
+  }
+
+  private group(pitch: number): Group {
+    const key = groupOf(pitch)
+    let group = this.groups.get(key)
+    if (!group) this.groups.set(key, (group = emptyGroup()))
+    return group
+  }
+
+  private judge(played: Played, heard: Heard[], repeated: boolean, take: Take) {
+    debugLine(played, heard, repeated, take)
+    const g = this.group(played.pitch)
     g.notes += 1
-    if (repeated) repeats += 1
+    if (repeated) this.repeats += 1
     heard.forEach((note, k) => {
       const off = note.pitch - played.pitch
       if (off !== 0 && off % 12 === 0) g.octave += 1
       else if (off !== 0) g.wrong += 1
       else if (k > 0) g.extra += 1
-      else {
-        if (repeated) repeatsHeard += 1
-        const latency = note.verdictMs - played.onsetMs
-        if (Number.isFinite(latency)) {
-          g.latencies.push(latency)
-          atNote.set(played.pitch, [...(atNote.get(played.pitch) ?? []), latency])
-        }
-      }
+      else this.heardRight(played, note, repeated, g)
     })
     if (!heard.some((note) => note.pitch === played.pitch) && heard.length === 0) g.miss += 1
   }
 
-  return {
-    groups,
-    add(take: Take, heard: Heard[]) {
-      const first = take.played[0]?.onsetMs ?? Infinity
-      inSilence += heard.filter((n) => n.onsetMs < first - EARLY_MS).length
-      take.played.forEach((played, k) => {
-        const next = take.played[k + 1]?.onsetMs ?? Infinity
-        const mine = heard.filter(
-          (n) => n.onsetMs >= played.onsetMs - EARLY_MS && n.onsetMs < next - EARLY_MS,
-        )
-        judge(played, mine, take.played[k - 1]?.pitch === played.pitch, take)
-      })
-    },
-    totals() {
-      const all = [...groups.values()]
-      const sum = (key: 'notes' | 'wrong' | 'octave' | 'miss' | 'extra') =>
-        all.reduce((s, g) => s + g[key], 0)
-      return {
-        notes: sum('notes'),
-        wrong: sum('wrong') + inSilence,
-        octave: sum('octave'),
-        miss: sum('miss'),
-        extra: sum('extra'),
-        inSilence,
-        repeats,
-        repeatsHeard,
-      }
-    },
-    medianAt: (pitch: number) => median(atNote.get(pitch) ?? []),
-    /** The slowest octave row's median from G2 up. */
-    worstFrom(pitch: number) {
-      const rows = [...groups.entries()].filter(
-        ([key]) => key === '2 (G2–B2)' || Number(key) > Math.floor(pitch / 12) - 1,
-      )
-      return Math.max(...rows.map(([, g]) => median(g.latencies)))
-    },
-    summaryLine() {
-      const t = this.totals()
-      const pct = (n: number) => ((100 * n) / Math.max(1, t.notes)).toFixed(2)
-      const ms = (v: number) => v.toFixed(0)
-      return `pitch: E1=${ms(this.medianAt(E1))} B0=${ms(this.medianAt(B0))} G2=${ms(this.worstFrom(G2))} wrong=${t.wrong} octave=${pct(t.octave)} miss=${pct(t.miss)}`
-    },
+  private heardRight(played: Played, note: Heard, repeated: boolean, g: Group) {
+    if (repeated) this.repeatsHeard += 1
+    const latency = note.verdictMs - played.onsetMs
+    if (!Number.isFinite(latency)) return
+    g.latencies.push(latency)
+    this.atNote.set(played.pitch, [...(this.atNote.get(played.pitch) ?? []), latency])
   }
 }
-
-export type Score = ReturnType<typeof createScore>
 
 const cell = (value: number | string, width = 6) =>
   (typeof value === 'number' ? (Number.isFinite(value) ? value.toFixed(0) : '–') : value).padStart(

@@ -55,102 +55,131 @@ interface Sounding {
   gap: number
 }
 
-export function createNoteTracker(options: {
+export interface NoteTrackerOptions {
   sampleRate: number
   range: ListenRange
   hop: number
   window: number
-}) {
-  const { sampleRate, hop, window } = options
-  const ms = (index: number) => (index * 1000) / sampleRate
-  const toPitch = (frequency: number) => 69 + 12 * Math.log2(frequency / options.range.referenceHz)
-  let start: number | null = null
-  let sounding: Sounding | null = null
-  let run: Run | null = null
-  let gate = 0
+}
 
-  function extend(exact: number, at: number, afterGap = false): Run {
+export function createNoteTracker(options: NoteTrackerOptions): NoteTracker {
+  return new NoteTracker(options)
+}
+
+export class NoteTracker {
+  private onsetAt: number | null = null
+  private sounding: Sounding | null = null
+  private run: Run | null = null
+  private gate = 0
+
+  constructor(private readonly options: NoteTrackerOptions) {}
+
+  /** The noise gate (linear peak level) the input level is compared with. */
+  setGate(value: number): void {
+    this.gate = value
+  }
+
+  start(onset: number): void {
+    this.onsetAt = onset
+    this.sounding = null
+    this.run = null
+  }
+
+  stop(): void {
+    this.onsetAt = null
+    this.sounding = null
+    this.run = null
+  }
+
+  /** The frequency of the note sounding now (heard and followed), if any. */
+  soundingHz(): number | undefined {
+    const { sounding } = this
+    return sounding ? this.options.range.referenceHz * 2 ** ((sounding.exact - 69) / 12) : undefined
+  }
+
+  /** How many samples the next frame should hold: all since the onset, or a note's follow window. */
+  frameLength(available: number): number {
+    const { sounding } = this
+    return Math.min(available, sounding ? this.followLength(sounding.pitch) : this.options.window)
+  }
+
+  /** One frame's reading (null = no pitch) at absolute sample `at`, with the input level there. */
+  frame(reading: FrameReading | null, at: number, level: number): TrackedNote | null {
+    if (this.onsetAt === null) return null
+    const { sounding } = this
+    if (!reading) {
+      this.run = null
+      if (sounding) sounding.gap += 1
+      return null
+    }
+    const exact = this.toPitch(reading.frequency)
+    return sounding
+      ? this.afterVerdict(sounding, exact, at, level)
+      : this.afterOnset(exact, at, level)
+  }
+
+  private ms(index: number): number {
+    return (index * 1000) / this.options.sampleRate
+  }
+
+  private toPitch(frequency: number): number {
+    return 69 + 12 * Math.log2(frequency / this.options.range.referenceHz)
+  }
+
+  private extend(exact: number, at: number, afterGap = false): Run {
     const pitch = Math.round(exact)
+    const { run } = this
     if (run && run.pitch === pitch && Math.abs(exact - run.last) < STEADY)
       return { ...run, count: run.count + 1, last: exact }
     return { pitch, count: 1, firstAt: at, last: exact, afterGap }
   }
 
-  function heard(pitch: number, exact: number, onset: number, at: number, level: number) {
-    sounding = { pitch, exact, steadyAt: at, peak: level, gap: 0 }
-    run = null
-    return { pitch, cents: (exact - pitch) * 100, onsetMs: ms(onset), verdictMs: ms(at) }
+  private heard(pitch: number, exact: number, onset: number, at: number, level: number) {
+    this.sounding = { pitch, exact, steadyAt: at, peak: level, gap: 0 }
+    this.run = null
+    return { pitch, cents: (exact - pitch) * 100, onsetMs: this.ms(onset), verdictMs: this.ms(at) }
   }
 
-  function afterOnset(exact: number, at: number, level: number): TrackedNote | null {
-    run = extend(exact, at)
-    return run.count >= AGREE ? heard(run.pitch, exact, start ?? at, at, level) : null
+  private afterOnset(exact: number, at: number, level: number): TrackedNote | null {
+    const run = (this.run = this.extend(exact, at))
+    return run.count >= AGREE ? this.heard(run.pitch, exact, this.onsetAt ?? at, at, level) : null
   }
 
-  function followLength(pitch: number): number {
-    const period = sampleRate / (options.range.referenceHz * 2 ** ((pitch - 69) / 12))
+  private followLength(pitch: number): number {
+    const { sampleRate, range, hop, window } = this.options
+    const period = sampleRate / (range.referenceHz * 2 ** ((pitch - 69) / 12))
     return Math.min(window, Math.max(2, Math.ceil((FOLLOW_PERIODS * period) / hop)) * hop)
   }
 
-  function samePitch(note: Sounding, exact: number, at: number, level: number, afterGap: boolean) {
+  private samePitch(note: Sounding, exact: number, at: number, level: number, afterGap: boolean) {
     const broken =
-      afterGap && level >= REPLUCK_LEVEL * note.peak && level >= REPLUCK_ABOVE_GATE * gate
-    if (broken || run?.afterGap) {
-      run = extend(exact, at, broken)
-      if (run.count >= AGREE) return heard(note.pitch, exact, note.steadyAt + hop, at, level)
+      afterGap && level >= REPLUCK_LEVEL * note.peak && level >= REPLUCK_ABOVE_GATE * this.gate
+    if (broken || this.run?.afterGap) {
+      this.run = this.extend(exact, at, broken)
+      if (this.run.count >= AGREE)
+        return this.heard(note.pitch, exact, note.steadyAt + this.options.hop, at, level)
       return null
     }
     Object.assign(note, { steadyAt: at, exact })
-    run = null
+    this.run = null
     return null
   }
 
-  function afterVerdict(note: Sounding, exact: number, at: number, level: number) {
-    const afterGap = note.gap >= Math.max(3, (GAP_SHARE * followLength(note.pitch)) / hop)
+  private afterVerdict(note: Sounding, exact: number, at: number, level: number) {
+    const { hop } = this.options
+    const afterGap = note.gap >= Math.max(3, (GAP_SHARE * this.followLength(note.pitch)) / hop)
     note.gap = 0
     note.peak = Math.max(note.peak, level)
-    if (Math.abs(exact - note.exact) < STEADY) return samePitch(note, exact, at, level, afterGap)
-    run = extend(exact, at, afterGap)
+    if (Math.abs(exact - note.exact) < STEADY)
+      return this.samePitch(note, exact, at, level, afterGap)
+    const run = (this.run = this.extend(exact, at, afterGap))
     if (run.count < LEGATO_AGREE || run.pitch === note.pitch) return null
     if (HARMONIC_MOVES.has(Math.abs(run.pitch - note.pitch))) return null
-    const quick = run.firstAt - note.steadyAt <= followLength(note.pitch) + 2 * hop
-    if (quick || run.afterGap) return heard(run.pitch, exact, note.steadyAt + hop, at, level)
+    const quick = run.firstAt - note.steadyAt <= this.followLength(note.pitch) + 2 * hop
+    if (quick || run.afterGap) return this.heard(run.pitch, exact, note.steadyAt + hop, at, level)
     // A slide: the same note, now sounding at its new pitch.
-    sounding = { ...note, pitch: run.pitch, exact, steadyAt: at }
-    run = null
+    this.sounding = { ...note, pitch: run.pitch, exact, steadyAt: at }
+    this.run = null
     return null
-  }
-
-  return {
-    /** The noise gate (linear peak level) the input level is compared with. */
-    setGate: (value: number) => void (gate = value),
-    start(onset: number) {
-      start = onset
-      sounding = null
-      run = null
-    },
-    stop() {
-      start = null
-      sounding = null
-      run = null
-    },
-    /** The frequency of the note sounding now (heard and followed), if any. */
-    soundingHz: () =>
-      sounding ? options.range.referenceHz * 2 ** ((sounding.exact - 69) / 12) : undefined,
-    /** How many samples the next frame should hold: all since the onset, or a note's follow window. */
-    frameLength(available: number): number {
-      return Math.min(available, sounding ? followLength(sounding.pitch) : window)
-    },
-    /** One frame's reading (null = no pitch) at absolute sample `at`, with the input level there. */
-    frame(reading: FrameReading | null, at: number, level: number): TrackedNote | null {
-      if (start === null) return null
-      if (!reading) {
-        run = null
-        if (sounding) sounding.gap += 1
-        return null
-      }
-      const exact = toPitch(reading.frequency)
-      return sounding ? afterVerdict(sounding, exact, at, level) : afterOnset(exact, at, level)
-    },
   }
 }
