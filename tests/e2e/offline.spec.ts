@@ -50,6 +50,7 @@ async function newStudent(page: Page) {
   await page.goto('/')
   const email = `offline-${randomUUID().slice(0, 8)}@example.test`
   const res = await page.request.post('/api/auth/register', {
+    headers: { 'X-Requested-With': 'ambitus' }, // as the app's client sends (anti-CSRF)
     data: { email, password: 'a long enough password', name: 'Ada Offline', role: 'student' },
   })
   expect(res.status()).toBe(201)

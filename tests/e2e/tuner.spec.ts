@@ -26,6 +26,7 @@ async function newStudentOnTuner(on: Browser, viewport: typeof LAPTOP, dark: boo
     await opened.context.addInitScript(() => localStorage.setItem('ambitus.theme', 'lakewoodDark'))
   await opened.page.goto('/')
   const res = await opened.page.request.post('/api/auth/register', {
+    headers: { 'X-Requested-With': 'ambitus' }, // as the app's client sends (anti-CSRF)
     data: {
       email: `tuner-${Date.now()}-${Math.round(Math.random() * 1e6)}@example.test`,
       password: 'a long enough password',

@@ -45,9 +45,25 @@ export async function activeInstrument(page: Page): Promise<ActiveInstrument> {
 }
 
 /** Picks an option of a Vuetify select found by its data-testid. */
+/**
+ * Picks an option of a select and waits until the select shows it (a click that lands while the
+ * menu still animates, on a busy machine, is tried again).
+ */
 export async function choose(page: Page, testId: string, option: string) {
-  await page.getByTestId(testId).click()
-  await page.getByRole('option', { name: option, exact: true }).click()
+  const select = page.getByTestId(testId)
+  for (let attempt = 0; attempt < 3; attempt += 1) {
+    await select.click()
+    await page.getByRole('option', { name: option, exact: true }).click()
+    const shown = select.locator('.v-select__selection-text')
+    const ok = await shown
+      .filter({ hasText: option })
+      .waitFor({ timeout: 5_000 })
+      .then(() => true)
+      .catch(() => false)
+    if (ok) return
+    await page.keyboard.press('Escape')
+  }
+  throw new Error(`the select ${testId} does not show "${option}"`)
 }
 
 export async function readQuestion(page: Page): Promise<AskedQuestion> {
