@@ -23,6 +23,23 @@ export interface TuningPresetData {
   scaleLengthInches: number
 }
 
+// One row of the table: the open strings as one space-separated string.
+const preset = (
+  id: string,
+  label: string,
+  instrument: Instrument,
+  notes: string,
+  frets: number,
+  scaleLengthInches: number,
+): TuningPresetData => ({
+  id,
+  label,
+  instrument,
+  notes: notes.split(' '),
+  frets,
+  scaleLengthInches,
+})
+
 /**
  * Every preset the app offers, with our own ids and labels, a usual fret count and scale length.
  * Open strings follow common practice (e.g. a 4-string bass is E1 A1 D2 G2).
@@ -31,68 +48,26 @@ export interface TuningPresetData {
  * TUNING_PRESET_DATA.map((preset) => preset.id) // ['bass-4', 'bass-4-drop-d', ...]
  */
 export const TUNING_PRESET_DATA: readonly TuningPresetData[] = [
-  {
-    id: 'bass-4',
-    label: '4-string bass (E A D G)',
-    instrument: 'bass',
-    notes: ['E1', 'A1', 'D2', 'G2'],
-    frets: 20,
-    scaleLengthInches: 34,
-  },
-  {
-    id: 'bass-4-drop-d',
-    label: '4-string bass, drop D (D A D G)',
-    instrument: 'bass',
-    notes: ['D1', 'A1', 'D2', 'G2'],
-    frets: 20,
-    scaleLengthInches: 34,
-  },
-  {
-    id: 'bass-5',
-    label: '5-string bass (B E A D G)',
-    instrument: 'bass',
-    notes: ['B0', 'E1', 'A1', 'D2', 'G2'],
-    frets: 24,
-    scaleLengthInches: 35,
-  },
-  {
-    id: 'bass-6',
-    label: '6-string bass (B E A D G C)',
-    instrument: 'bass',
-    notes: ['B0', 'E1', 'A1', 'D2', 'G2', 'C3'],
-    frets: 24,
-    scaleLengthInches: 35,
-  },
-  {
-    id: 'guitar-6',
-    label: '6-string guitar (E A D G B E)',
-    instrument: 'guitar',
-    notes: ['E2', 'A2', 'D3', 'G3', 'B3', 'E4'],
-    frets: 22,
-    scaleLengthInches: 25.5,
-  },
-  {
-    id: 'guitar-6-drop-d',
-    label: '6-string guitar, drop D (D A D G B E)',
-    instrument: 'guitar',
-    notes: ['D2', 'A2', 'D3', 'G3', 'B3', 'E4'],
-    frets: 22,
-    scaleLengthInches: 25.5,
-  },
-  {
-    id: 'guitar-6-half-step-down',
-    label: '6-string guitar, half step down (Eb Ab Db Gb Bb Eb)',
-    instrument: 'guitar',
-    notes: ['Eb2', 'Ab2', 'Db3', 'Gb3', 'Bb3', 'Eb4'],
-    frets: 22,
-    scaleLengthInches: 25.5,
-  },
-  {
-    id: 'guitar-7',
-    label: '7-string guitar (B E A D G B E)',
-    instrument: 'guitar',
-    notes: ['B1', 'E2', 'A2', 'D3', 'G3', 'B3', 'E4'],
-    frets: 24,
-    scaleLengthInches: 25.5,
-  },
+  preset('bass-4', '4-string bass (E A D G)', 'bass', 'E1 A1 D2 G2', 20, 34),
+  preset('bass-4-drop-d', '4-string bass, drop D (D A D G)', 'bass', 'D1 A1 D2 G2', 20, 34),
+  preset('bass-5', '5-string bass (B E A D G)', 'bass', 'B0 E1 A1 D2 G2', 24, 35),
+  preset('bass-6', '6-string bass (B E A D G C)', 'bass', 'B0 E1 A1 D2 G2 C3', 24, 35),
+  preset('guitar-6', '6-string guitar (E A D G B E)', 'guitar', 'E2 A2 D3 G3 B3 E4', 22, 25.5),
+  preset(
+    'guitar-6-drop-d',
+    '6-string guitar, drop D (D A D G B E)',
+    'guitar',
+    'D2 A2 D3 G3 B3 E4',
+    22,
+    25.5,
+  ),
+  preset(
+    'guitar-6-half-step-down',
+    '6-string guitar, half step down (Eb Ab Db Gb Bb Eb)',
+    'guitar',
+    'Eb2 Ab2 Db3 Gb3 Bb3 Eb4',
+    22,
+    25.5,
+  ),
+  preset('guitar-7', '7-string guitar (B E A D G B E)', 'guitar', 'B1 E2 A2 D3 G3 B3 E4', 24, 25.5),
 ]
