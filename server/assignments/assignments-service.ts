@@ -28,7 +28,9 @@ export async function participantAssignment(
 ): Promise<AssignmentRow> {
   const assignment = await findAssignmentRow(ctx.db, assignmentId)
   if (!assignment) throw notFound('That assigned plan')
-  if (assignment.studentId !== user.id && assignment.teacherId !== user.id) throw forbidden(refusal)
+  // The plan's author counts as its teacher only while their account is a teacher's.
+  const asTeacher = assignment.teacherId === user.id && user.role === 'teacher'
+  if (assignment.studentId !== user.id && !asTeacher) throw forbidden(refusal)
   return assignment
 }
 

@@ -166,7 +166,7 @@ export async function planItemContext(
 ): Promise<PlanItemContext> {
   const found = await findItemWithPlan(ctx.db, itemId)
   if (!found) throw notFound('That plan item')
-  const isTeacher = found.teacherId === user.id
+  const isTeacher = found.teacherId === user.id && user.role === 'teacher'
   const isStudent = !isTeacher && (await assignmentOf(ctx, found.planId, user.id)) !== null
   if (!isTeacher && !isStudent) throw forbidden('This plan item is not assigned to you.')
   const { id, preset, target } = found.item

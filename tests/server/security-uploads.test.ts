@@ -32,7 +32,9 @@ let itemId: string
 beforeAll(async () => {
   dataDir = mkdtempSync(path.join(tmpdir(), 'ambitus-upload-attacks-'))
   api = await startTestApi({ dataDir })
-  server = api.bareApp.listen(0, '127.0.0.1')
+  server = await new Promise<http.Server>((ready) => {
+    const listening = api.bareApp.listen(0, '127.0.0.1', () => ready(listening))
+  })
   teacher = await teacherWithStudio(api.app, 'Upload Teacher')
   student = await studentIn(api.app, api.ctx, teacher.studioId, 'Upload Student')
   const plan = await createPlan(teacher, { studentIds: [student.user.id] })
