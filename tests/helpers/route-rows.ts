@@ -62,13 +62,7 @@ export const ROWS: Record<string, Row> = {
     ),
     all(200),
   ],
-  'POST /api/auth/logout': [
-    send(
-      () => '/api/auth/logout',
-      () => ({}),
-    ),
-    all(204),
-  ],
+  'POST /api/auth/logout': [get(() => '/api/auth/logout'), all(204)],
   'POST /api/auth/logout-everywhere': [get(() => '/api/auth/logout-everywhere'), signedIn(204)],
   'GET /api/auth/me': [get(() => '/api/auth/me'), signedIn(200)],
   'POST /api/auth/password': [
