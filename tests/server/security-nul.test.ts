@@ -118,7 +118,7 @@ describe('NUL in text', () => {
 
   it('when a multipart field holds NUL, then 400 on that field', async () => {
     const res = await student.agent
-      .post(`/api/assignments/${randomUUID()}/recordings`)
+      .post(`/api/assignments/${assignmentId}/recordings`) // the student's own: checked first
       .field('planItemId', `x${NUL}`)
       .attach('file', Buffer.from('RIFF'), 'take.wav')
     expect(res.status).toBe(400)
