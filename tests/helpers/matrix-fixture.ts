@@ -111,7 +111,7 @@ export async function buildFixture(api: TestApi) {
   const target = await signedInAgent(api.app, 'student', 'Admin Target')
   const users = Object.fromEntries(
     Object.entries(people).map(([role, agent]) => [role, agent.user]),
-  ) as Fixture['users']
+  ) as unknown as Fixture['users']
   const fixture: Fixture = {
     users,
     studioId: teacher.studioId,
