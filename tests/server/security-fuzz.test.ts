@@ -46,6 +46,8 @@ interface Outcome {
   sent: number
   serverErrors: { status: number; body: string; sample: string }[]
   unanswered: { error: string; length: number; sample: string }[]
+  /** 503 + Retry-After: the machine's load (database or hashing pool full), not the body. */
+  busy: number
 }
 
 const callerOf = ([, expected]: Row): Role =>
@@ -59,7 +61,7 @@ async function fuzzRoute(key: string, row: Row, bodies: string[]): Promise<Outco
   const url = `http://127.0.0.1:${(server.address() as AddressInfo).port}${routePath}`
   let cookie = await cookieFor(api, f, role)
   const started = Date.now()
-  const outcome: Outcome = { key, sent: 0, serverErrors: [], unanswered: [] }
+  const outcome: Outcome = { key, sent: 0, serverErrors: [], unanswered: [], busy: 0 }
   for (const body of bodies) {
     const send = () =>
       fetch(url, {
@@ -86,7 +88,8 @@ async function fuzzRoute(key: string, row: Row, bodies: string[]): Promise<Outco
     }
     const text = await res.text()
     outcome.sent += 1
-    if (res.status >= 500)
+    if (res.status === 503 && res.headers.has('retry-after')) outcome.busy += 1
+    else if (res.status >= 500)
       outcome.serverErrors.push({ status: res.status, body: text, sample: body.slice(0, 300) })
     if (res.status === 401 && role !== 'anonymous') cookie = await cookieFor(api, f, role)
   }
@@ -129,9 +132,10 @@ it(
 
     const sent = outcomes.reduce((n, o) => n + o.sent, 0)
     const failures = outcomes.flatMap((o) => o.serverErrors.map((e) => ({ route: o.key, ...e })))
+    const busy = outcomes.reduce((n, o) => n + o.busy, 0)
     const unanswered = outcomes.flatMap((o) => o.unanswered.map((e) => ({ route: o.key, ...e })))
     console.log(
-      `fuzz: ${sent} bodies to ${jsonRoutes.length} JSON routes, ${failures.length} answered 5xx, ${unanswered.length} unanswered (seed ${seed})`,
+      `fuzz: ${sent} bodies to ${jsonRoutes.length} JSON routes, ${failures.length} answered 5xx, ${unanswered.length} unanswered, ${busy} told to retry (503 busy) (seed ${seed})`,
     )
     expect(failures.slice(0, 5)).toEqual([])
     expect(unanswered.slice(0, 5)).toEqual([])
