@@ -47,6 +47,7 @@ const ConfigSchema = z.object({
   resetRequestsPerHour: z.coerce.number().int().min(1).default(5),
   signupsPerHour: z.coerce.number().int().min(1).default(10),
   mailSendsPerHour: z.coerce.number().int().min(1).default(60),
+  uploadsPerUser: z.coerce.number().int().min(1).default(2), // recordings one account sends at once
   // Test files share one database; each app instance may keep its counters apart with a scope.
   rateLimitScope: z.string().default(''),
 })
@@ -79,6 +80,7 @@ export function loadConfig(
     resetRequestsPerHour: env.RESET_RATE_LIMIT,
     signupsPerHour: env.SIGNUP_RATE_LIMIT,
     mailSendsPerHour: env.MAIL_RATE_LIMIT,
+    uploadsPerUser: env.UPLOADS_PER_USER,
     ...overrides,
   })
   if (!parsed.success) {

@@ -1,5 +1,6 @@
-// An admin changes an account: its role (a promoted student leaves every roster) or whether it is
-// disabled. Either change ends the account's sessions, in the same transaction.
+// An admin changes an account: its role (a promoted student leaves every roster; a former teacher's
+// studios pause) or whether it is disabled. Either change ends the account's sessions, in the same
+// transaction.
 import { deleteUserSessions } from '../auth/sessions-repository'
 import type { AppContext } from '../context'
 import { badRequest, notFound } from '../lib/errors'
@@ -11,7 +12,20 @@ import {
   type UserRecord,
 } from '../users/users-repository'
 import type { AdminUser, UserChange } from '../users/users-schema'
-import { endStudioMemberships } from './admin-users-repository'
+import { notify } from '../notifications/notify'
+import { endStudioMemberships, pauseStudios } from './admin-users-repository'
+import { studioPausedMail } from './studio-paused-mail'
+
+type Trx = Parameters<typeof findUserById>[0]
+type Paused = Awaited<ReturnType<typeof pauseStudios>>
+
+/** A new role: a promoted student leaves every roster; a former teacher's studios pause. */
+async function applyRole(trx: Trx, user: UserRecord, role: UserRecord['role']) {
+  const changed = (await updateRole(trx, user.id, role))!
+  if (role !== 'student') await endStudioMemberships(trx, user.id)
+  const paused = user.role === 'teacher' ? await pauseStudios(trx, user.id) : []
+  return { user: changed, paused }
+}
 
 export async function changeUser(
   ctx: AppContext,
@@ -25,13 +39,13 @@ export async function changeUser(
       [field]: ['Ask another admin.'],
     })
   }
-  return ctx.db.transaction(async (trx) => {
+  const { user, paused } = await ctx.db.transaction(async (trx) => {
     let user: UserRecord | null = await findUserById(trx, userId)
     if (!user) throw notFound('That user')
     let endSessions = false
+    let paused: Paused = []
     if (change.role !== undefined && change.role !== user.role) {
-      user = (await updateRole(trx, userId, change.role))!
-      if (user.role !== 'student') await endStudioMemberships(trx, userId)
+      ;({ user, paused } = await applyRole(trx, user, change.role))
       endSessions = true
     }
     if (change.disabled !== undefined && change.disabled !== Boolean(user.disabledAt)) {
@@ -39,6 +53,11 @@ export async function changeUser(
       endSessions ||= change.disabled
     }
     if (endSessions) await deleteUserSessions(trx, userId)
-    return toAdminUser(user)
+    return { user, paused }
   })
+  await notify(
+    ctx,
+    paused.map((student) => studioPausedMail(ctx.config, student, user.name)),
+  )
+  return toAdminUser(user)
 }

@@ -1,6 +1,7 @@
 // Use cases of assigned plans that other features call: who takes part in one, and removing
 // assignments or plan items together with the recording files attached to them.
 import type { AppContext } from '../context'
+import type { Db } from '../lib/db'
 import { forbidden, notFound } from '../lib/errors'
 import type { PublicUser } from '../users/users-schema'
 import {
@@ -27,7 +28,9 @@ export async function participantAssignment(
 ): Promise<AssignmentRow> {
   const assignment = await findAssignmentRow(ctx.db, assignmentId)
   if (!assignment) throw notFound('That assigned plan')
-  if (assignment.studentId !== user.id && assignment.teacherId !== user.id) throw forbidden(refusal)
+  // The plan's author counts as its teacher only while their account is a teacher's.
+  const asTeacher = assignment.teacherId === user.id && user.role === 'teacher'
+  if (assignment.studentId !== user.id && !asTeacher) throw forbidden(refusal)
   return assignment
 }
 
@@ -61,8 +64,12 @@ export const assignmentRows = (ctx: AppContext, filter: AssignmentFilter) =>
   listAssignmentRows(ctx.db, filter)
 
 /** Assigns a plan; returns only the students newly assigned (re-assigning is a no-op). */
-export const assignStudents = (ctx: AppContext, planId: string, studentIds: string[]) =>
-  insertAssignments(ctx.db, planId, studentIds)
+export const assignStudents = (
+  ctx: AppContext,
+  planId: string,
+  studentIds: string[],
+  trx: Db = ctx.db, // the caller's transaction, when the plan is written in the same one
+) => insertAssignments(trx, planId, studentIds)
 
 /** The assignment of a plan to a student, or null. */
 export const assignmentOf = (ctx: AppContext, planId: string, studentId: string) =>

@@ -1,49 +1,25 @@
-// /api/assignments/:id/recordings: upload (multipart, field "file" + "planItemId"), play with HTTP
-// range requests so the player can seek (…/:recordingId/audio), delete (…/:recordingId).
+// /api/assignments/:id/recordings: upload (multipart "file" + "planItemId", streamed by
+// recording-upload.ts), play with HTTP range requests so the player can seek
+// (…/:recordingId/audio), delete (…/:recordingId).
 import type { Router, Request, Response } from 'express'
-import multer from 'multer'
 import { pipeline } from 'node:stream'
 import { requireRole } from '../auth/auth-middleware'
 import type { AppContext } from '../context'
-import { AppError, badRequest } from '../lib/errors'
-import { parse, parseRequest } from '../lib/validate'
+import { badRequest } from '../lib/errors'
+import { parse } from '../lib/validate'
 import {
   AssignmentIdParamsSchema,
-  MAX_RECORDING_BYTES,
   RecordingParamsSchema,
   RecordingUploadSchema,
 } from './assignments-schema'
-import { openRecording, removeRecording, uploadRecording } from './recordings-service'
-
-const upload = multer({
-  storage: multer.memoryStorage(),
-  limits: { fileSize: MAX_RECORDING_BYTES, files: 1, fields: 4, fieldSize: 1024, parts: 6 },
-  defParamCharset: 'utf8',
-}).single('file')
-
-/** Runs multer and turns its errors into client errors (413 beyond the size limit). */
-function receiveFile(req: Request, res: Response): Promise<void> {
-  return new Promise((resolve, reject) => {
-    upload(req, res, (error: unknown) => {
-      if (!error) return resolve()
-      const e = error as { code?: string; message?: string }
-      if (e.code === 'LIMIT_FILE_SIZE') {
-        return reject(
-          new AppError(
-            'too_large',
-            `Recordings can be at most ${MAX_RECORDING_BYTES / 1024 / 1024} MB.`,
-            413,
-          ),
-        )
-      }
-      reject(
-        badRequest(`The upload could not be read: ${e.message ?? 'malformed form data'}.`, {
-          file: ['Try the upload again.'],
-        }),
-      )
-    })
-  })
-}
+import { receiveRecording, takeUploadSlot, type StoredUpload } from './recording-upload'
+import { recordingStorage } from './recording-storage'
+import {
+  checkUploader,
+  openRecording,
+  removeRecording,
+  uploadRecording,
+} from './recordings-service'
 
 type Opened = Awaited<ReturnType<typeof openRecording>>
 
@@ -74,18 +50,40 @@ function sendAudio(req: Request, res: Response, audio: Opened) {
   })
 }
 
+/** Files the streamed take under the item named in the form; a refused take's bytes are deleted. */
+async function fileUpload(
+  ctx: AppContext,
+  req: Request,
+  at: { assignmentId: string; upload: StoredUpload | null },
+) {
+  const { upload } = at
+  let body
+  try {
+    body = parse(RecordingUploadSchema, req)
+  } catch (error) {
+    if (upload) await recordingStorage(ctx).delete(upload.storageKey)
+    throw error
+  }
+  if (!upload)
+    throw badRequest('Attach an audio file.', { file: ['Choose a recording to upload.'] })
+  const target = { assignmentId: at.assignmentId, planItemId: body.planItemId }
+  return uploadRecording(ctx, req.user!, target, upload)
+}
+
 /** Adds the recording routes to the assignments router (signed in already). */
 export function recordingRoutes(ctx: AppContext, router: Router) {
+  // Who may upload is settled before a byte of the body is read; the file then streams to storage.
   router.post('/:id/recordings', requireRole('student'), async (req, res) => {
-    await receiveFile(req, res)
-    const { params, body } = parseRequest(req, {
-      params: AssignmentIdParamsSchema,
-      body: RecordingUploadSchema,
-    })
-    if (!req.file)
-      throw badRequest('Attach an audio file.', { file: ['Choose a recording to upload.'] })
-    const target = { assignmentId: params.id, planItemId: body.planItemId }
-    res.status(201).json({ recording: await uploadRecording(ctx, req.user!, target, req.file) })
+    const { id } = parse(AssignmentIdParamsSchema, req, 'params')
+    await checkUploader(ctx, req.user!, id)
+    const release = takeUploadSlot(ctx, req.user!.id)
+    try {
+      const upload = await receiveRecording(ctx, req, res)
+      const recording = await fileUpload(ctx, req, { assignmentId: id, upload })
+      res.status(201).json({ recording })
+    } finally {
+      release()
+    }
   })
   router.get('/:id/recordings/:recordingId/audio', async (req, res) => {
     const { id, recordingId } = parse(RecordingParamsSchema, req, 'params')

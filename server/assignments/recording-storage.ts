@@ -39,7 +39,12 @@ export function localRecordingStorage(root: string): RecordingStorage {
       const file = fileOf(key)
       await mkdir(path.dirname(file), { recursive: true, mode: 0o700 })
       const partial = `${file}.part`
-      await pipeline(body, createWriteStream(partial, { flags: 'wx', mode: 0o600 }))
+      try {
+        await pipeline(body, createWriteStream(partial, { flags: 'wx', mode: 0o600 }))
+      } catch (error) {
+        await rm(partial, { force: true }) // an aborted upload leaves nothing behind
+        throw error
+      }
       await rename(partial, file)
       return (await stat(file)).size
     },

@@ -75,7 +75,28 @@ export async function findRecording(db: Db, id: string): Promise<RecordingRecord
   return row ? toRecord(row) : null
 }
 
-export async function countItemRecordings(
+/**
+ * Inserts a recording unless the item already holds `max` of this assignment's: the assignment's
+ * row lock queues parallel uploads, so counting and inserting are one step. 'gone' when the
+ * assignment was deleted meanwhile.
+ */
+export function insertRecordingBelowLimit(
+  db: Db,
+  input: Omit<RecordingRecord, 'id' | 'createdAt'>,
+  max: number,
+): Promise<RecordingRecord | 'full' | 'gone'> {
+  return db.transaction(async (trx) => {
+    const locked = await trx('plan_assignments')
+      .where({ id: input.assignmentId })
+      .forUpdate()
+      .first('id')
+    if (!locked) return 'gone'
+    if ((await countItemRecordings(trx, input.assignmentId, input.planItemId)) >= max) return 'full'
+    return insertRecording(trx, input)
+  })
+}
+
+async function countItemRecordings(
   db: Db,
   assignmentId: string,
   planItemId: string,

@@ -1,44 +1,46 @@
 // Recording use cases: a student attaches audio to an item of a plan assigned to them; the student
 // and the plan's teacher may play it; the student may delete it.
 import { fileTypeFromBuffer } from 'file-type'
-import { Readable } from 'node:stream'
 import type { AppContext } from '../context'
 import { AppError, badRequest, conflict, forbidden, notFound } from '../lib/errors'
 import type { PublicUser } from '../users/users-schema'
 import { itemInAssignment } from './assignments-repository'
 import { ACCEPTED_AUDIO, MAX_RECORDINGS_PER_ITEM } from './assignments-schema'
 import { participantAssignment } from './assignments-service'
-import { newStorageKey, recordingStorage } from './recording-storage'
+import { recordingStorage, type RecordingStorage } from './recording-storage'
+import type { StoredUpload } from './recording-upload'
 import {
-  countItemRecordings,
   deleteRecording,
   findRecording,
-  insertRecording,
+  insertRecordingBelowLimit,
   toSummary,
   type RecordingRecord,
 } from './recordings-repository'
 
 const NOT_YOURS = 'This plan item is not assigned to you.'
+const HEAD_BYTES = 4100 // file-type reads at most this many bytes to tell a format
 
-export interface UploadedFile {
-  buffer: Buffer
-  originalname: string
+/** The first bytes of a stored take: enough for file-type to recognise any accepted format. */
+async function headOf(storage: RecordingStorage, upload: StoredUpload): Promise<Buffer> {
+  const chunks: Buffer[] = []
+  const end = Math.min(upload.size, HEAD_BYTES) - 1
+  for await (const chunk of storage.get(upload.storageKey, { start: 0, end }))
+    chunks.push(chunk as Buffer)
+  return Buffer.concat(chunks)
 }
 
 /** The audio format, read from the bytes themselves (a renamed file does not pass). */
-async function audioFormat(buffer: Buffer) {
-  if (buffer.length === 0)
+async function audioFormat(storage: RecordingStorage, upload: StoredUpload) {
+  if (upload.size === 0)
     throw badRequest('The file is empty.', { file: ['Choose a recording with sound in it.'] })
-  const type = await fileTypeFromBuffer(buffer)
+  const type = await fileTypeFromBuffer(await headOf(storage, upload))
   const mimeType = type ? ACCEPTED_AUDIO[type.ext] : undefined
   if (!type || !mimeType) {
     throw new AppError(
       'unsupported_media',
       'This is not an audio file we can play (WebM, Ogg, MP3, WAV or M4A).',
       415,
-      {
-        file: ['Upload WebM, Ogg, MP3, WAV or M4A audio.'],
-      },
+      { file: ['Upload WebM, Ogg, MP3, WAV or M4A audio.'] },
     )
   }
   return { mimeType, extension: type.ext }
@@ -50,38 +52,54 @@ const cleanName = (name: string) =>
     .trim()
     .slice(0, 200)
 
-export async function uploadRecording(
+/** Checked before the upload is read: only the assigned student may attach takes to it. */
+export async function checkUploader(ctx: AppContext, student: PublicUser, assignmentId: string) {
+  const assignment = await participantAssignment(ctx, student, assignmentId, NOT_YOURS)
+  if (assignment.studentId !== student.id) throw forbidden(NOT_YOURS)
+}
+
+async function fileUnderItem(
   ctx: AppContext,
   student: PublicUser,
   target: { assignmentId: string; planItemId: string },
-  file: UploadedFile,
+  upload: StoredUpload,
 ) {
   const { assignmentId, planItemId } = target
-  const assignment = await participantAssignment(ctx, student, assignmentId, NOT_YOURS)
-  if (assignment.studentId !== student.id) throw forbidden(NOT_YOURS)
   if (!(await itemInAssignment(ctx.db, assignmentId, planItemId))) throw notFound('That plan item')
-  const format = await audioFormat(file.buffer)
-  if ((await countItemRecordings(ctx.db, assignmentId, planItemId)) >= MAX_RECORDINGS_PER_ITEM) {
+  const format = await audioFormat(recordingStorage(ctx), upload)
+  const stored = await insertRecordingBelowLimit(
+    ctx.db,
+    {
+      assignmentId,
+      planItemId,
+      studentId: student.id,
+      storageKey: upload.storageKey,
+      sizeBytes: upload.size,
+      originalName: cleanName(upload.originalname),
+      ...format,
+    },
+    MAX_RECORDINGS_PER_ITEM,
+  )
+  if (stored === 'gone') throw notFound('That assigned plan')
+  if (stored === 'full') {
     throw conflict(
       `At most ${MAX_RECORDINGS_PER_ITEM} recordings per drill; delete an older one first.`,
     )
   }
-  const storage = recordingStorage(ctx)
-  const storageKey = newStorageKey()
-  const sizeBytes = await storage.put(storageKey, Readable.from(file.buffer))
+  return toSummary(stored)
+}
+
+/** Files a take already streamed into storage under its plan item; refused takes are deleted. */
+export async function uploadRecording(
+  ctx: AppContext,
+  student: PublicUser,
+  target: { assignmentId: string; planItemId: string },
+  upload: StoredUpload,
+) {
   try {
-    const record = await insertRecording(ctx.db, {
-      assignmentId,
-      planItemId,
-      studentId: student.id,
-      storageKey,
-      sizeBytes,
-      originalName: cleanName(file.originalname),
-      ...format,
-    })
-    return toSummary(record)
+    return await fileUnderItem(ctx, student, target, upload)
   } catch (error) {
-    await storage.delete(storageKey)
+    await recordingStorage(ctx).delete(upload.storageKey)
     throw error
   }
 }

@@ -167,6 +167,22 @@ function duplicateEmail(error: unknown): never {
   throw error
 }
 
+/** Only the invited address may accept, and only as a student (a link forwarded is worth nothing). */
+function refuseOtherAccount(invitation: InvitationRecord, current: PublicUser) {
+  if (current.role !== 'student') {
+    throw forbidden(
+      'Invitations are for student accounts. Sign out and accept with your student account.',
+    )
+  }
+  if (current.email.toLowerCase() !== invitation.email.toLowerCase()) {
+    throw new AppError(
+      'invitation_for_other_address',
+      `This invitation was sent to ${invitation.email}. Sign out and accept it with that address, or ask your teacher to invite ${current.email}.`,
+      403,
+    )
+  }
+}
+
 /**
  * Accepts an invitation: the signed-in student joins, or a new student account (with the invited
  * e-mail) is created and joins. Returns the new account when one was created, so the route signs it in.
@@ -177,11 +193,7 @@ export async function acceptInvitation(
   current: PublicUser | null,
 ) {
   const invitation = await usableInvitation(ctx, input.token)
-  if (current && current.role !== 'student') {
-    throw forbidden(
-      'Invitations are for student accounts. Sign out and accept with your student account.',
-    )
-  }
+  if (current) refuseOtherAccount(invitation, current)
   const account = current ? null : await newStudentAccount(ctx, invitation, input)
   return ctx.db.transaction(async (trx) => {
     const created: UserRecord | null = account

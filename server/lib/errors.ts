@@ -67,6 +67,12 @@ function fromLibraryError(error: unknown): AppError | null {
   const e = error as { type?: string; status?: number; code?: string; message?: string }
   const database = fromDatabaseError(error as { code?: string; severity?: string })
   if (database) return database
+  // Every database connection busy for the pool's whole wait: overload, not a fault; try again.
+  if ((error as { name?: string }).name === 'KnexTimeoutError') {
+    return new AppError('busy', 'The server is busy; try again in a moment.', 503, undefined, {
+      'Retry-After': '5',
+    })
+  }
   if (e.type === 'entity.too.large' || e.code === 'LIMIT_FILE_SIZE') {
     return new AppError('too_large', 'The upload is too large.', 413)
   }

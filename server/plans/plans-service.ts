@@ -47,20 +47,40 @@ async function loadPlan(ctx: AppContext, planId: string): Promise<Plan> {
   return plan
 }
 
-/** Assigns the plan to students of the teacher's studios and mails the ones newly assigned. */
-async function assign(ctx: AppContext, teacher: PublicUser, planId: string, studentIds: string[]) {
-  const students = await teacherStudents(ctx.db, teacher.id)
+/** The teacher's students by id; 403 when any of the ids is not one of them. */
+async function assignableStudents(ctx: AppContext, teacherId: string, studentIds: string[]) {
+  const students = await teacherStudents(ctx.db, teacherId)
   const byId = new Map(students.map((s) => [s.id, s]))
   if (studentIds.some((id) => !byId.has(id))) {
     throw forbidden('Plans can only be assigned to students of your studios.')
   }
-  const added = await assignStudents(ctx, planId, [...new Set(studentIds)])
+  return byId
+}
+
+type Students = Awaited<ReturnType<typeof assignableStudents>>
+
+/** Mails the students newly assigned and returns the plan as it now is. */
+async function announce(
+  ctx: AppContext,
+  teacher: PublicUser,
+  planId: string,
+  added: { ids: string[]; students: Students },
+) {
   const plan = await loadPlan(ctx, planId)
   await notify(
     ctx,
-    added.map((id) => planAssignedMail(ctx.config, byId.get(id)!, plan, teacher.name)),
+    added.ids.map((id) =>
+      planAssignedMail(ctx.config, added.students.get(id)!, plan, teacher.name),
+    ),
   )
   return plan
+}
+
+/** Assigns the plan to students of the teacher's studios and mails the ones newly assigned. */
+async function assign(ctx: AppContext, teacher: PublicUser, planId: string, studentIds: string[]) {
+  const students = await assignableStudents(ctx, teacher.id, studentIds)
+  const ids = await assignStudents(ctx, planId, [...new Set(studentIds)])
+  return announce(ctx, teacher, planId, { ids, students })
 }
 
 export async function getPlan(ctx: AppContext, teacherId: string, planId: string) {
@@ -70,8 +90,13 @@ export async function getPlan(ctx: AppContext, teacherId: string, planId: string
 
 export async function createPlan(ctx: AppContext, teacher: PublicUser, input: PlanCreateInput) {
   const { studentIds, ...fields } = input
-  const planId = await ctx.db.transaction((trx) => insertPlan(trx, teacher.id, fields))
-  return studentIds.length ? assign(ctx, teacher, planId, studentIds) : loadPlan(ctx, planId)
+  // Checked before anything is written; the plan and its assignments are then one transaction.
+  const students = await assignableStudents(ctx, teacher.id, studentIds)
+  const { planId, ids } = await ctx.db.transaction(async (trx) => {
+    const planId = await insertPlan(trx, teacher.id, fields)
+    return { planId, ids: await assignStudents(ctx, planId, [...new Set(studentIds)], trx) }
+  })
+  return announce(ctx, teacher, planId, { ids, students })
 }
 
 export async function updatePlan(
@@ -141,7 +166,7 @@ export async function planItemContext(
 ): Promise<PlanItemContext> {
   const found = await findItemWithPlan(ctx.db, itemId)
   if (!found) throw notFound('That plan item')
-  const isTeacher = found.teacherId === user.id
+  const isTeacher = found.teacherId === user.id && user.role === 'teacher'
   const isStudent = !isTeacher && (await assignmentOf(ctx, found.planId, user.id)) !== null
   if (!isTeacher && !isStudent) throw forbidden('This plan item is not assigned to you.')
   const { id, preset, target } = found.item

@@ -1,7 +1,8 @@
 // Finding 5 as the attack: a NUL character (U+0000) in any text field, query or path must be a 400
 // naming the field, never a 500; database refusals of input are 4xx from the one error middleware.
 import express from 'express'
-import type { Knex } from 'knex'
+import knex, { type Knex } from 'knex'
+import { knexConfig } from '../../db/knex-config'
 import request from 'supertest'
 import { randomUUID } from 'node:crypto'
 import { afterAll, beforeAll, describe, expect, it } from 'vitest'
@@ -118,7 +119,7 @@ describe('NUL in text', () => {
 
   it('when a multipart field holds NUL, then 400 on that field', async () => {
     const res = await student.agent
-      .post(`/api/assignments/${randomUUID()}/recordings`)
+      .post(`/api/assignments/${assignmentId}/recordings`) // the student's own: checked first
       .field('planItemId', `x${NUL}`)
       .attach('file', Buffer.from('RIFF'), 'take.wav')
     expect(res.status).toBe(400)
@@ -160,5 +161,25 @@ describe('database refusals in the one error middleware', () => {
       return db('users').insert({ ...row, id: randomUUID() })
     }
     expect((await request(appRunning(duplicate)).get('/')).status).toBe(409)
+  })
+
+  it('when every database connection stays busy past the wait, then 503 with Retry-After', async () => {
+    const tiny = knex({
+      ...knexConfig(api.ctx.config.databaseUrl),
+      pool: { min: 0, max: 1 },
+      acquireConnectionTimeout: 300,
+    })
+    let release!: () => void
+    const held = tiny.transaction(() => new Promise<void>((r) => (release = r)))
+    try {
+      const res = await request(appRunning(() => tiny.raw('select 1'))).get('/')
+      expect(res.status).toBe(503)
+      expect(res.body.error.code).toBe('busy')
+      expect(res.headers['retry-after']).toBe('5')
+    } finally {
+      release()
+      await held
+      await tiny.destroy()
+    }
   })
 })
