@@ -22,7 +22,7 @@ export interface LiveObject {
 // them (a database that had the earlier rollup triggers already counts them).
 const QUEUE_STORED_ATTEMPTS = `insert into rollup_queue (attempt_id, user_id)
   select id, user_id from attempts where not exists (select 1 from progress_items)
-  on conflict (attempt_id) do nothing`
+  order by created_at`
 
 export const LIVE_SQL: readonly LiveObject[] = [
   { file: 'progress_tail.sql', functions: ['progress_tail'] },

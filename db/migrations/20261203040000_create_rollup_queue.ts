@@ -5,12 +5,14 @@ import type { Knex } from 'knex'
 // deleting it from the queue in the same transaction. The rollup triggers of 20261201003000 and
 // 20261201003200 are dropped here; their functions are live SQL again, taking a batch of ids.
 export async function up(knex: Knex): Promise<void> {
+  // Keyed by arrival order (an append-only index, cheaper to write than one on random ids); the
+  // index on user_id serves "how many of this player's answers still wait".
   await knex.schema.createTable('rollup_queue', (t) => {
-    t.uuid('attempt_id').primary()
+    t.bigIncrements('seq').primary()
+    t.uuid('attempt_id').notNullable()
     t.uuid('user_id').notNullable()
     t.timestamp('queued_at', { useTz: true }).notNullable().defaultTo(knex.fn.now())
     t.index(['user_id'])
-    t.index(['queued_at'])
   })
   // A queue table sees every row deleted soon after it is written: vacuum it often.
   await knex.raw('alter table rollup_queue set (autovacuum_vacuum_scale_factor = 0.01)')

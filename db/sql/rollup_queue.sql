@@ -3,9 +3,7 @@
 -- batches and deletes what it applied in the same transaction, so each answer counts exactly once.
 create or replace function rollup_enqueue() returns trigger language plpgsql as $fn$
 begin
-  insert into rollup_queue (attempt_id, user_id)
-  select id, user_id from new_rows
-  on conflict (attempt_id) do nothing;
+  insert into rollup_queue (attempt_id, user_id) select id, user_id from new_rows;
   return null;
 end
 $fn$;

@@ -19,10 +19,10 @@ export async function takeQueued(
   userIds?: readonly string[],
 ): Promise<QueuedAnswer[]> {
   const { rows } = await trx.raw<{ rows: QueuedAnswer[] }>(
-    `delete from rollup_queue where attempt_id in (
-       select attempt_id from rollup_queue
+    `delete from rollup_queue where seq in (
+       select seq from rollup_queue
        where (:users::uuid[] is null or user_id = any(:users::uuid[]))
-       order by queued_at limit :limit for update skip locked)
+       order by seq limit :limit for update skip locked)
      returning attempt_id, user_id`,
     { users: userIds ? [...userIds] : null, limit },
   )
