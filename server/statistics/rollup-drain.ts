@@ -42,8 +42,8 @@ export async function drainOnce(
 }
 
 /** Drains until the queue is empty (the seed and the benchmarks, after bulk inserts). */
-export async function drainAll(db: Db): Promise<number> {
+export async function drainAll(db: Db, limit = DRAIN_LIMIT): Promise<number> {
   let total = 0
-  for (let n = await drainOnce(db); n > 0; n = await drainOnce(db)) total += n
+  for (let n = await drainOnce(db, { limit }); n > 0; n = await drainOnce(db, { limit })) total += n
   return total
 }

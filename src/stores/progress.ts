@@ -39,6 +39,10 @@ const localToday = () =>
     new Date(),
   )
 
+/** Everything the page shows for one filter, in parallel. */
+const fetchAll = (f: ProgressFilter) =>
+  Promise.all([api.fetchSummary(f), api.fetchTimeline(f), api.fetchPositions(f), api.fetchNotes(f)])
+
 export const useProgressStore = defineStore('progress', () => {
   const selection = ref<ProgressSelection>({ rangeDays: 30 })
   const summary = ref<SummaryAnswer | null>(null)
@@ -76,13 +80,7 @@ export const useProgressStore = defineStore('progress', () => {
     isLoading.value = true
     error.value = null
     try {
-      const f = filterOf(selection.value)
-      const [s, t, p, n] = await Promise.all([
-        api.fetchSummary(f),
-        api.fetchTimeline(f),
-        api.fetchPositions(f),
-        api.fetchNotes(f),
-      ])
+      const [s, t, p, n] = await fetchAll(filterOf(selection.value))
       if (mine !== request) return
       summary.value = s
       timeline.value = t
