@@ -6,13 +6,16 @@ import { createDb } from './lib/db'
 import { createLogger } from './lib/logger'
 import { createMailer } from './lib/mail'
 import { startScheduler } from './digests/scheduler'
+import { createStatistics } from './statistics/statistics-queue'
 
 const config = loadConfig()
 const logger = createLogger(config.logLevel)
 const db = createDb(config.databaseUrl)
 const mailer = createMailer(config)
-const app = createApp({ config, db, logger, mailer })
-const scheduler = startScheduler({ config, db, logger, mailer })
+const statistics = createStatistics(db, logger)
+const app = createApp({ config, db, logger, mailer, statistics })
+const scheduler = startScheduler({ config, db, logger, mailer, statistics })
+statistics.start()
 
 const server = app.listen(config.port, config.host, () => {
   logger.info(`Ambitus API listening on http://${config.host}:${config.port}`)
@@ -27,6 +30,7 @@ function shutdown(signal: string) {
   scheduler.stop()
   server.close(async () => {
     mailer.close()
+    await statistics.stop()
     await Promise.all([db.destroy(), closePasswordPool()])
     process.exit(0)
   })

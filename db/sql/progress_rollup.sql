@@ -1,12 +1,14 @@
--- The statistics rollups (progress_sessions, progress_days, progress_items), kept current by one
--- statement per batch of attempts: data-modifying CTEs whose upserts also compute the daily median
--- and p90 and each place's recent accuracy and median. See DEVELOPERS.md, "Statistics".
+-- The statistics rollups (progress_sessions, progress_days, progress_items), brought up to date by one
+-- statement per batch of queued attempts (called by the drain, server/statistics): data-modifying
+-- CTEs whose upserts also compute the daily median and p90 and each place's recent accuracy and
+-- median. See DEVELOPERS.md, "Statistics".
 --   instrument_key: the instrument id, 00000000-… for attempts without one, ffffffff-… for all;
 --   drill: the drill id, or '*' for every drill; 50 answers per place are "recent";
 --   a gap longer than 120 000 ms inside a session is not practice time.
-create or replace function progress_rollup() returns trigger language plpgsql as $fn$
+create or replace function progress_rollup(batch uuid[]) returns void language plpgsql as $fn$
 begin
-  with n as (
+  with new_rows as (select * from attempts where id = any(batch)),
+  n as (
     -- each new attempt with its player's local day and the attempt before it in its session
     select a.user_id, coalesce(a.instrument_id, '00000000-0000-0000-0000-000000000000'::uuid) as ikey,
       a.drill, a.session_id, coalesce(a.string, -1)::smallint as string,
@@ -91,9 +93,5 @@ begin
       from unnest(progress_tail(i.recent_correct || excluded.recent_correct, 50)) as x),
     recent_median_ms = (select percentile_cont(0.5) within group (order by v)
       from unnest(progress_tail(i.recent_ms || excluded.recent_ms, 50)) as v);
-  return null;
 end
 $fn$;
-
-create or replace trigger attempts_progress_rollup after insert on attempts
-  referencing new table as new_rows for each statement execute function progress_rollup();

@@ -1,7 +1,7 @@
 -- Range Runs fingerings per session (so "which fingering did I practise least" reads a few rows):
 -- one row per player, key, scale, fret region, fingering pattern, instrument and session. A runs
 -- detail not in the agreed shape (a non-numeric fret) is stored with the attempt and not counted.
-create or replace function progress_runs_rollup() returns trigger language plpgsql as $fn$
+create or replace function progress_runs_rollup(batch uuid[]) returns void language plpgsql as $fn$
 begin
   insert into progress_runs as r
     (user_id, tonic, scale, low_fret, high_fret, pattern, instrument_key, session_id, attempts, last_at)
@@ -17,7 +17,7 @@ begin
       detail->>'pattern' as pattern,
       coalesce(instrument_id, '00000000-0000-0000-0000-000000000000'::uuid) as ikey,
       session_id, created_at
-    from new_rows where drill = 'runs'
+    from attempts where id = any(batch) and drill = 'runs'
   ) as runs
   where tonic is not null and scale is not null and pattern is not null
     and low_fret is not null and high_fret is not null
@@ -25,9 +25,5 @@ begin
   on conflict (user_id, tonic, scale, low_fret, high_fret, pattern, instrument_key, session_id)
   do update set
     attempts = r.attempts + excluded.attempts, last_at = greatest(r.last_at, excluded.last_at);
-  return null;
 end
 $fn$;
-
-create or replace trigger attempts_runs_rollup after insert on attempts
-  referencing new table as new_rows for each statement execute function progress_runs_rollup();

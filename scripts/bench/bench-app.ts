@@ -6,6 +6,7 @@ import knex from 'knex'
 import { knexConfig } from '../../db/knex-config'
 import { migrateToLatest } from '../../db/live-sql'
 import { createApp } from '../../server/app'
+import { createStatistics } from '../../server/statistics/statistics-queue'
 import { SESSION_COOKIE } from '../../server/auth/session-token'
 import { issueSessionToken } from '../../server/auth/sessions'
 import { loadConfig } from '../../server/config'
@@ -47,11 +48,13 @@ export async function startBenchApp(databaseUrl: string, poolMax = 10): Promise<
   })
   const db = createDb(databaseUrl)
   db.client.pool.max = poolMax
+  const logger = createLogger('silent')
   const app = createApp({
     config,
     db,
     mailer: createMailer(config),
-    logger: createLogger('silent'),
+    logger,
+    statistics: createStatistics(db, logger),
   })
   const server: Server = await new Promise((resolve) => {
     const s = app.listen(0, '127.0.0.1', () => resolve(s))

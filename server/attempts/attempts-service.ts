@@ -1,8 +1,7 @@
 // Recording graded answers: validate ownership, store each attempt once (idempotent on its client
-// UUID), remember the player's time zone, and bring the spaced-review cards up to date.
+// UUID) and remember the player's time zone; the statistics queue rolls the answers up after.
 import type { AppContext } from '../context'
 import { badRequest, type FieldErrors } from '../lib/errors'
-import { reviewStoredAttempts } from '../focus/focus-service'
 import type { PublicUser } from '../users/users-schema'
 import type { AttemptBatch, AttemptBatchResult } from '../../src/contract/attempts'
 import * as repo from './attempts-repository'
@@ -71,10 +70,9 @@ const isMissingInstrument = (e: unknown) =>
 
 /**
  * Stores a batch for the signed-in player. Ids already stored (a re-sent batch) are skipped, never
- * overwritten, whoever stored them; the answer lists only the rows stored now. The review cards are
- * updated right after the insert, outside a transaction: they are derived from the attempts, and a
- * review lost to a rare race between two batches of one player costs nothing, while each saved round
- * trip raises how many answers the API takes per second (see "Benchmarks" in DEVELOPERS.md).
+ * overwritten, whoever stored them; the answer lists only the rows stored now. The same statement
+ * queues the new rows for the statistics and review cards (db/sql/rollup_queue.sql), which the drain
+ * applies moments later, each exactly once (see "Statistics" in DEVELOPERS.md).
  */
 export async function recordAttempts(
   ctx: AppContext,
@@ -96,7 +94,7 @@ export async function recordAttempts(
       throw badRequest('An instrument of these attempts no longer exists.')
     throw e
   })
-  await reviewStoredAttempts(ctx.db, user.id, rows)
+  if (rows.length) ctx.statistics.nudge()
   return {
     stored: rows.length,
     duplicates: batch.attempts.length - rows.length,

@@ -4,7 +4,7 @@ import { randomInt } from 'node:crypto'
 import { drillContract } from '../../src/contract/drills'
 import { createRandom } from '../../src/theory'
 import type { AppContext } from '../context'
-import type { Db } from '../lib/db'
+import type { Knex } from 'knex'
 import { badRequest, type FieldErrors } from '../lib/errors'
 import { listInstruments } from '../instruments/instruments-repository'
 import type { Instrument } from '../../src/contract/instruments'
@@ -56,8 +56,12 @@ export interface ReviewedAnswer {
   created_at: Date
 }
 
-/** Updates the cards of newly stored attempts (called right after they are inserted). */
-export async function reviewStoredAttempts(db: Db, userId: string, rows: ReviewedAnswer[]) {
+/** Moves the cards of newly stored attempts (the statistics drain calls it in its transaction). */
+export async function reviewStoredAttempts(
+  db: Knex | Knex.Transaction,
+  userId: string,
+  rows: ReviewedAnswer[],
+) {
   const placed = rows.filter((r) => r.string !== null && r.fret !== null)
   const keys = [...new Set(placed.map((r) => r.instrument_id ?? NO_INSTRUMENT))]
   for (const key of keys) {
@@ -178,6 +182,7 @@ export async function focusFor(
 ): Promise<FocusAnswer> {
   const instrument = await ownInstrument(ctx, user.id, q.instrument)
   const region = regionOf(q, instrument)
+  const pending = await ctx.statistics.settle([user.id])
   const [history, stored] = await Promise.all([
     itemRows(ctx.db, user.id, instrument.id, ALL_DRILLS),
     loadCards(ctx.db, user.id, instrument.id),
@@ -190,6 +195,7 @@ export async function focusFor(
     instrumentId: instrument.id,
     drill: q.drill,
     items: selectFocus(candidates, { n: q.n, now, random }).map(toItem),
+    pending,
   }
   const extras = drillContract(q.drill).focus
   if (!extras.keys && !extras.regions) return answer

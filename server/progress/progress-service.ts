@@ -30,11 +30,19 @@ import type { FingeringsQuery, ProgressScope, RangeQuery } from './progress-sche
 const { ALL_DRILLS, ALL_INSTRUMENTS } = repo
 const DEFAULT_TIMELINE_DAYS = 30
 
-/** The student whose data is asked for, after checking the viewer may read it. */
-export async function readableStudent(ctx: AppContext, viewer: PublicUser, student?: string) {
+/**
+ * The student whose data is asked for, after checking the viewer may read it, with their answers
+ * still queued for the statistics rolled up first; `pending` counts any still waiting.
+ */
+async function settledStudent(ctx: AppContext, viewer: PublicUser, student?: string) {
   const studentId = student ?? viewer.id
   await assertCanReadStudent(ctx, viewer, studentId)
-  return studentId
+  return { studentId, pending: await ctx.statistics.settle([studentId]) }
+}
+
+/** The student whose data is asked for (see settledStudent). */
+export async function readableStudent(ctx: AppContext, viewer: PublicUser, student?: string) {
+  return (await settledStudent(ctx, viewer, student)).studentId
 }
 
 async function instrumentsOf(ctx: AppContext, studentId: string): Promise<ProgressInstrument[]> {
@@ -72,13 +80,13 @@ function pickInstrument(
 
 /** Whose figures, their instruments and time zone, and the instrument key a range query reads. */
 async function rangeScope(ctx: AppContext, viewer: PublicUser, q: RangeQuery) {
-  const studentId = await readableStudent(ctx, viewer, q.student)
+  const { studentId, pending } = await settledStudent(ctx, viewer, q.student)
   const [instruments, timeZone] = await Promise.all([
     instrumentsOf(ctx, studentId),
     repo.timeZoneOf(ctx.db, studentId),
   ])
   const key = pickInstrument(instruments, q.instrument, false)?.id ?? ALL_INSTRUMENTS
-  return { studentId, instruments, timeZone, key }
+  return { studentId, instruments, timeZone, key, pending }
 }
 
 /** Summary: totals in the range (all time by default), today, the last 7 days, and the streak. */
@@ -87,7 +95,7 @@ export async function summary(
   viewer: PublicUser,
   q: RangeQuery,
 ): Promise<SummaryAnswer> {
-  const { studentId, instruments, timeZone, key } = await rangeScope(ctx, viewer, q)
+  const { studentId, instruments, timeZone, key, pending } = await rangeScope(ctx, viewer, q)
   const drill = q.drill ?? ALL_DRILLS
   const today = localDay(new Date(), timeZone)
   const weekStart = addDays(today, -6)
@@ -118,6 +126,7 @@ export async function summary(
     lastPracticeAt: last ? last.lastAt.toISOString() : null,
     instruments,
     activeInstrumentId: instruments.find((i) => i.isActive)?.id ?? null,
+    pending,
   }
 }
 

@@ -104,6 +104,7 @@ export async function rosterSummary(
   const members = await teacherStudents(ctx.db, teacherId)
   if (!members.length) return { students: [] }
   const ids = members.map((m) => m.id)
+  await ctx.statistics.settle(ids) // answers still queued count in the figures read next
   const [weeks, weak] = await Promise.all([
     weekFigures(ctx.db, ids),
     weakestPlaces(ctx.db, ids, WEAKEST_COUNT),

@@ -36,4 +36,6 @@ export interface FocusAnswer {
   keys?: KeyFocus[]
   /** Runs: 5-fret hand regions ranked by the weak places inside. */
   regions?: RegionFocus[]
+  /** Answers stored but not yet in these figures (the statistics are updating); absent means 0. */
+  pending?: number
 }

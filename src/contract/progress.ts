@@ -92,6 +92,8 @@ export interface SummaryAnswer {
   lastPracticeAt: string | null
   instruments: ProgressInstrument[]
   activeInstrumentId: string | null
+  /** Answers stored but not yet in these figures (the statistics are updating); absent means 0. */
+  pending?: number
 }
 
 export interface FingeringsAnswer {

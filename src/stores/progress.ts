@@ -1,5 +1,6 @@
 // Progress figures of one student (the signed-in one, or a teacher's student via `student`): summary,
-// timeline, places and notes, loaded together for one filter.
+// timeline, places and notes, loaded together for one filter; loaded again while answers still wait
+// for the statistics (`pending`).
 import { defineStore } from 'pinia'
 import { computed, ref } from 'vue'
 import { ApiError } from '../api/http'
@@ -16,6 +17,8 @@ import type { DrillId } from '../contract/drills'
 /** Date ranges offered by the filters, in days back from today. */
 export const RANGE_CHOICES = [7, 30, 90, 365] as const
 export type RangeDays = (typeof RANGE_CHOICES)[number]
+/** While answers wait for the statistics, the figures are loaded again after this long. */
+export const PENDING_REFRESH_MS = 2000
 
 export interface ProgressSelection {
   studentId?: string
@@ -36,6 +39,10 @@ const localToday = () =>
     new Date(),
   )
 
+/** Everything the page shows for one filter, in parallel. */
+const fetchAll = (f: ProgressFilter) =>
+  Promise.all([api.fetchSummary(f), api.fetchTimeline(f), api.fetchPositions(f), api.fetchNotes(f)])
+
 export const useProgressStore = defineStore('progress', () => {
   const selection = ref<ProgressSelection>({ rangeDays: 30 })
   const summary = ref<SummaryAnswer | null>(null)
@@ -45,6 +52,10 @@ export const useProgressStore = defineStore('progress', () => {
   const isLoading = ref(false)
   const error = ref<ApiError | null>(null)
   let request = 0
+  let refresh: ReturnType<typeof setTimeout> | undefined
+
+  /** Answers stored but not yet in the figures (the page says "updating" meanwhile). */
+  const pending = computed(() => summary.value?.pending ?? 0)
 
   /** True once loaded for a student who has never practised (the page shows how to start). */
   const isEmpty = computed(() => summary.value !== null && summary.value.lastPracticeAt === null)
@@ -63,23 +74,19 @@ export const useProgressStore = defineStore('progress', () => {
   /** Loads everything for a selection; a newer call wins over a slower older one. */
   async function load(next: Partial<ProgressSelection> = {}) {
     const mine = ++request
+    clearTimeout(refresh)
     if ('studentId' in next && next.studentId !== selection.value.studentId) summary.value = null
     selection.value = { ...selection.value, ...next }
     isLoading.value = true
     error.value = null
     try {
-      const f = filterOf(selection.value)
-      const [s, t, p, n] = await Promise.all([
-        api.fetchSummary(f),
-        api.fetchTimeline(f),
-        api.fetchPositions(f),
-        api.fetchNotes(f),
-      ])
+      const [s, t, p, n] = await fetchAll(filterOf(selection.value))
       if (mine !== request) return
       summary.value = s
       timeline.value = t
       positions.value = p
       notes.value = n
+      if (s.pending) refresh = setTimeout(() => void load(), PENDING_REFRESH_MS)
     } catch (e) {
       if (mine === request)
         error.value = e instanceof ApiError ? e : new ApiError(0, 'unknown', String(e))
@@ -88,5 +95,20 @@ export const useProgressStore = defineStore('progress', () => {
     }
   }
 
-  return { selection, summary, timeline, positions, notes, isLoading, error, isEmpty, load }
+  /** Stops loading again for pending answers (the page is left). */
+  const stopRefresh = () => clearTimeout(refresh)
+
+  return {
+    selection,
+    summary,
+    timeline,
+    positions,
+    notes,
+    isLoading,
+    error,
+    isEmpty,
+    pending,
+    load,
+    stopRefresh,
+  }
 })

@@ -3,9 +3,13 @@
 import { flushPromises } from '@vue/test-utils'
 import { afterEach, describe, expect, it, vi } from 'vitest'
 import StudentProgress from '../../src/components/progress/StudentProgress.vue'
+import { PENDING_REFRESH_MS } from '../../src/stores/progress'
 import { mountWithApp } from '../helpers/mount'
 
-afterEach(() => vi.unstubAllGlobals())
+afterEach(() => {
+  vi.useRealTimers()
+  vi.unstubAllGlobals()
+})
 
 const BASS = {
   id: 'i-1',
@@ -137,5 +141,26 @@ describe('StudentProgress', () => {
     )
     expect(wrapper.get('[data-testid="note-bars"]').text()).toContain('not practised')
     expect(wrapper.get('[data-testid="stat-streak"]').text()).toContain('2 days')
+  })
+
+  it('when answers still wait for the statistics, then it says it is updating and loads again until they are counted', async () => {
+    vi.useFakeTimers()
+    const fetch = stubApi({
+      ...BODIES,
+      summary: { ...summary('2026-03-09T10:00:00Z'), pending: 3 },
+    })
+    const { wrapper } = mountProgress()
+    await flushPromises()
+    expect(wrapper.get('[data-testid="progress-updating"]').text()).toContain(
+      'Updating — 3 answers not counted yet',
+    )
+    expect(fetch).toHaveBeenCalledTimes(4)
+
+    stubApi(BODIES) // counted now: no pending field
+    await vi.advanceTimersByTimeAsync(PENDING_REFRESH_MS)
+    await flushPromises()
+    expect(wrapper.find('[data-testid="progress-updating"]').exists()).toBe(false)
+    await vi.advanceTimersByTimeAsync(PENDING_REFRESH_MS * 3)
+    expect(vi.mocked(globalThis.fetch)).toHaveBeenCalledTimes(4) // no more loads once counted
   })
 })

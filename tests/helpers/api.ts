@@ -17,6 +17,7 @@ import { sessionCookieName } from '../../server/auth/session-token'
 import { issueSessionToken } from '../../server/auth/sessions'
 import { CSRF_HEADER, CSRF_VALUE } from '../../server/lib/csrf'
 import { insertUser, toPublicUser } from '../../server/users/users-repository'
+import { createStatistics } from '../../server/statistics/statistics-queue'
 
 export const TEST_PASSWORD = 'correct horse battery'
 // One session key per test process (the app under test signs and checks cookies with it).
@@ -53,7 +54,8 @@ export async function startTestApi(
   const logger = logLines
     ? createLogger('info', { write: (line: string) => void logLines.push(line) })
     : createLogger('silent')
-  const ctx: AppContext = { config, db, mailer, logger }
+  // No background drain: test files share the database, and readers settle their own players.
+  const ctx: AppContext = { config, db, mailer, logger, statistics: createStatistics(db, logger) }
   const bareApp = createApp(ctx)
   const app = asOurClient(bareApp)
   contexts.set(app, ctx)

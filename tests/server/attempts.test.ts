@@ -374,6 +374,7 @@ describe('days follow the player', () => {
     const res = await post(s.agent, { attempts: [a], timeZone: 'America/Los_Angeles' })
 
     expect(res.status).toBe(201)
+    expect(await api.ctx.statistics.settle([s.user.id])).toBe(0)
     const days = await api.ctx
       .db('progress_days')
       .where({ user_id: s.user.id, drill: '*' })

@@ -36,7 +36,7 @@ async function contents() {
   return { users, attempts, items }
 }
 
-/** Renames a student, deletes 5 answers and adds 3 (which the statistics trigger counts). */
+/** Renames a student, deletes 5 answers and adds 3 (which the statistics queue takes in). */
 async function changeEverything() {
   await query(`
     update users set name = 'Someone Else' where email = 'student@cedarhollow.test';

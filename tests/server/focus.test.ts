@@ -137,6 +137,7 @@ describe('spaced-review cards', () => {
       { string: 1, fret: 4, correct: true, ms: 900, at: minutesAgo(1) },
       { string: null, fret: null, correct: true, ms: 900, at: minutesAgo(1), pitch: 40 },
     ])
+    expect(await api.ctx.statistics.settle([p.user.id])).toBe(0) // the drain moves the cards
 
     const cards = await api.ctx
       .db('focus_cards')

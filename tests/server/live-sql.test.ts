@@ -3,6 +3,7 @@
 import { randomUUID } from 'node:crypto'
 import { afterAll, describe, expect, it } from 'vitest'
 import { installLiveSql, LIVE_SQL, liveSqlText, migrateToLatest } from '../../db/live-sql'
+import { drainAll } from '../../server/statistics/rollup-drain'
 import { createDatabase, dropDatabase } from '../../scripts/db.mjs'
 import { databaseUrl, TEST_API_DATABASE } from '../../scripts/lib/paths.mjs'
 import { createDb } from '../../server/lib/db'
@@ -76,14 +77,13 @@ describe('live SQL (db/sql) against the database', () => {
 describe('installing the live SQL on a database that already holds attempts', () => {
   const name = `${TEST_API_DATABASE}_live`
 
-  it('rolls up the attempts stored before the triggers existed, once', async () => {
+  it('queues the attempts stored before the queue trigger existed, once, and the drain counts them', async () => {
     await dropDatabase(name)
     await createDatabase(name)
     const fresh = createDb(databaseUrl(name))
     try {
       await migrateToLatest(fresh)
-      await fresh.raw('drop trigger attempts_progress_rollup on attempts')
-      await fresh.raw('drop trigger attempts_runs_rollup on attempts')
+      await fresh.raw('drop trigger attempts_enqueue_rollup on attempts')
       const [user] = await fresh('users')
         .insert({ email: 'early@example.test', name: 'Early', role: 'student', password_hash: 'x' })
         .returning('id')
@@ -106,7 +106,9 @@ describe('installing the live SQL on a database that already holds attempts', ()
       expect(await fresh('progress_items').count({ n: '*' })).toEqual([{ n: '0' }])
 
       await installLiveSql(fresh)
-      await installLiveSql(fresh) // again: the triggers exist now, nothing is counted twice
+      await installLiveSql(fresh) // again: the trigger exists now, nothing is queued twice
+      expect(await fresh('rollup_queue').count({ n: '*' })).toEqual([{ n: '2' }])
+      expect(await drainAll(fresh)).toBe(2)
 
       // one place, per drill and for all drills ('*'): 2 answers, 1 right
       const items = await fresh('progress_items')
@@ -118,6 +120,11 @@ describe('installing the live SQL on a database that already holds attempts', ()
       ])
       const runs = await fresh('progress_runs').select('pattern', 'attempts')
       expect(runs).toEqual([{ pattern: '0:3-3-2-2', attempts: 2 }])
+
+      // statistics built already: a queue trigger installed again does not queue the history
+      await fresh.raw('drop trigger attempts_enqueue_rollup on attempts')
+      await installLiveSql(fresh)
+      expect(await fresh('rollup_queue').count({ n: '*' })).toEqual([{ n: '0' }])
     } finally {
       await fresh.destroy()
       await dropDatabase(name)
