@@ -55,13 +55,14 @@ export interface WeakRow {
   answers: number
   recent_accuracy: number
   recent_median_ms: number | null
-  /** The instrument's open strings, null when it has been deleted since. */
+  /** The instrument's open strings and spelling, null when it has been deleted since. */
   tuning: number[] | null
+  accidentals: 'sharp' | 'flat' | null
 }
 
 /**
- * Per student, the `limit` places with the lowest recent accuracy (slower first on ties), read in
- * index order (progress_items_weakest) so each student costs a few index rows.
+ * Per student, the `limit` weakest places by the contract's rule (weak-places.ts: a recent miss;
+ * lowest recent accuracy, then more answers, then slower), from the index on recent accuracy.
  */
 export async function weakestPlaces(
   db: Db,
@@ -69,19 +70,18 @@ export async function weakestPlaces(
   limit: number,
 ): Promise<WeakRow[]> {
   const { rows } = await db.raw(
-    `select s.id as user_id, w.*, ins.tuning from unnest(?::uuid[]) as s(id)
+    `select s.id as user_id, w.*, ins.tuning, ins.accidentals from unnest(?::uuid[]) as s(id)
      cross join lateral (
        select i.instrument_key, i.string, i.fret, i.pitch, cardinality(i.recent_correct) as answers,
          i.recent_accuracy, i.recent_median_ms
        from progress_items i
        where i.user_id = s.id and i.drill = ? and i.string >= 0 and i.instrument_key <> ?
-         and cardinality(i.recent_correct) >= 3
-       order by i.recent_accuracy, i.recent_median_ms desc nulls last, i.string, i.fret
+         and cardinality(i.recent_correct) > 0 and i.recent_accuracy < 1
+       order by i.recent_accuracy, cardinality(i.recent_correct) desc,
+         i.recent_median_ms desc nulls last, i.string, i.fret
        limit ?
      ) as w
-     left join instruments ins on ins.id = w.instrument_key
-     -- the join may reorder rows: keep each student's places weakest first
-     order by s.id, w.recent_accuracy, w.recent_median_ms desc nulls last, w.string, w.fret`,
+     left join instruments ins on ins.id = w.instrument_key`,
     [studentIds, ALL_DRILLS, NO_INSTRUMENT, limit],
   )
   return rows

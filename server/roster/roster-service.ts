@@ -1,5 +1,4 @@
 // The teacher's roster: each student's practice figures, plan progress, weak spots and a status.
-import { pitchName } from '../../src/theory'
 import { assertCanReadStudent } from '../access/student-access'
 import type { AppContext } from '../context'
 import { assignmentRows } from '../assignments/assignments-service'
@@ -12,7 +11,7 @@ import type { RosterRow, RosterStatus, WeakSpot } from '../../src/contract/roste
 const DAY_MS = 24 * 3600 * 1000
 
 function weakSpotOf(place: RosterStudent['weakestPositions'][number]): WeakSpot {
-  const label = `${place.stringName} string, fret ${place.fret} (${pitchName(place.pitch, 'flat')})`
+  const label = `${place.stringName} string, fret ${place.fret} (${place.pitchName})`
   return {
     string: place.string,
     fret: place.fret,
@@ -71,7 +70,7 @@ function toRosterRow(student: RosterStudent, assignments: Assignment[], now: Dat
       ...student.recallTrend,
     },
     ...planSummary(assignments),
-    weakSpots: student.weakestPositions.filter((p) => p.accuracy < 1).map(weakSpotOf),
+    weakSpots: student.weakestPositions.map(weakSpotOf),
     status: rosterStatus(lastPracticeAt, assignments, now),
   }
 }

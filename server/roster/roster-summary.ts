@@ -11,10 +11,12 @@
 //     medianRecallMsPrev7d: number | null, // the same for the 7 days before
 //     recallTrend: { change: number | null, direction: 'faster' | 'slower' | 'steady' | null },
 //                                        // change = this week's median / last week's − 1 (−0.1 = 10 % faster)
-//     weakestPositions: [{ instrumentId, string, stringName, fret, pitch, answers, accuracy, medianMs }] // ≤ 3,
-//                                        // lowest recent accuracy first (latest 50 answers per place)
+//     weakestPositions: [{ instrumentId, string, stringName, pitchName, fret, pitch, answers, accuracy,
+//                          medianMs }] // ≤ 3, by src/contract/weak-places.ts: places with a recent miss,
+//                                        // worst first (latest 50 answers per place)
 //   }
-import { pitchClassName, stringNames } from '../../src/theory'
+import { pitchClassName, pitchName, stringNames } from '../../src/theory'
+import { compareWeakPlaces } from '../../src/contract/weak-places'
 import { teacherStudents } from '../access/access-repository'
 import type { AppContext } from '../context'
 import { weakestPlaces, weekFigures, type WeakRow, type WeekRow } from './roster-repository'
@@ -37,6 +39,8 @@ export interface RosterStudent {
     string: number
     /** "low E", "A": the string's name on that instrument */
     stringName: string
+    /** "F#4" or "Gb4": spelled as the student's instrument spells notes (as the heat map does) */
+    pitchName: string
     fret: number
     pitch: number
     answers: number
@@ -78,7 +82,10 @@ function stringNameOf(r: WeakRow): string {
   const open = r.pitch - r.fret
   try {
     if (r.tuning)
-      return stringNames(r.tuning.map(Number), 'flat')[r.string] ?? pitchClassName(open, 'flat')
+      return (
+        stringNames(r.tuning.map(Number), r.accidentals ?? 'flat')[r.string] ??
+        pitchClassName(open, 'flat')
+      )
   } catch {
     // a tuning the theory core refuses: fall through to the open string's note
   }
@@ -89,6 +96,7 @@ const toWeak = (r: WeakRow) => ({
   instrumentId: r.instrument_key,
   string: r.string,
   stringName: stringNameOf(r),
+  pitchName: pitchName(r.pitch, r.accidentals ?? 'flat'),
   fret: r.fret,
   pitch: r.pitch,
   answers: r.answers,
@@ -116,7 +124,15 @@ export async function rosterSummary(
       email: m.email,
       studios: m.studios,
       ...weekPart(weekOf.get(m.id)),
-      weakestPositions: weak.filter((w) => w.user_id === m.id).map(toWeak),
+      weakestPositions: weak
+        .filter((w) => w.user_id === m.id)
+        .map(toWeak)
+        .sort((a, b) =>
+          compareWeakPlaces(
+            { ...a, recentAnswers: a.answers, recentAccuracy: a.accuracy },
+            { ...b, recentAnswers: b.answers, recentAccuracy: b.accuracy },
+          ),
+        ),
     })),
   }
 }
