@@ -1,0 +1,25 @@
+// Calendar days and local date-times (issue 16: "today" for yesterday evening; e-mails in UTC).
+// Offsets from the IANA time zone database (Europe/Tallinn UTC+2 in winter, America/Chicago UTC−6).
+import { describe, expect, it } from 'vitest'
+import { calendarDaysBetween, isTimeZone, localDay, mailDateTime, sheetDateTime } from './local-time'
+
+describe('local time', () => {
+  it('counts calendar days in the viewer’s zone, not 24-hour blocks', () => {
+    const evening = new Date('2026-12-02T21:00:00Z') // 23:00 in Tallinn
+    const morning = new Date('2026-12-03T05:00:00Z') // 07:00 the next day in Tallinn, 23:00 in Chicago
+    expect(calendarDaysBetween(evening, morning, 'Europe/Tallinn')).toBe(1)
+    expect(calendarDaysBetween(evening, morning, 'America/Chicago')).toBe(0) // both on 2 Dec there
+    expect(localDay(morning, 'America/Chicago')).toBe('2026-12-02')
+  })
+
+  it('writes e-mail and spreadsheet date-times in the given zone', () => {
+    const at = new Date('2026-12-04T16:30:00Z')
+    expect(mailDateTime(at, 'Europe/Tallinn')).toBe('Fri, 4 Dec 2026, 18:30 (Europe/Tallinn)')
+    expect(sheetDateTime(at, 'America/Chicago')).toBe('2026-12-04 10:30:00')
+  })
+
+  it('knows IANA names and refuses made-up ones', () => {
+    expect(isTimeZone('Europe/Tallinn')).toBe(true)
+    expect(isTimeZone('Mars/Olympus')).toBe(false)
+  })
+})
