@@ -4,7 +4,7 @@ import { hashPassword } from '../auth/password'
 import { publicUrl } from '../config'
 import type { AppContext } from '../context'
 import { AppError, badRequest, conflict, forbidden, notFound } from '../lib/errors'
-import { findUserByEmail, insertUser, type UserRecord } from '../users/users-repository'
+import { findUserByEmail, insertUser, timeZoneOf, type UserRecord } from '../users/users-repository'
 import type { PublicUser } from '../users/users-schema'
 import {
   consumeInvitation,
@@ -38,7 +38,11 @@ async function mailInvitation(
   expiresAt: Date,
 ) {
   const link = `${publicUrl(ctx.config)}/invitations/accept?token=${encodeURIComponent(token)}`
-  await ctx.mailer.send(invitationMail(invitation.email, { ...invitation, link, expiresAt }))
+  const invitee = await findUserByEmail(ctx.db, invitation.email)
+  const timeZone = await timeZoneOf(ctx.db, invitee?.id ?? invitation.teacherId)
+  await ctx.mailer.send(
+    invitationMail(invitation.email, { ...invitation, link, expiresAt, timeZone }),
+  )
 }
 
 async function reload(ctx: AppContext, id: string) {
