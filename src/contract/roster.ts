@@ -16,6 +16,13 @@ export interface StudioStudent {
 export const ROSTER_STATUSES = ['behind', 'on-track', 'inactive'] as const
 export type RosterStatus = (typeof ROSTER_STATUSES)[number]
 
+/** How a status reads on screen and in the CSV export. */
+export const ROSTER_STATUS_TEXT: Record<RosterStatus, string> = {
+  behind: 'Behind',
+  inactive: 'Quiet',
+  'on-track': 'On track',
+}
+
 export const ROSTER_SORT_KEYS = [
   'name',
   'email',

@@ -2,11 +2,12 @@
 import type { RosterRow, RosterStatus } from '@/api/roster'
 import { toUnicode } from '@/theory'
 import { calendarDaysBetween } from '@/contract/local-time'
+import { ROSTER_STATUS_TEXT } from '@/contract/roster'
 
 export const STATUS_LABEL: Record<RosterStatus, { text: string; color: string }> = {
-  behind: { text: 'Behind', color: 'error' },
-  inactive: { text: 'Quiet', color: 'warning' },
-  'on-track': { text: 'On track', color: 'success' },
+  behind: { text: ROSTER_STATUS_TEXT.behind, color: 'error' },
+  inactive: { text: ROSTER_STATUS_TEXT.inactive, color: 'warning' },
+  'on-track': { text: ROSTER_STATUS_TEXT['on-track'], color: 'success' },
 }
 
 export const percent = (v: number | null) => (v === null ? '–' : `${Math.round(v * 100)} %`)
