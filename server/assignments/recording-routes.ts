@@ -84,7 +84,7 @@ export function recordingRoutes(ctx: AppContext, router: Router) {
     })
     if (!req.file)
       throw badRequest('Attach an audio file.', { file: ['Choose a recording to upload.'] })
-    const target = { assignmentId: params.id, planItemId: body.planItemId }
+    const target = { assignmentId: params.id, ...body }
     res.status(201).json({ recording: await uploadRecording(ctx, req.user!, target, req.file) })
   })
   router.get('/:id/recordings/:recordingId/audio', async (req, res) => {

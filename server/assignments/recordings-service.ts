@@ -53,7 +53,7 @@ const cleanName = (name: string) =>
 export async function uploadRecording(
   ctx: AppContext,
   student: PublicUser,
-  target: { assignmentId: string; planItemId: string },
+  target: { assignmentId: string; planItemId: string; durationMs?: number },
   file: UploadedFile,
 ) {
   const { assignmentId, planItemId } = target
@@ -77,6 +77,7 @@ export async function uploadRecording(
       storageKey,
       sizeBytes,
       originalName: cleanName(file.originalname),
+      durationMs: target.durationMs ?? null,
       ...format,
     })
     return toSummary(record)
