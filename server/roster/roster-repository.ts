@@ -9,14 +9,17 @@ export interface WeekRow {
   attempts7d: string | null
   correct7d: string | null
   active_ms7d: string | null
+  attempts_prev7d: string | null
+  correct_prev7d: string | null
   median7d: number | null
   median_prev7d: number | null
   last_at: Date | null
 }
 
 /**
- * Per student: the last 7 local days and the 7 before (attempts, right answers, active time, median
- * recall of right answers), and the last practice time.
+ * Per student: the last 7 local days and the 7 before (attempts, right answers, active time this
+ * week; answers and right answers the week before; median recall of right answers), and the last
+ * practice time.
  */
 export async function weekFigures(db: Db, studentIds: string[]): Promise<WeekRow[]> {
   const { rows } = await db.raw(
@@ -29,7 +32,9 @@ export async function weekFigures(db: Db, studentIds: string[]): Promise<WeekRow
        where d.instrument_key = ? and d.drill = ? and d.day > st.today - 14 and d.day <= st.today
      ), sums as (
        select user_id, sum(attempts) filter (where this_week) as attempts7d,
-         sum(correct) filter (where this_week) as correct7d, sum(active_ms) filter (where this_week) as active_ms7d
+         sum(correct) filter (where this_week) as correct7d, sum(active_ms) filter (where this_week) as active_ms7d,
+         sum(attempts) filter (where not this_week) as attempts_prev7d,
+         sum(correct) filter (where not this_week) as correct_prev7d
        from d group by user_id
      ), medians as (
        select d.user_id,
@@ -37,7 +42,8 @@ export async function weekFigures(db: Db, studentIds: string[]): Promise<WeekRow
          percentile_cont(0.5) within group (order by v) filter (where not d.this_week) as median_prev7d
        from d cross join lateral unnest(d.recall_ms) as v group by d.user_id
      )
-     select st.user_id, sums.attempts7d, sums.correct7d, sums.active_ms7d, medians.median7d, medians.median_prev7d,
+     select st.user_id, sums.attempts7d, sums.correct7d, sums.active_ms7d, sums.attempts_prev7d,
+       sums.correct_prev7d, medians.median7d, medians.median_prev7d,
        (select p.last_at from progress_days p where p.user_id = st.user_id and p.instrument_key = ?
           and p.drill = ? order by p.day desc limit 1) as last_at
      from st left join sums using (user_id) left join medians using (user_id)`,
@@ -85,6 +91,26 @@ export async function weakestPlaces(
     [studentIds, ALL_DRILLS, NO_INSTRUMENT, limit],
   )
   return rows
+}
+
+export interface ActiveInstrumentRow {
+  user_id: string
+  name: string
+  preset_id: string | null
+  tuning: number[]
+  handedness: 'right' | 'left'
+  accidentals: 'sharp' | 'flat'
+}
+
+/** Each student's active instrument (none for a student who has not set one up). */
+export async function activeInstruments(
+  db: Db,
+  studentIds: string[],
+): Promise<ActiveInstrumentRow[]> {
+  return db('instruments')
+    .whereIn('user_id', studentIds)
+    .andWhere('is_active', true)
+    .select('user_id', 'name', 'preset_id', 'tuning', 'handedness', 'accidentals')
 }
 
 interface MembershipRow {

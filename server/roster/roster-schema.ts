@@ -10,7 +10,7 @@ const RosterFilterFields = {
   search: z.string().trim().max(100, 'Use at most 100 characters.').optional(),
   studio: z.uuid('Not a valid studio id.').optional(),
   status: z.enum(ROSTER_STATUSES, 'Choose behind, on-track or inactive.').optional(),
-  sortBy: z.enum(ROSTER_SORT_KEYS, 'Not a column the roster sorts by.').default('name'),
+  sortBy: z.enum(ROSTER_SORT_KEYS, 'Not a column the roster sorts by.').default('attention'),
   sortDesc: z.stringbool({ error: 'Use true or false.' }).default(false),
 }
 

@@ -1,10 +1,13 @@
-// The teacher's roster: each student's practice figures, plan progress, weak spots and a status.
+// The teacher's roster: each student's practice figures, plan progress, weak spots, a status and
+// the reasons to look at them now.
 import { assertCanReadStudent } from '../access/student-access'
 import type { AppContext } from '../context'
 import { assignmentRows } from '../assignments/assignments-service'
 import { buildAssignments } from '../plans/assigned-plans'
 import type { Assignment } from '../../src/contract/assignments'
 import { rosterSummary, type RosterStudent } from './roster-summary'
+import { attentionReasons } from './attention'
+import { timeZoneOf } from '../users/users-repository'
 import type { PublicUser } from '../users/users-schema'
 import type { RosterRow, RosterStatus, WeakSpot } from '../../src/contract/roster'
 
@@ -53,7 +56,36 @@ function planSummary(assignments: Assignment[]) {
   }
 }
 
-function toRosterRow(student: RosterStudent, assignments: Assignment[], now: Date): RosterRow {
+function attentionOf(
+  student: RosterStudent,
+  assignments: Assignment[],
+  now: Date,
+  timeZone: string,
+) {
+  const lastPracticeAt = student.lastPracticeAt ? new Date(student.lastPracticeAt) : null
+  return attentionReasons(
+    {
+      lastPracticeAt,
+      week: { accuracy: student.accuracy7d, answers: student.attempts7d },
+      previousWeek: { accuracy: student.accuracyPrev7d, answers: student.attemptsPrev7d },
+      recall: {
+        medianMs: student.medianRecallMs7d,
+        previousMedianMs: student.medianRecallMsPrev7d,
+        ...student.recallTrend,
+      },
+      assignments,
+      timeZone,
+    },
+    now,
+  )
+}
+
+function toRosterRow(
+  student: RosterStudent,
+  assignments: Assignment[],
+  now: Date,
+  timeZone: string,
+): RosterRow {
   const lastPracticeAt = student.lastPracticeAt ? new Date(student.lastPracticeAt) : null
   return {
     id: student.studentId,
@@ -72,6 +104,8 @@ function toRosterRow(student: RosterStudent, assignments: Assignment[], now: Dat
     ...planSummary(assignments),
     weakSpots: student.weakestPositions.map(weakSpotOf),
     status: rosterStatus(lastPracticeAt, assignments, now),
+    attention: attentionOf(student, assignments, now, timeZone),
+    instrument: student.instrument,
   }
 }
 
@@ -90,12 +124,16 @@ export async function rosterRows(
   )
   const ids = students.map((s) => s.studentId)
   const rows = ids.length ? await assignmentRows(ctx, { teacherId, studentIds: ids }) : []
-  const assignments = await buildAssignments(ctx, rows, now)
+  const [assignments, timeZone] = await Promise.all([
+    buildAssignments(ctx, rows, now),
+    timeZoneOf(ctx.db, teacherId),
+  ])
   return students.map((s) =>
     toRosterRow(
       s,
       assignments.filter((a) => a.student.id === s.studentId),
       now,
+      timeZone,
     ),
   )
 }

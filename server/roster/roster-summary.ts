@@ -7,6 +7,8 @@
 //     lastPracticeAt: ISO string | null,
 //     attempts7d, minutes7d,            // last 7 days in the student's time zone (today included)
 //     accuracy7d: 0..1 | null,          // right answers / answers, last 7 days
+//     attemptsPrev7d, accuracyPrev7d,   // the same for the 7 days before
+//     instrument: { name, description, leftHanded } | null, // the active instrument
 //     medianRecallMs7d: number | null,  // median response time of right answers, last 7 days
 //     medianRecallMsPrev7d: number | null, // the same for the 7 days before
 //     recallTrend: { change: number | null, direction: 'faster' | 'slower' | 'steady' | null },
@@ -19,7 +21,15 @@ import { pitchClassName, pitchName, stringNames } from '../../src/theory'
 import { compareWeakPlaces } from '../../src/contract/weak-places'
 import { teacherStudents } from '../access/access-repository'
 import type { AppContext } from '../context'
-import { weakestPlaces, weekFigures, type WeakRow, type WeekRow } from './roster-repository'
+import {
+  activeInstruments,
+  weakestPlaces,
+  weekFigures,
+  type WeakRow,
+  type WeekRow,
+} from './roster-repository'
+import type { RosterInstrument } from '../../src/contract/roster'
+import { instrumentOf } from './roster-instrument'
 
 /** One student of a teacher's roster (the meaning of each field is above). */
 export interface RosterStudent {
@@ -31,6 +41,9 @@ export interface RosterStudent {
   attempts7d: number
   minutes7d: number
   accuracy7d: number | null
+  attemptsPrev7d: number
+  accuracyPrev7d: number | null
+  instrument: RosterInstrument | null
   medianRecallMs7d: number | null
   medianRecallMsPrev7d: number | null
   recallTrend: { change: number | null; direction: 'faster' | 'slower' | 'steady' | null }
@@ -66,7 +79,10 @@ export function recallTrend(
 
 function weekPart(w: WeekRow | undefined) {
   const attempts = Number(w?.attempts7d ?? 0)
+  const before = Number(w?.attempts_prev7d ?? 0)
   return {
+    attemptsPrev7d: before,
+    accuracyPrev7d: before > 0 ? Number(w?.correct_prev7d ?? 0) / before : null,
     lastPracticeAt: w?.last_at ? w.last_at.toISOString() : null,
     attempts7d: attempts,
     minutes7d: Math.round(Number(w?.active_ms7d ?? 0) / 6000) / 10,
@@ -112,11 +128,13 @@ export async function rosterSummary(
   const members = await teacherStudents(ctx.db, teacherId)
   if (!members.length) return { students: [] }
   const ids = members.map((m) => m.id)
-  const [weeks, weak] = await Promise.all([
+  const [weeks, weak, instruments] = await Promise.all([
     weekFigures(ctx.db, ids),
     weakestPlaces(ctx.db, ids, WEAKEST_COUNT),
+    activeInstruments(ctx.db, ids),
   ])
   const weekOf = new Map(weeks.map((w) => [w.user_id, w]))
+  const instrumentRow = new Map(instruments.map((i) => [i.user_id, i]))
   return {
     students: members.map((m) => ({
       studentId: m.id,
@@ -124,6 +142,7 @@ export async function rosterSummary(
       email: m.email,
       studios: m.studios,
       ...weekPart(weekOf.get(m.id)),
+      instrument: instrumentOf(instrumentRow.get(m.id)),
       weakestPositions: weak
         .filter((w) => w.user_id === m.id)
         .map(toWeak)
