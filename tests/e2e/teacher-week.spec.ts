@@ -1,0 +1,85 @@
+// The teacher's week in the browser (issue 16): the demo roster puts the student who needs attention
+// first with the reason in words and each student's instrument; on a phone every student is a short
+// line; the student page says why; the new-password hint keeps clear of the next field.
+import type { Browser, Page } from 'playwright-core'
+import { afterAll, beforeAll, describe, expect, it } from 'vitest'
+import {
+  LAPTOP,
+  launchBrowser,
+  newPage,
+  PHONE,
+  screenshot,
+  signInThroughUi,
+} from '../helpers/browser'
+
+let browser: Browser
+let teacher: Page
+beforeAll(async () => {
+  browser = await launchBrowser()
+  teacher = (await newPage(browser, LAPTOP)).page
+  await signInThroughUi(teacher, 'teacher@cedarhollow.test')
+  await teacher.waitForURL('**/studio')
+})
+afterAll(async () => {
+  await browser?.close()
+})
+
+describe('who needs attention', () => {
+  it('the roster names the demo student who stopped practising, with the reason and the instrument', async () => {
+    const rafe = teacher.getByTestId('roster').locator('tr', { hasText: 'Rafe Okonkwo' })
+    await expect.poll(() => rafe.textContent()).toMatch(/No practice for \d+ days/)
+    expect(await rafe.getByTestId('roster-instrument').textContent()).toContain(
+      '4-string bass, drop D (D A D G)',
+    )
+    const lucia = teacher.getByTestId('roster').locator('tr', { hasText: 'Lucia Amari' })
+    expect(await lucia.textContent()).toContain('6-string guitar')
+    // needs-attention first: every row with a reason comes before every row without one
+    const flagged = await teacher
+      .getByTestId('roster')
+      .locator('tbody tr')
+      .evaluateAll((rows) => rows.map((r) => !!r.querySelector('[data-testid="attention-reason"]')))
+    expect(flagged[0]).toBe(true)
+    expect(flagged).toEqual([...flagged].sort((a, b) => Number(b) - Number(a)))
+    await screenshot(teacher, 'teacher-week-roster-laptop')
+  })
+
+  it('the student page says why in words', async () => {
+    await teacher.getByTestId('roster').getByRole('link', { name: 'Rafe Okonkwo' }).click()
+    await teacher.waitForURL('**/studio/students/*')
+    await expect
+      .poll(() => teacher.getByTestId('glance-attention').textContent())
+      .toMatch(/No practice for \d+ days/)
+    expect(await teacher.getByTestId('student-glance').textContent()).toContain('drop D')
+  })
+
+  it('on a phone each student is a short line (at most 150 px) with the first reason', async () => {
+    await teacher.setViewportSize(PHONE)
+    await teacher.goto('/studio')
+    const items = teacher.getByTestId('roster-phone-item')
+    await expect.poll(() => items.count()).toBeGreaterThanOrEqual(5)
+    const heights = await items.evaluateAll((els) =>
+      els.map((e) => e.getBoundingClientRect().height),
+    )
+    expect(Math.max(...heights)).toBeLessThanOrEqual(150)
+    expect(await teacher.getByTestId('roster').textContent()).toMatch(/No practice for \d+ days/)
+    const width = await teacher.evaluate(() => document.documentElement.scrollWidth)
+    expect(width).toBeLessThanOrEqual(PHONE.width)
+    await screenshot(teacher, 'teacher-week-roster-phone')
+    await teacher.setViewportSize(LAPTOP)
+  })
+})
+
+describe('choosing a new password', () => {
+  it('the hint under the new password ends above the next field', async () => {
+    const { page } = await newPage(browser, PHONE)
+    await page.goto('/reset-password?token=not-a-real-token-but-the-form-shows')
+    const hint = page.getByText('At least 10 characters')
+    await expect.poll(() => hint.isVisible()).toBe(true)
+    const hintBox = (await hint.boundingBox())!
+    const next = page.locator('.v-input', { hasText: 'Repeat the new password' })
+    const field = (await next.locator('.v-field').boundingBox())!
+    expect(hintBox.y + hintBox.height).toBeLessThanOrEqual(field.y - 4)
+    await screenshot(page, 'teacher-week-reset-form-phone')
+    await page.context().close()
+  })
+})
