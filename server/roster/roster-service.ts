@@ -7,6 +7,7 @@ import { buildAssignments } from '../plans/assigned-plans'
 import type { Assignment } from '../../src/contract/assignments'
 import { rosterSummary, type RosterStudent } from './roster-summary'
 import { attentionReasons } from './attention'
+import { lastLessonsOf } from '../lessons/lessons-service'
 import { timeZoneOf } from '../users/users-repository'
 import type { PublicUser } from '../users/users-schema'
 import type { RosterRow, RosterStatus, WeakSpot } from '../../src/contract/roster'
@@ -56,12 +57,13 @@ function planSummary(assignments: Assignment[]) {
   }
 }
 
-function attentionOf(
-  student: RosterStudent,
-  assignments: Assignment[],
-  now: Date,
-  timeZone: string,
-) {
+interface RowContext {
+  now: Date
+  timeZone: string
+  lastLessonAt: Date | null
+}
+
+function attentionOf(student: RosterStudent, assignments: Assignment[], at: RowContext) {
   const lastPracticeAt = student.lastPracticeAt ? new Date(student.lastPracticeAt) : null
   return attentionReasons(
     {
@@ -74,18 +76,15 @@ function attentionOf(
         ...student.recallTrend,
       },
       assignments,
-      timeZone,
+      timeZone: at.timeZone,
+      lastLessonAt: at.lastLessonAt,
     },
-    now,
+    at.now,
   )
 }
 
-function toRosterRow(
-  student: RosterStudent,
-  assignments: Assignment[],
-  now: Date,
-  timeZone: string,
-): RosterRow {
+function toRosterRow(student: RosterStudent, assignments: Assignment[], at: RowContext): RosterRow {
+  const { now } = at
   const lastPracticeAt = student.lastPracticeAt ? new Date(student.lastPracticeAt) : null
   return {
     id: student.studentId,
@@ -104,7 +103,7 @@ function toRosterRow(
     ...planSummary(assignments),
     weakSpots: student.weakestPositions.map(weakSpotOf),
     status: rosterStatus(lastPracticeAt, assignments, now),
-    attention: attentionOf(student, assignments, now, timeZone),
+    attention: attentionOf(student, assignments, at),
     instrument: student.instrument,
   }
 }
@@ -124,16 +123,16 @@ export async function rosterRows(
   )
   const ids = students.map((s) => s.studentId)
   const rows = ids.length ? await assignmentRows(ctx, { teacherId, studentIds: ids }) : []
-  const [assignments, timeZone] = await Promise.all([
+  const [assignments, timeZone, lessons] = await Promise.all([
     buildAssignments(ctx, rows, now),
     timeZoneOf(ctx.db, teacherId),
+    lastLessonsOf(ctx, teacherId, ids, now),
   ])
   return students.map((s) =>
     toRosterRow(
       s,
       assignments.filter((a) => a.student.id === s.studentId),
-      now,
-      timeZone,
+      { now, timeZone, lastLessonAt: lessons.get(s.studentId) ?? null },
     ),
   )
 }

@@ -1,7 +1,15 @@
 // Calendar days and local date-times (issue 16: "today" for yesterday evening; e-mails in UTC).
 // Offsets from the IANA time zone database (Europe/Tallinn UTC+2 in winter, America/Chicago UTC−6).
 import { describe, expect, it } from 'vitest'
-import { calendarDaysBetween, isTimeZone, localDay, mailDateTime, sheetDateTime } from './local-time'
+import {
+  calendarDaysBetween,
+  isTimeZone,
+  localDateTime,
+  localDay,
+  mailDateTime,
+  sheetDateTime,
+  zonedTimeToUtc,
+} from './local-time'
 
 describe('local time', () => {
   it('counts calendar days in the viewer’s zone, not 24-hour blocks', () => {
@@ -21,5 +29,26 @@ describe('local time', () => {
   it('knows IANA names and refuses made-up ones', () => {
     expect(isTimeZone('Europe/Tallinn')).toBe(true)
     expect(isTimeZone('Mars/Olympus')).toBe(false)
+  })
+})
+
+describe('zonedTimeToUtc', () => {
+  // IANA tz database: Tallinn UTC+2 in winter, UTC+3 in summer (from 29 Mar 2026, 03:00 local)
+  it('turns a wall-clock time in a zone into the instant', () => {
+    expect(zonedTimeToUtc('2026-12-08', '16:30', 'Europe/Tallinn').toISOString()).toBe(
+      '2026-12-08T14:30:00.000Z',
+    )
+    expect(zonedTimeToUtc('2026-07-07', '16:30', 'Europe/Tallinn').toISOString()).toBe(
+      '2026-07-07T13:30:00.000Z',
+    )
+    expect(zonedTimeToUtc('2026-12-08', '09:00', 'America/Chicago').toISOString()).toBe(
+      '2026-12-08T15:00:00.000Z',
+    )
+  })
+  it('keeps the wall-clock time across a daylight-saving change, and reads back', () => {
+    const before = zonedTimeToUtc('2026-03-24', '17:00', 'Europe/Tallinn')
+    const after = zonedTimeToUtc('2026-03-31', '17:00', 'Europe/Tallinn')
+    expect(after.getTime() - before.getTime()).toBe(7 * 864e5 - 3600e3)
+    expect(localDateTime(after, 'Europe/Tallinn')).toEqual({ date: '2026-03-31', time: '17:00' })
   })
 })

@@ -56,3 +56,27 @@ export function sheetDateTime(at: Date, timeZone: string): string {
   const part = (type: string) => parts.find((p) => p.type === type)?.value ?? ''
   return `${localDay(at, timeZone)} ${part('hour')}:${part('minute')}:${part('second')}`
 }
+
+/** Minutes a zone is ahead of UTC at an instant (Tallinn in winter: 120). */
+function offsetMinutes(at: Date, timeZone: string): number {
+  const [date, time] = sheetDateTime(at, timeZone).split(' ') as [string, string]
+  return Math.round(
+    (Date.parse(`${date}T${time}Z`) - Math.floor(at.getTime() / 1000) * 1000) / 60000,
+  )
+}
+
+/**
+ * The instant of a wall-clock date and time in a zone ("2026-12-08", "16:30", "Europe/Tallinn" →
+ * 14:30 UTC); across a daylight-saving change the offset of that day is used.
+ */
+export function zonedTimeToUtc(date: string, time: string, timeZone: string): Date {
+  const wall = Date.parse(`${date}T${time}:00Z`)
+  const first = wall - offsetMinutes(new Date(wall), timeZone) * 60000
+  return new Date(wall - offsetMinutes(new Date(first), timeZone) * 60000)
+}
+
+/** The local date and time of an instant in a zone: { date: "2026-12-08", time: "16:30" }. */
+export function localDateTime(at: Date, timeZone: string): { date: string; time: string } {
+  const [date, time] = sheetDateTime(at, timeZone).split(' ') as [string, string]
+  return { date, time: time.slice(0, 5) }
+}
