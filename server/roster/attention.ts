@@ -1,7 +1,7 @@
 // Who needs the teacher's attention, and why in words: plans overdue or behind, no practice (since
 // the last lesson when there was one, else for a week), accuracy falling, recall slowing. Pure, so
 // the rules are unit-tested; the roster sorts by the weight of the reasons.
-import { calendarDaysBetween, localDay } from '../../src/contract/local-time'
+import { calendarDaysBetween } from '../../src/contract/local-time'
 import type { Assignment } from '../../src/contract/assignments'
 import type { AttentionKind, AttentionReason, RecallTrend } from '../../src/contract/roster'
 
@@ -50,7 +50,12 @@ function planReasons(assignments: Assignment[], now: Date): AttentionReason[] {
 
 function practiceReason(f: AttentionFacts, now: Date): AttentionReason[] {
   if (f.lastLessonAt && (!f.lastPracticeAt || f.lastPracticeAt < f.lastLessonAt)) {
-    const day = localDay(f.lastLessonAt, f.timeZone)
+    const day = new Intl.DateTimeFormat('en-GB', {
+      timeZone: f.timeZone,
+      weekday: 'short',
+      day: 'numeric',
+      month: 'short',
+    }).format(f.lastLessonAt)
     return [reason('no-practice', `No practice since the lesson on ${day}`)]
   }
   if (!f.lastPracticeAt) return [reason('no-practice', 'No practice yet')]

@@ -119,8 +119,14 @@ describe('since the last lesson', () => {
       { correct: true, responseMs: 900, minutesAgo: 5 * 24 * 60 }, // before the lesson
     ])
     const roster = await teacher.agent.get('/api/studio/roster').query({ search: 'Lesson Student' })
+    const lessonDay = new Intl.DateTimeFormat('en-GB', {
+      timeZone: 'UTC',
+      weekday: 'short',
+      day: 'numeric',
+      month: 'short',
+    }).format(new Date(`${date}T08:00:00Z`))
     expect(roster.body.items[0].attention.map((r: { text: string }) => r.text)).toContain(
-      `No practice since the lesson on ${date}`,
+      `No practice since the lesson on ${lessonDay}`,
     )
     await insertAttempts(api.ctx, student.user.id, null, [
       { correct: true, responseMs: 900, minutesAgo: 60 },

@@ -47,7 +47,7 @@ describe('attentionReasons', () => {
   it('names no practice since the last lesson when lessons are kept', () => {
     const f = facts({ lastPracticeAt: daysAgo(3), lastLessonAt: daysAgo(2) })
     expect(attentionReasons(f, NOW)).toEqual([
-      { kind: 'no-practice', text: 'No practice since the lesson on 2026-12-01' },
+      { kind: 'no-practice', text: 'No practice since the lesson on Tue 1 Dec' },
     ])
   })
 
