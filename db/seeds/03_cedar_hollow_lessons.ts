@@ -1,4 +1,4 @@
-// Demo lessons for the Cedar Hollow studio: Marta teaches Noor weekly on Tuesdays at 17:00 (Tallinn
+// Demo lessons for the Cedar Hollow studio: Marta teaches Noor weekly at 17:00 (Tallinn
 // time) with last week's lesson attended and noted, and had a lesson with Rafe, who has not
 // practised since. Runs once (skips when Marta has lessons).
 import type { Knex } from 'knex'
