@@ -23,6 +23,7 @@ import { mountInvitations } from './invitations/invitations-routes'
 import { planRoutes } from './plans/plans-routes'
 import { mountRoster } from './roster/roster-routes'
 import { mountStudios } from './studios/studios-routes'
+import { lessonRoutes } from './lessons/lessons-routes'
 import { worksheetRoutes } from './worksheets/worksheets-routes'
 
 // Same-origin only; blob: for recorded audio, audio worklets and exported board images.
@@ -48,6 +49,7 @@ function apiRouter(ctx: AppContext) {
   mountStudios(api, ctx)
   mountRoster(api, ctx)
   api.use('/plans', planRoutes(ctx))
+  api.use('/lessons', lessonRoutes(ctx))
   mountAssignments(api, ctx)
   api.use('/instruments', instrumentsRoutes(ctx))
   api.use('/attempts', attemptsRoutes(ctx))

@@ -60,6 +60,7 @@ export async function seed(knex: Knex): Promise<void> {
         instrument: person.instrument,
         seed: 1000 + index,
         now,
+        restDays: person.restDays,
       })
       await trx.batchInsert('attempts', history, 500)
     }

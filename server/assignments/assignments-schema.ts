@@ -24,7 +24,19 @@ export const ACCEPTED_AUDIO: Readonly<Record<string, string>> = {
   mp4: 'audio/mp4',
 }
 
-export const RecordingUploadSchema = z.object({ planItemId: z.uuid('Not a valid plan item id.') })
+/** Longest take the browser records (useMediaRecorder stops at 10 minutes), with slack. */
+export const MAX_RECORDING_MS = 11 * 60 * 1000
+
+export const RecordingUploadSchema = z.object({
+  planItemId: z.uuid('Not a valid plan item id.'),
+  /** The recorded length, sent with takes recorded in the browser. */
+  durationMs: z.coerce
+    .number('Give the length in milliseconds.')
+    .int('Give the length in whole milliseconds.')
+    .min(1, 'A take lasts at least a millisecond.')
+    .max(MAX_RECORDING_MS, 'Takes recorded here last at most 10 minutes.')
+    .optional(),
+})
 export const RecordingParamsSchema = z.object({
   id: z.uuid('Not a valid assignment id.'),
   recordingId: z.uuid('Not a valid recording id.'),

@@ -66,7 +66,7 @@ async function fileUpload(
   }
   if (!upload)
     throw badRequest('Attach an audio file.', { file: ['Choose a recording to upload.'] })
-  const target = { assignmentId: at.assignmentId, planItemId: body.planItemId }
+  const target = { assignmentId: at.assignmentId, ...body }
   return uploadRecording(ctx, req.user!, target, upload)
 }
 

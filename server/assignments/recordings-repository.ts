@@ -13,6 +13,7 @@ interface RecordingRow {
   size_bytes: number
   original_name: string
   created_at: Date
+  duration_ms: number | null
 }
 
 export interface RecordingRecord extends RecordingSummary {
@@ -33,6 +34,7 @@ const toRecord = (r: RecordingRow): RecordingRecord => ({
   sizeBytes: r.size_bytes,
   originalName: r.original_name,
   createdAt: r.created_at.toISOString(),
+  durationMs: r.duration_ms,
 })
 
 export const toSummary = ({
@@ -42,6 +44,7 @@ export const toSummary = ({
   sizeBytes,
   originalName,
   createdAt,
+  durationMs,
 }: RecordingRecord): RecordingSummary => ({
   id,
   planItemId,
@@ -49,6 +52,7 @@ export const toSummary = ({
   sizeBytes,
   originalName,
   createdAt,
+  durationMs,
 })
 
 export async function insertRecording(
@@ -65,6 +69,7 @@ export async function insertRecording(
       extension: input.extension,
       size_bytes: input.sizeBytes,
       original_name: input.originalName,
+      duration_ms: input.durationMs,
     })
     .returning('*')
   return toRecord(row as RecordingRow)

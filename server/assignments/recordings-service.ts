@@ -58,10 +58,13 @@ export async function checkUploader(ctx: AppContext, student: PublicUser, assign
   if (assignment.studentId !== student.id) throw forbidden(NOT_YOURS)
 }
 
+/** The item a take is filed under, and its length as the browser measured it (if recorded there). */
+type RecordingTarget = { assignmentId: string; planItemId: string; durationMs?: number }
+
 async function fileUnderItem(
   ctx: AppContext,
   student: PublicUser,
-  target: { assignmentId: string; planItemId: string },
+  target: RecordingTarget,
   upload: StoredUpload,
 ) {
   const { assignmentId, planItemId } = target
@@ -76,6 +79,7 @@ async function fileUnderItem(
       storageKey: upload.storageKey,
       sizeBytes: upload.size,
       originalName: cleanName(upload.originalname),
+      durationMs: target.durationMs ?? null,
       ...format,
     },
     MAX_RECORDINGS_PER_ITEM,
@@ -93,7 +97,7 @@ async function fileUnderItem(
 export async function uploadRecording(
   ctx: AppContext,
   student: PublicUser,
-  target: { assignmentId: string; planItemId: string },
+  target: RecordingTarget,
   upload: StoredUpload,
 ) {
   try {

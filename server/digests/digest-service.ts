@@ -5,7 +5,7 @@ import { assignmentRows } from '../assignments/assignments-service'
 import { buildAssignments } from '../plans/assigned-plans'
 import { dueSoonMail } from '../plans/plans-mail'
 import { rosterRows } from '../roster/roster-service'
-import { findUserById } from '../users/users-repository'
+import { findUserById, timeZoneOf } from '../users/users-repository'
 import type { OutgoingMail } from '../lib/mail'
 import { digestMail } from './digest-mail'
 import {
@@ -89,7 +89,11 @@ export async function sendDueSoonReminders(ctx: AppContext, now: Date) {
         ctx,
         'due-soon',
         `${assignment.id}:${assignment.dueAt}`,
-        dueSoonMail(ctx.config, student, plan),
+        dueSoonMail(
+          ctx.config,
+          { ...student, timeZone: await timeZoneOf(ctx.db, student.id) },
+          plan,
+        ),
       )
     )
       sent += 1

@@ -1,9 +1,17 @@
 // Text of the invitation e-mail.
 import type { OutgoingMail } from '../lib/mail'
+import { mailDateTime } from '../../src/contract/local-time'
 
 export function invitationMail(
   email: string,
-  invite: { teacherName: string; studioName: string; link: string; expiresAt: Date },
+  invite: {
+    teacherName: string
+    studioName: string
+    link: string
+    expiresAt: Date
+    /** The invitee's zone when they have an account, else the teacher's. */
+    timeZone: string
+  },
 ): OutgoingMail {
   return {
     to: email,
@@ -17,7 +25,7 @@ export function invitationMail(
       'Open this link to accept (you can create an account or sign in to an existing one):',
       invite.link,
       '',
-      `The link works once and expires on ${invite.expiresAt.toUTCString()}.`,
+      `The link works once and expires on ${mailDateTime(invite.expiresAt, invite.timeZone)}.`,
       'If you were not expecting this, ignore the message; nothing happens unless you accept.',
     ].join('\n'),
   }

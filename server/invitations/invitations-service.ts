@@ -4,7 +4,7 @@ import { hashPassword } from '../auth/password'
 import { publicUrl } from '../config'
 import type { AppContext } from '../context'
 import { AppError, badRequest, conflict, forbidden, notFound } from '../lib/errors'
-import { findUserByEmail, insertUser, type UserRecord } from '../users/users-repository'
+import { findUserByEmail, insertUser, timeZoneOf, type UserRecord } from '../users/users-repository'
 import type { PublicUser } from '../users/users-schema'
 import {
   consumeInvitation,
@@ -38,7 +38,11 @@ async function mailInvitation(
   expiresAt: Date,
 ) {
   const link = `${publicUrl(ctx.config)}/invitations/accept?token=${encodeURIComponent(token)}`
-  await ctx.mailer.send(invitationMail(invitation.email, { ...invitation, link, expiresAt }))
+  const invitee = await findUserByEmail(ctx.db, invitation.email)
+  const timeZone = await timeZoneOf(ctx.db, invitee?.id ?? invitation.teacherId)
+  await ctx.mailer.send(
+    invitationMail(invitation.email, { ...invitation, link, expiresAt, timeZone }),
+  )
 }
 
 async function reload(ctx: AppContext, id: string) {
@@ -104,7 +108,6 @@ export const listInvitations = (
 ) => listRows(ctx.db, teacherId, { studioId: q.studio, openOnly: q.status === 'open' })
 
 const UNUSABLE: Record<string, string> = {
-  accepted: 'This invitation was already accepted.',
   revoked: 'This invitation was withdrawn by the teacher.',
   expired: 'This invitation has expired.',
 }
@@ -113,6 +116,13 @@ const UNUSABLE: Record<string, string> = {
 async function usableInvitation(ctx: AppContext, token: string) {
   const invitation = await findInvitationByToken(ctx.db, sha256(token))
   if (!invitation) throw notFound('That invitation')
+  // Accepted already: the student has an account and only needs to sign in, not a new link.
+  if (invitation.status === 'accepted')
+    throw new AppError(
+      'invitation_accepted',
+      'This invitation was already accepted. Sign in to reach your studio.',
+      410,
+    )
   const reason = UNUSABLE[invitation.status]
   if (reason)
     throw new AppError('invitation_unusable', `${reason} Ask your teacher to send a new one.`, 410)

@@ -39,12 +39,13 @@ export function planRoutes(ctx: AppContext): Router {
     const { id } = parse(PlanIdParamsSchema, req, 'params')
     res.json({ plan: await plans.getPlan(ctx, req.user!.id, id) })
   })
-  router.put('/:id', teacher, async (req, res) => {
+  const movingDue = (req: Request) => req.body?.dueAt !== undefined
+  router.put('/:id', teacher, mailLimit(ctx, 'due-date', movingDue), async (req, res) => {
     const { params, body } = parseRequest(req, {
       params: PlanIdParamsSchema,
       body: PlanUpdateSchema,
     })
-    res.json({ plan: await plans.updatePlan(ctx, req.user!.id, params.id, body) })
+    res.json({ plan: await plans.updatePlan(ctx, req.user!, params.id, body) })
   })
   router.delete('/:id', teacher, async (req, res) => {
     await plans.deletePlan(ctx, req.user!.id, parse(PlanIdParamsSchema, req, 'params').id)

@@ -22,7 +22,8 @@ import {
   updatePlan as replacePlan,
   type PlanRecord,
 } from './plans-repository'
-import { planAssignedMail } from './plans-mail'
+import { dueDateChangedMail, planAssignedMail } from './plans-mail'
+import { timeZonesOf } from '../users/users-repository'
 import type {
   Plan,
   PlanCreateInput,
@@ -67,11 +68,14 @@ async function announce(
   added: { ids: string[]; students: Students },
 ) {
   const plan = await loadPlan(ctx, planId)
+  const zones = await timeZonesOf(ctx.db, added.ids)
+  const recipient = (id: string) => ({
+    ...added.students.get(id)!,
+    timeZone: zones.get(id) ?? 'UTC',
+  })
   await notify(
     ctx,
-    added.ids.map((id) =>
-      planAssignedMail(ctx.config, added.students.get(id)!, plan, teacher.name),
-    ),
+    added.ids.map((id) => planAssignedMail(ctx.config, recipient(id), plan, teacher.name)),
   )
   return plan
 }
@@ -101,17 +105,38 @@ export async function createPlan(ctx: AppContext, teacher: PublicUser, input: Pl
 
 export async function updatePlan(
   ctx: AppContext,
-  teacherId: string,
+  teacher: PublicUser,
   planId: string,
   input: PlanUpdateInput,
 ) {
-  const current = await getPlan(ctx, teacherId, planId)
+  const current = await getPlan(ctx, teacher.id, planId)
   const sent = new Set(input.items.map((item) => item.id))
   const removed = current.items.filter((item) => !sent.has(item.id)).map((item) => item.id)
   const keys = await recordingKeys(ctx, { itemIds: removed })
   await ctx.db.transaction((trx) => replacePlan(trx, planId, input))
   await dropRecordingFiles(ctx, keys)
-  return loadPlan(ctx, planId)
+  const plan = await loadPlan(ctx, planId)
+  if (sameInstant(current.dueAt, plan.dueAt)) return plan
+  await announceDueDate(ctx, teacher, plan)
+  return plan
+}
+
+const sameInstant = (a: string | null, b: string | null) =>
+  a === b || (a !== null && b !== null && Date.parse(a) === Date.parse(b))
+
+/** Tells the plan's students that its due date moved (or went), each in their own time zone. */
+async function announceDueDate(ctx: AppContext, teacher: PublicUser, plan: Plan) {
+  const ids = plan.assignees.map((a) => a.studentId)
+  const [students, zones] = await Promise.all([
+    teacherStudents(ctx.db, teacher.id),
+    timeZonesOf(ctx.db, ids),
+  ])
+  const mails = students
+    .filter((s) => zones.has(s.id))
+    .map((s) =>
+      dueDateChangedMail(ctx.config, { ...s, timeZone: zones.get(s.id)! }, plan, teacher.name),
+    )
+  await notify(ctx, mails)
 }
 
 /** A copy with the same notes, items and due date, assigned to nobody. */

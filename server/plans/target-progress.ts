@@ -1,7 +1,12 @@
 // Progress toward a plan item's target, computed from the student's attempts of that item. Pure:
 // plain data in, plain data out, so the rules are unit-tested with hand-computed cases.
 import type { DrillPreset } from '../../src/contract/drills'
-import { presetKeys, type PracticeTarget, type TargetProgress } from '../../src/contract/targets'
+import {
+  presetKeys,
+  SESSION_MIN_ANSWERS,
+  type PracticeTarget,
+  type TargetProgress,
+} from '../../src/contract/targets'
 import { pitchClassOf } from '../../src/theory'
 
 /** One graded answer practised for a plan item (the fields the targets look at). */
@@ -60,12 +65,14 @@ function accuracyProgress(
   }
 }
 
-/** At least `count` distinct practice sessions of the item. */
+/** At least `count` practice sessions of the item, each of SESSION_MIN_ANSWERS answers or more. */
 function sessionsProgress(
   target: { count: number },
   attempts: readonly ItemAttempt[],
 ): TargetProgress {
-  const sessions = new Set(attempts.map((a) => a.sessionId)).size
+  const answersOf = new Map<string, number>()
+  for (const a of attempts) answersOf.set(a.sessionId, (answersOf.get(a.sessionId) ?? 0) + 1)
+  const sessions = [...answersOf.values()].filter((n) => n >= SESSION_MIN_ANSWERS).length
   return {
     kind: 'sessions',
     met: sessions >= target.count,

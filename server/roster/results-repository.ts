@@ -1,4 +1,5 @@
-// One student's graded answers for the CSV export (the teacher's own plan titles only).
+// One student's graded answers for the CSV export (the teacher's own plan titles only), with each
+// session numbered in the order the student practised.
 import type { Db } from '../lib/db'
 
 export interface ResultRow {
@@ -10,8 +11,11 @@ export interface ResultRow {
   answer: string
   correct: boolean
   response_ms: number
-  session_id: string
+  /** 1 for the student's first session ever, 2 for the next… (by each session's first answer) */
+  session_number: number
   plan_title: string | null
+  /** How the answer's instrument spells notes; null when it was deleted since. */
+  accidentals: 'sharp' | 'flat' | null
 }
 
 export const MAX_RESULT_ROWS = 50_000
@@ -23,7 +27,13 @@ export async function studentResults(
   from: Date,
   to: Date,
 ): Promise<ResultRow[]> {
-  return db('attempts as a')
+  const sessions = db('attempts')
+    .where('user_id', studentId)
+    .groupBy('session_id')
+    .select('session_id', db.raw('row_number() over (order by min(created_at)) as session_number'))
+  const rows = await db('attempts as a')
+    .join(sessions.as('n'), 'n.session_id', 'a.session_id')
+    .leftJoin('instruments as ins', 'ins.id', 'a.instrument_id')
     .leftJoin('plan_items as i', 'i.id', 'a.plan_item_id')
     .leftJoin('plans as p', function () {
       this.on('p.id', 'i.plan_id').andOnVal('p.teacher_id', teacherId)
@@ -42,5 +52,7 @@ export async function studentResults(
       'a.answer',
       'a.correct',
     )
-    .select('a.response_ms', 'a.session_id', 'p.title as plan_title')
+    .select('a.response_ms', 'a.session_id', 'n.session_number', 'p.title as plan_title')
+    .select('ins.accidentals')
+  return rows.map((r: ResultRow) => ({ ...r, session_number: Number(r.session_number) }))
 }

@@ -1,10 +1,13 @@
 // Filtering, sorting and paging the roster rows (pure, so the rules are easy to test).
 import type { RosterFilter, RosterQuery } from './roster-schema'
+import { attentionScore } from './attention'
 import type { RosterPage, RosterRow, RosterSortKey, RosterStatus } from '../../src/contract/roster'
 
 const STATUS_ORDER: Record<RosterStatus, number> = { behind: 0, inactive: 1, 'on-track': 2 }
 
 const SORT_VALUE: Record<RosterSortKey, (row: RosterRow) => string | number | null> = {
+  // ascending = most in need first (the default order of the roster)
+  attention: (r) => -attentionScore(r.attention),
   name: (r) => r.name.toLocaleLowerCase(),
   email: (r) => r.email,
   lastPracticeAt: (r) => (r.lastPracticeAt ? Date.parse(r.lastPracticeAt) : null),

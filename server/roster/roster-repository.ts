@@ -9,14 +9,17 @@ export interface WeekRow {
   attempts7d: string | null
   correct7d: string | null
   active_ms7d: string | null
+  attempts_prev7d: string | null
+  correct_prev7d: string | null
   median7d: number | null
   median_prev7d: number | null
   last_at: Date | null
 }
 
 /**
- * Per student: the last 7 local days and the 7 before (attempts, right answers, active time, median
- * recall of right answers), and the last practice time.
+ * Per student: the last 7 local days and the 7 before (attempts, right answers, active time this
+ * week; answers and right answers the week before; median recall of right answers), and the last
+ * practice time.
  */
 export async function weekFigures(db: Db, studentIds: string[]): Promise<WeekRow[]> {
   const { rows } = await db.raw(
@@ -29,7 +32,9 @@ export async function weekFigures(db: Db, studentIds: string[]): Promise<WeekRow
        where d.instrument_key = ? and d.drill = ? and d.day > st.today - 14 and d.day <= st.today
      ), sums as (
        select user_id, sum(attempts) filter (where this_week) as attempts7d,
-         sum(correct) filter (where this_week) as correct7d, sum(active_ms) filter (where this_week) as active_ms7d
+         sum(correct) filter (where this_week) as correct7d, sum(active_ms) filter (where this_week) as active_ms7d,
+         sum(attempts) filter (where not this_week) as attempts_prev7d,
+         sum(correct) filter (where not this_week) as correct_prev7d
        from d group by user_id
      ), medians as (
        select d.user_id,
@@ -37,7 +42,8 @@ export async function weekFigures(db: Db, studentIds: string[]): Promise<WeekRow
          percentile_cont(0.5) within group (order by v) filter (where not d.this_week) as median_prev7d
        from d cross join lateral unnest(d.recall_ms) as v group by d.user_id
      )
-     select st.user_id, sums.attempts7d, sums.correct7d, sums.active_ms7d, medians.median7d, medians.median_prev7d,
+     select st.user_id, sums.attempts7d, sums.correct7d, sums.active_ms7d, sums.attempts_prev7d,
+       sums.correct_prev7d, medians.median7d, medians.median_prev7d,
        (select p.last_at from progress_days p where p.user_id = st.user_id and p.instrument_key = ?
           and p.drill = ? order by p.day desc limit 1) as last_at
      from st left join sums using (user_id) left join medians using (user_id)`,
@@ -55,13 +61,14 @@ export interface WeakRow {
   answers: number
   recent_accuracy: number
   recent_median_ms: number | null
-  /** The instrument's open strings, null when it has been deleted since. */
+  /** The instrument's open strings and spelling, null when it has been deleted since. */
   tuning: number[] | null
+  accidentals: 'sharp' | 'flat' | null
 }
 
 /**
- * Per student, the `limit` places with the lowest recent accuracy (slower first on ties), read in
- * index order (progress_items_weakest) so each student costs a few index rows.
+ * Per student, the `limit` weakest places by the contract's rule (weak-places.ts: a recent miss;
+ * lowest recent accuracy, then more answers, then slower), from the index on recent accuracy.
  */
 export async function weakestPlaces(
   db: Db,
@@ -69,22 +76,41 @@ export async function weakestPlaces(
   limit: number,
 ): Promise<WeakRow[]> {
   const { rows } = await db.raw(
-    `select s.id as user_id, w.*, ins.tuning from unnest(?::uuid[]) as s(id)
+    `select s.id as user_id, w.*, ins.tuning, ins.accidentals from unnest(?::uuid[]) as s(id)
      cross join lateral (
        select i.instrument_key, i.string, i.fret, i.pitch, cardinality(i.recent_correct) as answers,
          i.recent_accuracy, i.recent_median_ms
        from progress_items i
        where i.user_id = s.id and i.drill = ? and i.string >= 0 and i.instrument_key <> ?
-         and cardinality(i.recent_correct) >= 3
-       order by i.recent_accuracy, i.recent_median_ms desc nulls last, i.string, i.fret
+         and cardinality(i.recent_correct) > 0 and i.recent_accuracy < 1
+       order by i.recent_accuracy, cardinality(i.recent_correct) desc,
+         i.recent_median_ms desc nulls last, i.string, i.fret
        limit ?
      ) as w
-     left join instruments ins on ins.id = w.instrument_key
-     -- the join may reorder rows: keep each student's places weakest first
-     order by s.id, w.recent_accuracy, w.recent_median_ms desc nulls last, w.string, w.fret`,
+     left join instruments ins on ins.id = w.instrument_key`,
     [studentIds, ALL_DRILLS, NO_INSTRUMENT, limit],
   )
   return rows
+}
+
+export interface ActiveInstrumentRow {
+  user_id: string
+  name: string
+  preset_id: string | null
+  tuning: number[]
+  handedness: 'right' | 'left'
+  accidentals: 'sharp' | 'flat'
+}
+
+/** Each student's active instrument (none for a student who has not set one up). */
+export async function activeInstruments(
+  db: Db,
+  studentIds: string[],
+): Promise<ActiveInstrumentRow[]> {
+  return db('instruments')
+    .whereIn('user_id', studentIds)
+    .andWhere('is_active', true)
+    .select('user_id', 'name', 'preset_id', 'tuning', 'handedness', 'accidentals')
 }
 
 interface MembershipRow {

@@ -1,18 +1,21 @@
-// The teacher's roster: each student's practice figures, plan progress, weak spots and a status.
-import { pitchName } from '../../src/theory'
+// The teacher's roster: each student's practice figures, plan progress, weak spots, a status and
+// the reasons to look at them now.
 import { assertCanReadStudent } from '../access/student-access'
 import type { AppContext } from '../context'
 import { assignmentRows } from '../assignments/assignments-service'
 import { buildAssignments } from '../plans/assigned-plans'
 import type { Assignment } from '../../src/contract/assignments'
 import { rosterSummary, type RosterStudent } from './roster-summary'
+import { attentionReasons } from './attention'
+import { lastLessonsOf } from '../lessons/lessons-service'
+import { timeZoneOf } from '../users/users-repository'
 import type { PublicUser } from '../users/users-schema'
 import type { RosterRow, RosterStatus, WeakSpot } from '../../src/contract/roster'
 
 const DAY_MS = 24 * 3600 * 1000
 
 function weakSpotOf(place: RosterStudent['weakestPositions'][number]): WeakSpot {
-  const label = `${place.stringName} string, fret ${place.fret} (${pitchName(place.pitch, 'flat')})`
+  const label = `${place.stringName} string, fret ${place.fret} (${place.pitchName})`
   return {
     string: place.string,
     fret: place.fret,
@@ -54,7 +57,34 @@ function planSummary(assignments: Assignment[]) {
   }
 }
 
-function toRosterRow(student: RosterStudent, assignments: Assignment[], now: Date): RosterRow {
+interface RowContext {
+  now: Date
+  timeZone: string
+  lastLessonAt: Date | null
+}
+
+function attentionOf(student: RosterStudent, assignments: Assignment[], at: RowContext) {
+  const lastPracticeAt = student.lastPracticeAt ? new Date(student.lastPracticeAt) : null
+  return attentionReasons(
+    {
+      lastPracticeAt,
+      week: { accuracy: student.accuracy7d, answers: student.attempts7d },
+      previousWeek: { accuracy: student.accuracyPrev7d, answers: student.attemptsPrev7d },
+      recall: {
+        medianMs: student.medianRecallMs7d,
+        previousMedianMs: student.medianRecallMsPrev7d,
+        ...student.recallTrend,
+      },
+      assignments,
+      timeZone: at.timeZone,
+      lastLessonAt: at.lastLessonAt,
+    },
+    at.now,
+  )
+}
+
+function toRosterRow(student: RosterStudent, assignments: Assignment[], at: RowContext): RosterRow {
+  const { now } = at
   const lastPracticeAt = student.lastPracticeAt ? new Date(student.lastPracticeAt) : null
   return {
     id: student.studentId,
@@ -71,8 +101,10 @@ function toRosterRow(student: RosterStudent, assignments: Assignment[], now: Dat
       ...student.recallTrend,
     },
     ...planSummary(assignments),
-    weakSpots: student.weakestPositions.filter((p) => p.accuracy < 1).map(weakSpotOf),
+    weakSpots: student.weakestPositions.map(weakSpotOf),
     status: rosterStatus(lastPracticeAt, assignments, now),
+    attention: attentionOf(student, assignments, at),
+    instrument: student.instrument,
   }
 }
 
@@ -91,12 +123,16 @@ export async function rosterRows(
   )
   const ids = students.map((s) => s.studentId)
   const rows = ids.length ? await assignmentRows(ctx, { teacherId, studentIds: ids }) : []
-  const assignments = await buildAssignments(ctx, rows, now)
+  const [assignments, timeZone, lessons] = await Promise.all([
+    buildAssignments(ctx, rows, now),
+    timeZoneOf(ctx.db, teacherId),
+    lastLessonsOf(ctx, teacherId, ids, now),
+  ])
   return students.map((s) =>
     toRosterRow(
       s,
       assignments.filter((a) => a.student.id === s.studentId),
-      now,
+      { now, timeZone, lastLessonAt: lessons.get(s.studentId) ?? null },
     ),
   )
 }

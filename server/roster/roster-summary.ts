@@ -7,17 +7,29 @@
 //     lastPracticeAt: ISO string | null,
 //     attempts7d, minutes7d,            // last 7 days in the student's time zone (today included)
 //     accuracy7d: 0..1 | null,          // right answers / answers, last 7 days
+//     attemptsPrev7d, accuracyPrev7d,   // the same for the 7 days before
+//     instrument: { name, description, leftHanded } | null, // the active instrument
 //     medianRecallMs7d: number | null,  // median response time of right answers, last 7 days
 //     medianRecallMsPrev7d: number | null, // the same for the 7 days before
 //     recallTrend: { change: number | null, direction: 'faster' | 'slower' | 'steady' | null },
 //                                        // change = this week's median / last week's − 1 (−0.1 = 10 % faster)
-//     weakestPositions: [{ instrumentId, string, stringName, fret, pitch, answers, accuracy, medianMs }] // ≤ 3,
-//                                        // lowest recent accuracy first (latest 50 answers per place)
+//     weakestPositions: [{ instrumentId, string, stringName, pitchName, fret, pitch, answers, accuracy,
+//                          medianMs }] // ≤ 3, by src/contract/weak-places.ts: places with a recent miss,
+//                                        // worst first (latest 50 answers per place)
 //   }
-import { pitchClassName, stringNames } from '../../src/theory'
+import { pitchClassName, pitchName, stringNames } from '../../src/theory'
+import { compareWeakPlaces } from '../../src/contract/weak-places'
 import { teacherStudents } from '../access/access-repository'
 import type { AppContext } from '../context'
-import { weakestPlaces, weekFigures, type WeakRow, type WeekRow } from './roster-repository'
+import {
+  activeInstruments,
+  weakestPlaces,
+  weekFigures,
+  type WeakRow,
+  type WeekRow,
+} from './roster-repository'
+import type { RosterInstrument } from '../../src/contract/roster'
+import { instrumentOf } from './roster-instrument'
 
 /** One student of a teacher's roster (the meaning of each field is above). */
 export interface RosterStudent {
@@ -29,6 +41,9 @@ export interface RosterStudent {
   attempts7d: number
   minutes7d: number
   accuracy7d: number | null
+  attemptsPrev7d: number
+  accuracyPrev7d: number | null
+  instrument: RosterInstrument | null
   medianRecallMs7d: number | null
   medianRecallMsPrev7d: number | null
   recallTrend: { change: number | null; direction: 'faster' | 'slower' | 'steady' | null }
@@ -37,6 +52,8 @@ export interface RosterStudent {
     string: number
     /** "low E", "A": the string's name on that instrument */
     stringName: string
+    /** "F#4" or "Gb4": spelled as the student's instrument spells notes (as the heat map does) */
+    pitchName: string
     fret: number
     pitch: number
     answers: number
@@ -62,7 +79,10 @@ export function recallTrend(
 
 function weekPart(w: WeekRow | undefined) {
   const attempts = Number(w?.attempts7d ?? 0)
+  const before = Number(w?.attempts_prev7d ?? 0)
   return {
+    attemptsPrev7d: before,
+    accuracyPrev7d: before > 0 ? Number(w?.correct_prev7d ?? 0) / before : null,
     lastPracticeAt: w?.last_at ? w.last_at.toISOString() : null,
     attempts7d: attempts,
     minutes7d: Math.round(Number(w?.active_ms7d ?? 0) / 6000) / 10,
@@ -78,7 +98,10 @@ function stringNameOf(r: WeakRow): string {
   const open = r.pitch - r.fret
   try {
     if (r.tuning)
-      return stringNames(r.tuning.map(Number), 'flat')[r.string] ?? pitchClassName(open, 'flat')
+      return (
+        stringNames(r.tuning.map(Number), r.accidentals ?? 'flat')[r.string] ??
+        pitchClassName(open, 'flat')
+      )
   } catch {
     // a tuning the theory core refuses: fall through to the open string's note
   }
@@ -89,6 +112,7 @@ const toWeak = (r: WeakRow) => ({
   instrumentId: r.instrument_key,
   string: r.string,
   stringName: stringNameOf(r),
+  pitchName: pitchName(r.pitch, r.accidentals ?? 'flat'),
   fret: r.fret,
   pitch: r.pitch,
   answers: r.answers,
@@ -105,11 +129,13 @@ export async function rosterSummary(
   if (!members.length) return { students: [] }
   const ids = members.map((m) => m.id)
   await ctx.statistics.settle(ids) // answers still queued count in the figures read next
-  const [weeks, weak] = await Promise.all([
+  const [weeks, weak, instruments] = await Promise.all([
     weekFigures(ctx.db, ids),
     weakestPlaces(ctx.db, ids, WEAKEST_COUNT),
+    activeInstruments(ctx.db, ids),
   ])
   const weekOf = new Map(weeks.map((w) => [w.user_id, w]))
+  const instrumentRow = new Map(instruments.map((i) => [i.user_id, i]))
   return {
     students: members.map((m) => ({
       studentId: m.id,
@@ -117,7 +143,16 @@ export async function rosterSummary(
       email: m.email,
       studios: m.studios,
       ...weekPart(weekOf.get(m.id)),
-      weakestPositions: weak.filter((w) => w.user_id === m.id).map(toWeak),
+      instrument: instrumentOf(instrumentRow.get(m.id)),
+      weakestPositions: weak
+        .filter((w) => w.user_id === m.id)
+        .map(toWeak)
+        .sort((a, b) =>
+          compareWeakPlaces(
+            { ...a, recentAnswers: a.answers, recentAccuracy: a.accuracy },
+            { ...b, recentAnswers: b.answers, recentAccuracy: b.accuracy },
+          ),
+        ),
     })),
   }
 }

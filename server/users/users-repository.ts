@@ -121,3 +121,16 @@ export async function listUsers(db: Db, query: UserListQuery) {
     .offset((query.page - 1) * query.pageSize)
   return { total: Number(count), items: rows.map((r) => toAdminUser(toRecord(r))) }
 }
+
+/** Each user's IANA time zone (the one their browser last sent; UTC when none yet), for e-mails. */
+export async function timeZonesOf(db: Db, userIds: string[]): Promise<Map<string, string>> {
+  const rows: { user_id: string; time_zone: string }[] = userIds.length
+    ? await db('user_time_zones').whereIn('user_id', userIds).select('user_id', 'time_zone')
+    : []
+  const zones = new Map(rows.map((r) => [r.user_id, r.time_zone]))
+  return new Map(userIds.map((id) => [id, zones.get(id) ?? 'UTC']))
+}
+
+/** One user's time zone (see timeZonesOf). */
+export const timeZoneOf = async (db: Db, userId: string) =>
+  (await timeZonesOf(db, [userId])).get(userId) ?? 'UTC'

@@ -40,4 +40,3 @@ export const UserListQuerySchema = z.object({
   pageSize: z.coerce.number().int().min(1).max(100).default(25),
 })
 export type UserListQuery = z.infer<typeof UserListQuerySchema>
-

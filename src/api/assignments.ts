@@ -13,15 +13,17 @@ export const postComment = (assignmentId: string, body: string) =>
 export const deleteComment = (assignmentId: string, commentId: string) =>
   http.delete<void>(`${base(assignmentId)}/comments/${commentId}`)
 
-/** Attaches a take to an item of the assigned plan (multipart: planItemId and file). */
+/** Attaches a take to an item of the assigned plan (multipart: planItemId, durationMs?, file). */
 export function uploadRecording(
   assignmentId: string,
   planItemId: string,
   audio: Blob,
   fileName: string,
+  durationMs?: number,
 ) {
   const form = new FormData()
   form.append('planItemId', planItemId)
+  if (durationMs) form.append('durationMs', String(Math.round(durationMs)))
   form.append('file', audio, fileName)
   return http.post<{ recording: RecordingSummary }>(`${base(assignmentId)}/recordings`, form)
 }

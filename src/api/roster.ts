@@ -29,6 +29,9 @@ export const fetchStudentAssignments = (id: string) =>
   http.get<{ assignments: Assignment[] }>(`/studio/students/${id}/assignments`)
 
 /** Download links (plain same-origin links carry the session cookie). */
+// with the browser's time zone, so the sheet's date-times are the viewer's local ones
+const timeZone = () => Intl.DateTimeFormat().resolvedOptions().timeZone
 export const rosterCsvUrl = (filters: RosterFilters) =>
-  `/api${withQuery('/studio/roster.csv', { ...filters })}`
-export const resultsCsvUrl = (studentId: string) => `/api/studio/students/${studentId}/results.csv`
+  `/api${withQuery('/studio/roster.csv', { ...filters, timeZone: timeZone() })}`
+export const resultsCsvUrl = (studentId: string) =>
+  `/api${withQuery(`/studio/students/${studentId}/results.csv`, { timeZone: timeZone() })}`

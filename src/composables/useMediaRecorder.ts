@@ -1,11 +1,26 @@
 // Recording from the microphone with MediaRecorder (Opus in WebM or Ogg, or MP4 on Safari);
-// stops by itself after the longest take we accept.
+// stops by itself after the longest take we accept. MediaRecorder's WebM carries no duration, so
+// players can neither show the length nor seek: the measured length is written into the file and
+// handed on to be stored.
+import fixWebmDuration from 'fix-webm-duration'
 import { onBeforeUnmount, ref } from 'vue'
 
 const MAX_SECONDS = 10 * 60
 const TYPES = ['audio/webm;codecs=opus', 'audio/ogg;codecs=opus', 'audio/webm', 'audio/mp4']
 
-export function useMediaRecorder(onRecorded: (audio: Blob, extension: string) => void) {
+/** The take with its length written into the WebM header (other formats carry their own). */
+export async function withDuration(audio: Blob, durationMs: number): Promise<Blob> {
+  if (!audio.type.includes('webm')) return audio
+  try {
+    return await fixWebmDuration(audio, durationMs, { logger: false })
+  } catch {
+    return audio // a header we cannot read: the stored length still shows
+  }
+}
+
+export function useMediaRecorder(
+  onRecorded: (audio: Blob, extension: string, durationMs: number) => void,
+) {
   const isRecording = ref(false)
   const seconds = ref(0)
   const error = ref('')
@@ -37,12 +52,17 @@ export function useMediaRecorder(onRecorded: (audio: Blob, extension: string) =>
     const chunks: Blob[] = []
     recorder = new MediaRecorder(stream, mimeType ? { mimeType } : {})
     recorder.ondataavailable = (event) => event.data.size && chunks.push(event.data)
-    recorder.onstop = () => {
+    let startedAt = 0
+    recorder.onstart = () => (startedAt = performance.now())
+    recorder.onstop = async () => {
       const type = recorder?.mimeType || mimeType || 'audio/webm'
+      const durationMs = Math.max(1, Math.round(performance.now() - startedAt))
       release()
+      const audio = await withDuration(new Blob(chunks, { type }), durationMs)
       onRecorded(
-        new Blob(chunks, { type }),
+        audio,
         type.includes('mp4') ? 'm4a' : type.includes('ogg') ? 'ogg' : 'webm',
+        durationMs,
       )
     }
     recorder.start(1000)

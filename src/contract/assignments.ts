@@ -11,6 +11,8 @@ export interface RecordingSummary {
   sizeBytes: number
   originalName: string
   createdAt: string
+  /** The recorded length in ms of a take recorded in the browser; null for uploaded files. */
+  durationMs: number | null
 }
 
 export interface AssignedItem extends PlanItem {

@@ -15,8 +15,8 @@ describe('describeTarget', () => {
       { kind: 'accuracy', minAccuracy: 0.8, maxMedianMs: null, minAttempts: 10 },
       'accuracy ≥ 80 % over the last 10 answers',
     ],
-    [{ kind: 'sessions', count: 1 }, '1 practice session'],
-    [{ kind: 'sessions', count: 4 }, '4 practice sessions'],
+    [{ kind: 'sessions', count: 1 }, '1 practice session of 10+ answers'],
+    [{ kind: 'sessions', count: 4 }, '4 practice sessions of 10+ answers'],
     [{ kind: 'all-keys' }, 'every key of the cycle played correctly'],
   ])('%j reads "%s"', (target, text) => {
     expect(describeTarget(PracticeTargetSchema.parse(target))).toBe(text)

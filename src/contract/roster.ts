@@ -16,7 +16,15 @@ export interface StudioStudent {
 export const ROSTER_STATUSES = ['behind', 'on-track', 'inactive'] as const
 export type RosterStatus = (typeof ROSTER_STATUSES)[number]
 
+/** How a status reads on screen and in the CSV export. */
+export const ROSTER_STATUS_TEXT: Record<RosterStatus, string> = {
+  behind: 'Behind',
+  inactive: 'Quiet',
+  'on-track': 'On track',
+}
+
 export const ROSTER_SORT_KEYS = [
+  'attention',
   'name',
   'email',
   'lastPracticeAt',
@@ -46,6 +54,30 @@ export interface RecallTrend {
   direction: 'faster' | 'slower' | 'steady' | null
 }
 
+/** Why a student needs the teacher's attention, most pressing kinds first. */
+export const ATTENTION_KINDS = [
+  'overdue',
+  'behind-targets',
+  'no-practice',
+  'accuracy-falling',
+  'recall-slowing',
+] as const
+export type AttentionKind = (typeof ATTENTION_KINDS)[number]
+
+export interface AttentionReason {
+  kind: AttentionKind
+  /** In words, e.g. "No practice for 9 days", "Accuracy down from 86 % to 64 %". */
+  text: string
+}
+
+/** The student's active instrument as the roster shows it. */
+export interface RosterInstrument {
+  name: string
+  /** "5-string bass (B E A D G)", "6 strings (D A D G B E)" */
+  description: string
+  leftHanded: boolean
+}
+
 export interface RosterRow {
   id: string
   name: string
@@ -68,6 +100,9 @@ export interface RosterRow {
   planCompletion: number | null
   weakSpots: WeakSpot[]
   status: RosterStatus
+  /** Reasons to look at this student now, most pressing first; empty when all is well. */
+  attention: AttentionReason[]
+  instrument: RosterInstrument | null
 }
 
 export interface RosterPage {

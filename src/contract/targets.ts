@@ -53,10 +53,13 @@ export const allKeysDrillNames = () =>
 const percent = (value: number) => `${Math.round(value * 100)} %`
 const seconds = (ms: number) => `${(ms / 1000).toFixed(1)} s`
 
+/** A session counts toward a sessions target once it holds this many answers (a quick look does not). */
+export const SESSION_MIN_ANSWERS = 10
+
 /** "accuracy ≥ 90 % and median ≤ 2.5 s over the last 60 answers", "3 sessions", "every key of the cycle". */
 export function describeTarget(target: PracticeTarget): string {
   if (target.kind === 'sessions')
-    return `${target.count} practice session${target.count === 1 ? '' : 's'}`
+    return `${target.count} practice session${target.count === 1 ? '' : 's'} of ${SESSION_MIN_ANSWERS}+ answers`
   if (target.kind === 'all-keys') return 'every key of the cycle played correctly'
   const speed =
     target.maxMedianMs === null ? '' : ` and median answer ≤ ${seconds(target.maxMedianMs)}`

@@ -45,6 +45,15 @@ export function localDate(iso: string): string {
   return `${d.getFullYear()}-${pad(d.getMonth() + 1)}-${pad(d.getDate())}`
 }
 
+/**
+ * A warning (not an error) for a due date before today: the plan would be overdue the moment it
+ * is assigned. Empty when the date is today, later or unset.
+ */
+export function dueDateWarning(dueDate: string, now = new Date()): string {
+  if (!dueDate || dueDate >= localDate(now.toISOString())) return ''
+  return 'This date has passed: the plan will show as overdue at once.'
+}
+
 export function draftFrom(plan: PlanLike | null): PlanDraft {
   if (!plan) return { title: '', notes: '', dueDate: '', items: [newItem()], studentIds: [] }
   return {

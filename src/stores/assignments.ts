@@ -60,8 +60,20 @@ export const useAssignmentsStore = defineStore('assignments', () => {
       await assignmentsApi.deleteComment(id, commentId)
       setThread(id, (thread) => thread.filter((c) => c.id !== commentId))
     },
-    async addRecording(id: string, itemId: string, audio: Blob, fileName: string) {
-      const { recording } = await assignmentsApi.uploadRecording(id, itemId, audio, fileName)
+    async addRecording(
+      id: string,
+      itemId: string,
+      audio: Blob,
+      fileName: string,
+      durationMs?: number,
+    ) {
+      const { recording } = await assignmentsApi.uploadRecording(
+        id,
+        itemId,
+        audio,
+        fileName,
+        durationMs,
+      )
       updateItem(itemId, (item) => ({ ...item, recordings: [recording, ...item.recordings] }))
     },
     async deleteRecording(id: string, itemId: string, recordingId: string) {

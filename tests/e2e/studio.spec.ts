@@ -189,6 +189,15 @@ describe('teacher studio', () => {
       ]),
     )
     expect(heads).toContainEqual([0x1a, 0x45, 0xdf, 0xa3])
+    // Its length is shown, and written into the file: the Matroska Duration element (ID 44 89)
+    // that MediaRecorder leaves out, so players can seek.
+    const webm = await (
+      await student.request.get(sources[heads.findIndex((h) => h[0] === 0x1a)]!)
+    ).body()
+    expect(webm.subarray(0, 200).includes(Buffer.from([0x44, 0x89]))).toBe(true)
+    expect(await recordings.getByTestId('recording-meta').allTextContents()).toContainEqual(
+      expect.stringMatching(/^0:0\d · /),
+    )
   })
 
   it('the teacher sees the target met on the student page and leaves a comment', async () => {

@@ -130,7 +130,7 @@ describe('CSV exports', () => {
     expect(lines).toHaveLength(4)
     expect(lines[0]).toMatch(/^Name,E-mail,Studios,Status,/)
     expect(lines[2]).toMatch(/^"Bo Lee, Jr\.",/)
-    expect(lines[2]).toContain(',behind,')
+    expect(lines[2]).toContain(',Behind,')
   })
 
   it("when the teacher exports a student's results, then there is one row per answer; another teacher gets 403", async () => {

@@ -24,6 +24,8 @@ function row(name: string, over: Partial<RosterRow> = {}): RosterRow {
     planCompletion: null,
     weakSpots: [],
     status: 'on-track',
+    attention: [],
+    instrument: null,
     ...over,
   }
 }

@@ -2,7 +2,7 @@
 // each case; the key list of the cycle of fourths is the one in PRODUCT.md's domain rules).
 import { describe, expect, it } from 'vitest'
 import { evaluateTarget, median, type ItemAttempt } from '../../server/plans/target-progress'
-import { presetKeys } from '../../src/contract/targets'
+import { presetKeys, SESSION_MIN_ANSWERS } from '../../src/contract/targets'
 import { DrillPresetSchema, type DrillPreset } from '../../src/contract/drills'
 import { PracticeTargetSchema } from '../../src/contract/targets'
 
@@ -119,26 +119,34 @@ describe('accuracy target: accuracy ≥ x and median ≤ y over the last N answe
   })
 })
 
-describe('sessions target: N distinct sessions', () => {
+describe('sessions target: N sessions of at least SESSION_MIN_ANSWERS answers', () => {
   const target = PracticeTargetSchema.parse({ kind: 'sessions', count: 3 })
+  const session = (sessionId: string, answers: number, correct = true) =>
+    Array.from({ length: answers }, () => answer(correct, 1, { sessionId }))
 
-  it('counts distinct session ids, not answers: s1 s1 s2 → 2 of 3', () => {
+  it('counts distinct full sessions, not answers: s1 (10) s1 (2 more) s2 (10) → 2 of 3', () => {
     const result = evaluateTarget(target, RECALL, [
-      answer(true, 1, { sessionId: 's1' }),
-      answer(false, 1, { sessionId: 's1' }),
-      answer(true, 1, { sessionId: 's2' }),
+      ...session('s1', 10),
+      ...session('s1', 2, false),
+      ...session('s2', SESSION_MIN_ANSWERS),
     ])
     expect(result).toMatchObject({ kind: 'sessions', met: false, sessions: 2, needed: 3 })
     expect(result.ratio).toBeCloseTo(2 / 3)
   })
 
-  it('is met at the third session, right or wrong answers alike', () => {
+  it('is met at the third full session, right or wrong answers alike', () => {
     const result = evaluateTarget(
       target,
       RECALL,
-      ['a', 'b', 'c'].map((sessionId) => answer(false, 1, { sessionId })),
+      ['a', 'b', 'c'].flatMap((id) => session(id, SESSION_MIN_ANSWERS, false)),
     )
     expect(result).toEqual({ kind: 'sessions', met: true, ratio: 1, sessions: 3, needed: 3 })
+  })
+
+  it('does not count a session abandoned after 5 answers (issue 16)', () => {
+    const two = PracticeTargetSchema.parse({ kind: 'sessions', count: 2 })
+    const result = evaluateTarget(two, RECALL, [...session('a', 10), ...session('b', 5)])
+    expect(result).toMatchObject({ met: false, sessions: 1, needed: 2 })
   })
 })
 

@@ -18,6 +18,8 @@ export interface DemoPerson {
   role: 'student' | 'teacher' | 'admin'
   about: string
   instrument?: DemoInstrument
+  /** Days at the end of the seeded history without practice (so the roster has someone to flag). */
+  restDays?: number
 }
 
 const BASS_4 = [28, 33, 38, 43] // E1 A1 D2 G2
@@ -87,7 +89,8 @@ export const DEMO_PEOPLE: DemoPerson[] = [
     email: 'rafe@cedarhollow.test',
     name: 'Rafe Okonkwo',
     role: 'student',
-    about: '4-string bass in drop D',
+    about: '4-string bass in drop D; has not practised for 9 days',
+    restDays: 9,
     instrument: {
       name: 'Drop-D bass',
       presetId: 'bass-4-drop-d',

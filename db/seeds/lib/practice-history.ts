@@ -49,6 +49,8 @@ interface HistoryInput {
   seed: number
   now: Date
   days?: number
+  /** The last days without any practice (a student who needs the teacher's attention). */
+  restDays?: number
 }
 
 /** A weak region: frets 5–9 on the second-highest string are missed more and answered slower. */
@@ -99,7 +101,7 @@ export function practiceHistory(input: HistoryInput): SeedAttempt[] {
   const random = seededRandom(input.seed)
   const days = input.days ?? 28
   const attempts: SeedAttempt[] = []
-  for (let day = days; day >= 1; day--) {
+  for (let day = days; day > (input.restDays ?? 0); day--) {
     if (random() < 0.2) continue
     const progress = (days - day) / days
     const sessionId = uuidFrom(random)

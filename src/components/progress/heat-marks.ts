@@ -3,6 +3,7 @@
 // scale from 0.6 s to 5 s). Fixed scales, so colours compare across students and days.
 import type { CellMark } from '@/components/fretboard/fretboard-types'
 import type { PositionFigures } from '@/api/progress'
+import { weakestOf } from '@/contract/weak-places'
 
 export type HeatMode = 'accuracy' | 'speed'
 export const FAST_MS = 600
@@ -47,10 +48,6 @@ export function heatMarks(
     )
 }
 
-/** The places most worth practising: lowest recent accuracy, then slowest (at least 3 answers). */
-export function weakestPlaces(positions: PositionFigures[], count = 5): PositionFigures[] {
-  return positions
-    .filter((p) => p.recentAnswers >= 3)
-    .sort((a, b) => accuracyOf(a) - accuracyOf(b) || (b.medianMs ?? 0) - (a.medianMs ?? 0))
-    .slice(0, count)
-}
+/** The places most worth practising (the roster's rule): a recent miss, worst first. */
+export const weakestPlaces = (positions: PositionFigures[], count = 5): PositionFigures[] =>
+  weakestOf(positions, count)

@@ -1,18 +1,28 @@
 // How roster figures read in the table and on the student page.
 import type { RosterRow, RosterStatus } from '@/api/roster'
 import { toUnicode } from '@/theory'
+import { calendarDaysBetween } from '@/contract/local-time'
+import { ROSTER_STATUS_TEXT } from '@/contract/roster'
 
 export const STATUS_LABEL: Record<RosterStatus, { text: string; color: string }> = {
-  behind: { text: 'Behind', color: 'error' },
-  inactive: { text: 'Quiet', color: 'warning' },
-  'on-track': { text: 'On track', color: 'success' },
+  behind: { text: ROSTER_STATUS_TEXT.behind, color: 'error' },
+  inactive: { text: ROSTER_STATUS_TEXT.inactive, color: 'warning' },
+  'on-track': { text: ROSTER_STATUS_TEXT['on-track'], color: 'success' },
 }
 
 export const percent = (v: number | null) => (v === null ? '–' : `${Math.round(v * 100)} %`)
 
-export function lastPractice(iso: string | null): string {
+/** The viewer's IANA time zone (the browser's). */
+export const viewerTimeZone = () => Intl.DateTimeFormat().resolvedOptions().timeZone
+
+/** "today", "yesterday", "3 days ago": calendar days in the viewer's time zone, not 24-hour blocks. */
+export function lastPractice(
+  iso: string | null,
+  now = new Date(),
+  timeZone = viewerTimeZone(),
+): string {
   if (!iso) return 'never'
-  const days = Math.floor((Date.now() - Date.parse(iso)) / (24 * 3600 * 1000))
+  const days = calendarDaysBetween(new Date(iso), now, timeZone)
   if (days <= 0) return 'today'
   if (days === 1) return 'yesterday'
   if (days < 14) return `${days} days ago`
