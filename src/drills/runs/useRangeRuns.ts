@@ -1,6 +1,6 @@
 // Range Runs on the page: the run of a hand position, its fingerings (least practised offered
 // first), the run shown up and back down, then played note by note.
-import { computed, watch } from 'vue'
+import { computed, ref, watch } from 'vue'
 import type { CellMark } from '../../components/fretboard/fretboard-types'
 import { toUnicode } from '../../theory'
 import { LOCATE_ANSWERS } from '../engine/heard-pitch'
@@ -8,7 +8,7 @@ import type { PickedCell } from '../engine/locate'
 import { currentPickMarks } from '../engine/locate-marks'
 import { useDrill } from '../engine/useDrill'
 import { runsDrill } from './definition'
-import { fingeringMarks, trailMarks } from './run-marks'
+import { fingeringMarks, fingerMarks, trailMarks } from './run-marks'
 import { runsGrader } from './runs-grader'
 import { fingeringId, runsQuestions, type RunsQuestion } from './runs-generator'
 import { useRunChoice } from './useRunChoice'
@@ -46,11 +46,16 @@ export function useRangeRuns() {
     const run = choice.overview.value.value?.run ?? []
     sound.playSequence([...run, ...run.slice(0, -1).reverse()], RUN_BPM)
   }
+  /** What the fingering's cells show: finger numbers (default) or note names. */
+  const boardLabels = ref<'fingers' | 'notes'>('fingers')
   // During a session, the fingering of the pass being played.
   const shown = computed(() => {
     const question = session.current.value
     const playing = question && choice.order.value.find((f) => fingeringId(f) === question.pattern)
-    return fingeringMarks(playing ?? choice.chosen.value, choice.overview.value.value?.names ?? [])
+    const fingering = playing ?? choice.chosen.value
+    return boardLabels.value === 'fingers'
+      ? fingerMarks(fingering)
+      : fingeringMarks(fingering, choice.overview.value.value?.names ?? [])
   })
   const marks = computed<CellMark[]>(() => {
     const question = session.current.value
@@ -61,5 +66,5 @@ export function useRangeRuns() {
     if (!settings.value.showFingering) return [...trail, ...picks]
     return [...shown.value, ...trail, { ...question.cell, kind: 'target' }, ...picks]
   })
-  return { ...drill, ...choice, runCells, playRun, marks }
+  return { ...drill, ...choice, runCells, playRun, marks, boardLabels }
 }
