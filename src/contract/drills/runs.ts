@@ -4,6 +4,9 @@ import { MAX_SHIFTS } from '../../theory'
 import { defineDrillContract } from './drill-contract'
 import { DetailText, Fret, Length, Scale, scaleLabel, Tonic } from './fields'
 
+/** The hand systems a run may be fingered with (the theory core's names). */
+export const HAND_SYSTEMS = ['one-finger-per-fret', 'three-fret'] as const
+
 export const RunsSettingsSchema = Length.extend({
   tonic: Tonic,
   scale: Scale,
@@ -18,9 +21,6 @@ export const RunsSettingsSchema = Length.extend({
   showFingering: z.boolean().default(true),
 })
 export type RunsSettings = z.infer<typeof RunsSettingsSchema>
-
-/** The hand systems a run may be fingered with (the theory core's names). */
-export const HAND_SYSTEMS = ['one-finger-per-fret', 'three-fret'] as const
 
 /** "no shift", "1 shift", "2 shifts". */
 export const describeShifts = (shifts: number) =>
