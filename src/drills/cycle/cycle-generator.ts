@@ -52,22 +52,21 @@ export function defaultWindow(neck: CycleNeck): PitchWindow {
 
 export type CyclePlan = { keys: WindowKey[]; error: null } | { keys: []; error: string }
 
-type CycleChoice = Pick<
-  CycleSettings,
-  'low' | 'high' | 'scale' | 'cycle' | 'customTonics' | 'direction' | 'startTonic'
->
+/** The settings a cycle depends on; without a direction the theory core plays every key up. */
+type CycleChoice = Pick<CycleSettings, 'low' | 'high' | 'scale' | 'cycle' | 'customTonics'> &
+  Partial<Pick<CycleSettings, 'direction' | 'startTonic'>>
 
 /** The theory core's options for these settings (a start key not in the cycle is left out). */
 export function cycleOptions(settings: CycleChoice): WindowCycleOptions {
   const tonics = cycleKeys(settings)
-  const start = settings.startTonic
+  const start = settings.startTonic ?? null
   const inCycle = start !== null && tonics.some((t) => pitchClassOf(t) === pitchClassOf(start))
   return {
     low: settings.low,
     high: settings.high,
     scale: settings.scale,
     tonics,
-    direction: settings.direction,
+    ...(settings.direction ? { direction: settings.direction } : {}),
     ...(inCycle ? { startTonic: start } : {}),
   }
 }

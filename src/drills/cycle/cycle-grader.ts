@@ -19,20 +19,29 @@ function flagDisplaced(question: CycleQuestion, grade: Grade): Grade {
   }
 }
 
+/** The neck naming notes in the question's key (each key of the cycle in its own spelling). */
+export const questionKeyed = <N extends Neck>(
+  neck: N,
+  question: Pick<CycleQuestion, 'tonic' | 'scale'> | null,
+): N => ({ ...neck, key: question && { tonic: question.tonic, scale: question.scale } })
+
 export function cycleGrader(neck: Neck): DrillGrader<CycleQuestion, PickedCell> {
   return {
     grade: (question, pick) =>
       flagDisplaced(
         question,
         gradeLocate({
-          neck,
+          neck: questionKeyed(neck, question),
           expectedPitch: question.expectedPitch,
           expectedName: question.name,
           pick,
         }),
       ),
     reveal: (question) =>
-      flagDisplaced(question, revealLocate(neck, question.expectedPitch, question.name)),
+      flagDisplaced(
+        question,
+        revealLocate(questionKeyed(neck, question), question.expectedPitch, question.name),
+      ),
   }
 }
 

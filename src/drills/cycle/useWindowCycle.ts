@@ -8,7 +8,7 @@ import type { PickedCell } from '../engine/locate'
 import { currentPickMarks } from '../engine/locate-marks'
 import { limitsOf } from '../engine/session'
 import { useDrill } from '../engine/useDrill'
-import { cycleGrader } from './cycle-grader'
+import { cycleGrader, questionKeyed } from './cycle-grader'
 import { cycleOptions, cycleSession, positionAfter, type CycleQuestion } from './cycle-generator'
 import { useCycleStop } from './useCycleStop'
 import { cycleDrill } from './definition'
@@ -50,7 +50,9 @@ export function useWindowCycle() {
     session.current.value
       ? [
           ...cycleWindow.shading.value,
-          ...currentPickMarks(session, neck.value, (q) => toUnicode(q.name)),
+          ...currentPickMarks(session, questionKeyed(neck.value, session.current.value), (q) =>
+            toUnicode(q.name),
+          ),
         ]
       : [...cycleWindow.shading.value, ...picker.marks.value],
   )

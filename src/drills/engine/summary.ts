@@ -27,7 +27,9 @@ export function slowestCells<Q extends DrillQuestion>(
     const cell = group[0]?.grade.cell ?? { string: 0, fret: 0 }
     const correct = group.filter((record) => record.grade.correct).length
     const ms = median(group.map((record) => record.responseMs)) ?? 0
-    return { string: cell.string, fret: cell.fret, medianMs: ms, answers: group.length, correct }
+    const name = group[0]?.question.name
+    const slow = { string: cell.string, fret: cell.fret, medianMs: ms, answers: group.length }
+    return { ...slow, correct, ...(name ? { name } : {}) }
   })
   cells.sort((a, b) => b.medianMs - a.medianMs || a.correct / a.answers - b.correct / b.answers)
   return cells.slice(0, limit)

@@ -15,6 +15,8 @@ export interface DrillQuestion {
   detail: AttemptDetail
   /** Why the focus selector chose this question ("missed twice this week"), when it did. */
   reason?: string
+  /** The expected note as this drill names it (nameInContext: in its key, with octave). */
+  name?: string
 }
 
 /** What a grader decides about one answer. */
@@ -67,6 +69,8 @@ export interface SessionSummary<Q extends DrillQuestion> {
 
 /** A cell and how slowly it was answered (median over its answers in the session). */
 export interface SlowCell extends Position {
+  /** The note as the session named it (in its key), when its questions name notes. */
+  name?: string
   medianMs: number
   answers: number
   correct: number

@@ -5,6 +5,7 @@ import type { CellMark } from '../../components/fretboard/fretboard-types'
 import { toUnicode } from '../../theory'
 import { LOCATE_ANSWERS } from '../engine/heard-pitch'
 import type { PickedCell } from '../engine/locate'
+import { keyed } from '../engine/locate'
 import { currentPickMarks } from '../engine/locate-marks'
 import { useDrill } from '../engine/useDrill'
 import { runsDrill } from './definition'
@@ -18,7 +19,7 @@ export const RUN_BPM = 120
 export function useRangeRuns() {
   const drill = useDrill<'runs', RunsQuestion, PickedCell>(runsDrill, {
     ...LOCATE_ANSWERS,
-    grader: ({ neck }) => runsGrader(neck),
+    grader: ({ neck, settings }) => runsGrader(keyed(neck, settings)),
     problem: () => choice.problem.value ?? (choice.chosen.value ? null : 'Choose a fingering.'),
     prepare: ({ settings }) => {
       const view = choice.overview.value.value
@@ -61,7 +62,9 @@ export function useRangeRuns() {
     const question = session.current.value
     const state = session.state.value
     if (!question || !state) return shown.value
-    const picks = currentPickMarks(session, neck.value, (q) => toUnicode(q.name))
+    const picks = currentPickMarks(session, keyed(neck.value, settings.value), (q) =>
+      toUnicode(q.name),
+    )
     const trail = trailMarks(state, question)
     if (!settings.value.showFingering) return [...trail, ...picks]
     return [...shown.value, ...trail, { ...question.cell, kind: 'target' }, ...picks]
