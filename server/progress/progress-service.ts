@@ -177,7 +177,8 @@ export async function timeline(
   )
   const series = drills.map((drill) => ({
     drill: (drill === ALL_DRILLS ? 'all' : drill) as TimelineAnswer['series'][number]['drill'],
-    points: rows.filter((r) => r.drill === drill).map(toPoint),
+    // a day with only "show me" has no answers to chart
+    points: rows.filter((r) => r.drill === drill && r.attempts > 0).map(toPoint),
   }))
   return { timeZone, from, to, series }
 }

@@ -56,8 +56,10 @@ export interface AnswerRecord<Q extends DrillQuestion> {
 
 /** What a finished session adds up to. */
 export interface SessionSummary<Q extends DrillQuestion> {
+  /** Answers given (right or wrong); "show me" is counted apart in `shown`. */
   answers: number
   correct: number
+  shown: number
   /** 0..1; null when nothing was answered. */
   accuracy: number | null
   medianMs: number | null
