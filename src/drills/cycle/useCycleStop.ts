@@ -22,15 +22,20 @@ export function useCycleStop(
   const local = ref<CycleStop | null>(null)
   const stored = ref<CycleStop | null>(null)
   const restarting = ref(false)
+  /** The server's answer is in (or failed): what the page shows about continuing is final. */
+  const ready = ref(false)
   let loading: Promise<void> = Promise.resolve()
 
   async function load(scale: string, planItem: string | null) {
     stored.value = null
+    ready.value = false
     try {
       const answer = await fetchCyclePosition({ scale, planItem: planItem ?? undefined })
       if (scale === settings.value.scale) stored.value = answer.stop
     } catch {
       stored.value = null // offline or signed out: start at the start key
+    } finally {
+      ready.value = true
     }
   }
   watch(
@@ -59,5 +64,5 @@ export function useCycleStop(
   }
   /** Forget where the cycle stopped: the next session begins at the start key. */
   const restart = () => (restarting.value = true)
-  return { current, lastStop, restart }
+  return { current, lastStop, restart, ready }
 }
