@@ -4,7 +4,8 @@
 -- median. See DEVELOPERS.md, "Statistics".
 --   instrument_key: the instrument id, 00000000-… for attempts without one, ffffffff-… for all;
 --   drill: the drill id, or '*' for every drill; 50 answers per place are "recent";
---   a gap longer than 120 000 ms inside a session is not practice time.
+--   a gap longer than 120 000 ms inside a session is not practice time;
+--   a "shown" attempt ("show me") is practice time but neither an answer nor a miss: counted in shown.
 create or replace function progress_rollup(batch uuid[]) returns void language plpgsql as $fn$
 begin
   with new_rows as (select * from attempts where id = any(batch)),
@@ -13,6 +14,7 @@ begin
     select a.user_id, coalesce(a.instrument_id, '00000000-0000-0000-0000-000000000000'::uuid) as ikey,
       a.drill, a.session_id, coalesce(a.string, -1)::smallint as string,
       coalesce(a.fret, -1)::smallint as fret, a.expected_pitch, a.correct, a.response_ms, a.created_at,
+      a.outcome = 'shown' as shown,
       (a.created_at at time zone coalesce(z.time_zone, 'UTC'))::date as day,
       lag(a.created_at) over (partition by a.user_id, a.session_id order by a.created_at, a.id) as prev_at
     from new_rows a left join user_time_zones z on z.user_id = a.user_id
@@ -38,10 +40,12 @@ begin
       attempts = s.attempts + excluded.attempts, active_ms = s.active_ms + excluded.active_ms
   ),
   day_groups as (
-    select t.user_id, k.ikey, k.drill, t.day, count(*) as attempts,
-      count(*) filter (where t.correct) as correct, sum(t.active_ms) as active_ms,
-      coalesce(array_agg(t.response_ms order by t.created_at) filter (where t.correct), '{}') as recall_ms,
-      min(t.created_at) as first_at, max(t.created_at) as last_at
+    select t.user_id, k.ikey, k.drill, t.day, count(*) filter (where not t.shown) as attempts,
+      count(*) filter (where t.correct and not t.shown) as correct, sum(t.active_ms) as active_ms,
+      coalesce(array_agg(t.response_ms order by t.created_at) filter (where t.correct and not t.shown),
+        '{}') as recall_ms,
+      min(t.created_at) as first_at, max(t.created_at) as last_at,
+      count(*) filter (where t.shown) as shown
     from t cross join lateral (values
       (t.ikey, t.drill), (t.ikey, '*'),
       ('ffffffff-ffff-ffff-ffff-ffffffffffff'::uuid, t.drill),
@@ -51,7 +55,7 @@ begin
   days as (
     insert into progress_days as d
       (user_id, instrument_key, drill, day, attempts, correct, active_ms, recall_ms, first_at, last_at,
-       median_ms, p90_ms)
+       shown, median_ms, p90_ms)
     select g.*, p.median_ms, p.p90_ms
     from day_groups g cross join lateral (
       select q.p[1], q.p[2] from (
@@ -63,30 +67,34 @@ begin
       attempts = d.attempts + excluded.attempts, correct = d.correct + excluded.correct,
       active_ms = d.active_ms + excluded.active_ms, recall_ms = d.recall_ms || excluded.recall_ms,
       first_at = least(d.first_at, excluded.first_at), last_at = greatest(d.last_at, excluded.last_at),
+      shown = d.shown + excluded.shown,
       (median_ms, p90_ms) = (
         select q.p[1], q.p[2] from (
           select percentile_cont(array[0.5, 0.9]) within group (order by v) as p
           from unnest(d.recall_ms || excluded.recall_ms) as v) as q)
   ),
   item_groups as (
-    select t.user_id, t.ikey, k.drill, t.string, t.fret, t.expected_pitch, count(*) as attempts,
-      count(*) filter (where t.correct) as correct, max(t.created_at) as last_at,
-      progress_tail(array_agg(t.correct order by t.created_at), 50) as recent_correct,
+    select t.user_id, t.ikey, k.drill, t.string, t.fret, t.expected_pitch,
+      count(*) filter (where not t.shown) as attempts,
+      count(*) filter (where t.correct and not t.shown) as correct, max(t.created_at) as last_at,
       progress_tail(coalesce(
-        array_agg(t.response_ms order by t.created_at) filter (where t.correct), '{}'), 50) as recent_ms
+        array_agg(t.correct order by t.created_at) filter (where not t.shown), '{}'), 50) as recent_correct,
+      progress_tail(coalesce(array_agg(t.response_ms order by t.created_at)
+        filter (where t.correct and not t.shown), '{}'), 50) as recent_ms,
+      count(*) filter (where t.shown) as shown
     from t cross join lateral (values (t.drill), ('*')) as k(drill)
     group by t.user_id, t.ikey, k.drill, t.string, t.fret, t.expected_pitch
   )
   insert into progress_items as i
     (user_id, instrument_key, drill, string, fret, pitch, attempts, correct, last_at, recent_correct,
-     recent_ms, recent_accuracy, recent_median_ms)
+     recent_ms, shown, recent_accuracy, recent_median_ms)
   select g.*,
     (select avg(x::int) from unnest(g.recent_correct) as x),
     (select percentile_cont(0.5) within group (order by v) from unnest(g.recent_ms) as v)
   from item_groups g order by 1, 2, 3, 4, 5, 6
   on conflict (user_id, instrument_key, drill, string, fret, pitch) do update set
     attempts = i.attempts + excluded.attempts, correct = i.correct + excluded.correct,
-    last_at = greatest(i.last_at, excluded.last_at),
+    last_at = greatest(i.last_at, excluded.last_at), shown = i.shown + excluded.shown,
     recent_correct = progress_tail(i.recent_correct || excluded.recent_correct, 50),
     recent_ms = progress_tail(i.recent_ms || excluded.recent_ms, 50),
     recent_accuracy = (select avg(x::int)

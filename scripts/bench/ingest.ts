@@ -57,6 +57,7 @@ function batch(player: Player) {
       createdAt: new Date(now - (BATCH - i) * 3000).toISOString(),
       detail: {},
       planItemId: null,
+      outcome: 'answered' as const,
     }
   })
 }

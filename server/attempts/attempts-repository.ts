@@ -19,6 +19,7 @@ export interface AttemptRow {
   received_at: Date
   detail: AttemptInput['detail']
   plan_item_id: string | null
+  outcome: AttemptInput['outcome']
 }
 
 export const toStoredAttempt = (row: AttemptRow): StoredAttempt => ({
@@ -37,6 +38,7 @@ export const toStoredAttempt = (row: AttemptRow): StoredAttempt => ({
   receivedAt: row.received_at.toISOString(),
   detail: row.detail,
   planItemId: row.plan_item_id,
+  outcome: row.outcome,
 })
 
 /** An attempt as its database row (the ingest benchmark writes the same rows). */
@@ -56,6 +58,7 @@ export const attemptRow = (userId: string, a: AttemptInput) => ({
   created_at: a.createdAt,
   detail: a.detail,
   plan_item_id: a.planItemId,
+  outcome: a.outcome,
 })
 
 /** Which of these instrument ids belong to the user. */

@@ -13,6 +13,7 @@ export interface ItemRow {
   pitch: number
   attempts: number
   correct: number
+  shown: number
   lastAt: Date
   recentCorrect: boolean[]
   recentMs: number[]
@@ -23,6 +24,7 @@ export interface DayRow {
   day: string
   attempts: number
   correct: number
+  shown: number
   activeMs: number
   medianMs: number | null
   p90Ms: number | null
@@ -55,6 +57,7 @@ export async function itemRows(
       'pitch',
       'attempts',
       'correct',
+      'shown',
       'last_at',
       'recent_correct',
       'recent_ms',
@@ -65,6 +68,7 @@ export async function itemRows(
     pitch: r.pitch,
     attempts: r.attempts,
     correct: r.correct,
+    shown: r.shown,
     lastAt: r.last_at,
     recentCorrect: r.recent_correct,
     recentMs: r.recent_ms.map(Number),
@@ -89,6 +93,7 @@ export async function dayRows(
     day: string
     attempts: number
     correct: number
+    shown: number
     active_ms: string
     median_ms: number | null
     p90_ms: number | null
@@ -104,6 +109,7 @@ export async function dayRows(
       db.raw('day::text as day'),
       'attempts',
       'correct',
+      'shown',
       'active_ms',
       'median_ms',
       'p90_ms',
@@ -114,6 +120,7 @@ export async function dayRows(
     day: r.day,
     attempts: r.attempts,
     correct: r.correct,
+    shown: r.shown,
     activeMs: Number(r.active_ms),
     medianMs: r.median_ms,
     p90Ms: r.p90_ms,

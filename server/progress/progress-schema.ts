@@ -66,3 +66,15 @@ export const FingeringsQuerySchema = z
     message: 'The region ends before it starts.',
   })
 export type FingeringsQuery = z.infer<typeof FingeringsQuerySchema>
+
+/** GET /progress/cycle-position: a scale, and the plan item being practised (if any). */
+export const CyclePositionQuerySchema = z.strictObject({
+  student: z.uuid('Not a valid student id.').optional(),
+  scale: z
+    .string()
+    .max(40)
+    .refine(accepts(scaleTypeName), 'Choose a known scale.')
+    .transform((s) => scaleTypeName(s)),
+  planItem: z.uuid('Not a valid plan item id.').optional(),
+})
+export type CyclePositionQuery = z.infer<typeof CyclePositionQuerySchema>

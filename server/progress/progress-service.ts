@@ -17,6 +17,8 @@ import {
   totalsOf,
 } from './progress-stats'
 import * as repo from './progress-repository'
+import { lastCycleStop } from './cycle-stop-repository'
+import type { CyclePositionAnswer } from '../../src/contract/drills'
 import type {
   FingeringsAnswer,
   NotesAnswer,
@@ -25,7 +27,12 @@ import type {
   SummaryAnswer,
   TimelineAnswer,
 } from '../../src/contract/progress'
-import type { FingeringsQuery, ProgressScope, RangeQuery } from './progress-schema'
+import type {
+  CyclePositionQuery,
+  FingeringsQuery,
+  ProgressScope,
+  RangeQuery,
+} from './progress-schema'
 
 const { ALL_DRILLS, ALL_INSTRUMENTS } = repo
 const DEFAULT_TIMELINE_DAYS = 30
@@ -179,7 +186,8 @@ export async function timeline(
   )
   const series = drills.map((drill) => ({
     drill: (drill === ALL_DRILLS ? 'all' : drill) as TimelineAnswer['series'][number]['drill'],
-    points: rows.filter((r) => r.drill === drill).map(toPoint),
+    // a day with only "show me" has no answers to chart
+    points: rows.filter((r) => r.drill === drill && r.attempts > 0).map(toPoint),
   }))
   return { timeZone, from, to, series }
 }
@@ -199,4 +207,18 @@ export async function fingerings(
     instrumentId: instrument?.id,
   })
   return { patterns }
+}
+
+/** Where the last Window Cycle session of a scale (of a plan item) stopped: its last note. */
+export async function cyclePosition(
+  ctx: AppContext,
+  viewer: PublicUser,
+  q: CyclePositionQuery,
+): Promise<CyclePositionAnswer> {
+  const studentId = await readableStudent(ctx, viewer, q.student)
+  const row = await lastCycleStop(ctx.db, studentId, {
+    scale: q.scale,
+    planItemId: q.planItem ?? null,
+  })
+  return { stop: row && { ...row, at: row.at.toISOString() } }
 }

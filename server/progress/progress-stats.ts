@@ -18,10 +18,12 @@ export function figuresOf(rows: readonly ItemRow[]): ItemFigures {
   const recentMs = rows.flatMap((r) => r.recentMs)
   const attempts = rows.reduce((n, r) => n + r.attempts, 0)
   const correct = rows.reduce((n, r) => n + r.correct, 0)
+  const shown = rows.reduce((n, r) => n + r.shown, 0)
   const last = rows.reduce<Date | null>((at, r) => (at && at > r.lastAt ? at : r.lastAt), null)
   return {
     attempts,
     correct,
+    shown,
     accuracy: ratio(correct, attempts),
     recentAnswers: recentCorrect.length,
     recentAccuracy: ratio(recentCorrect.filter(Boolean).length, recentCorrect.length),
@@ -80,10 +82,12 @@ export function stringFigures(rows: readonly ItemRow[], strings: number) {
 export function totalsOf(days: readonly DayRow[], sessions: number): PracticeTotals {
   const attempts = days.reduce((n, d) => n + d.attempts, 0)
   const correct = days.reduce((n, d) => n + d.correct, 0)
+  const shown = days.reduce((n, d) => n + d.shown, 0)
   const activeMs = days.reduce((n, d) => n + d.activeMs, 0)
   return {
     attempts,
     correct,
+    shown,
     accuracy: ratio(correct, attempts),
     minutes: round1(activeMs / 60000),
     days: days.length,
@@ -95,6 +99,7 @@ export const toPoint = (d: DayRow): TimelinePoint => ({
   day: d.day,
   attempts: d.attempts,
   correct: d.correct,
+  shown: d.shown,
   accuracy: d.correct / d.attempts,
   medianMs: d.medianMs,
   p90Ms: d.p90Ms,

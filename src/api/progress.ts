@@ -1,5 +1,5 @@
 // /api/progress endpoints: a student's statistics (own, or `student` for their teachers).
-import type { DrillId } from '../contract/drills'
+import type { CyclePositionAnswer, DrillId } from '../contract/drills'
 import type {
   FingeringsAnswer,
   NotesAnswer,
@@ -43,3 +43,7 @@ export interface FingeringsParams {
 /** How often each fingering of a key and region was practised in Range Runs. */
 export const fetchFingerings = (p: FingeringsParams) =>
   http.get<FingeringsAnswer>('/progress/fingerings', { query: { ...p } })
+
+/** Where the last Window Cycle session of a scale (of a plan item) stopped. */
+export const fetchCyclePosition = (p: { scale: string; planItem?: string }) =>
+  http.get<CyclePositionAnswer>('/progress/cycle-position', { query: { ...p } })

@@ -15,8 +15,10 @@ export interface ProgressInstrument {
 
 /** Figures of a place or a note. Accuracy is lifetime; "recent" is the latest 50 answers per place. */
 export interface ItemFigures {
+  /** Answers (right or wrong); "show me" is counted apart in `shown`. */
   attempts: number
   correct: number
+  shown: number
   accuracy: number | null
   recentAnswers: number
   recentAccuracy: number | null
@@ -50,6 +52,7 @@ export interface TimelinePoint {
   day: string
   attempts: number
   correct: number
+  shown: number
   accuracy: number
   /** Median and 90th percentile of that day's right answers (ms); null on a day without one. */
   medianMs: number | null
@@ -74,6 +77,8 @@ export interface Streak {
 export interface PracticeTotals {
   attempts: number
   correct: number
+  /** Answers shown on request ("show me"), not counted in attempts or accuracy. */
+  shown: number
   accuracy: number | null
   minutes: number
   days: number

@@ -11,7 +11,7 @@ import {
   type DrillId,
 } from '../contract/drills'
 import { noteAt, positionsOf } from '../theory'
-import { planCycle, cycleQuestions } from './cycle/cycle-generator'
+import { cycleOptions, cycleSession } from './cycle/cycle-generator'
 import { cycleGrader } from './cycle/cycle-grader'
 import { toAttempt } from './engine/to-attempt'
 import type { PickedCell } from './engine/locate'
@@ -65,7 +65,7 @@ const CASES: [DrillId, () => Record<string, unknown>[]][] = [
         region: { lowString: 0, highString: 3, lowFret: 0, highFret: 5 },
       })
       const [q] = recallQuestions({ ...NECK, settings, seed: 1, focus: [] })
-      const grader = recallGrader({ spellInKey: false, keyLabel: 'C major', accidentals: 'flat' })
+      const grader = recallGrader({ key: null, keyLabel: 'C major', accidentals: 'flat' })
       return detailsOf('recall', q!, grader, [q!.spelled, 'x#'])
     },
   ],
@@ -103,7 +103,7 @@ const CASES: [DrillId, () => Record<string, unknown>[]][] = [
     'cycle',
     () => {
       const settings = CycleSettingsSchema.parse({ low: 28, high: 47 })
-      const [q] = cycleQuestions(planCycle(settings).keys, settings.scale, null)
+      const [q] = cycleSession(cycleOptions(settings), null, null).questions
       return detailsOf('cycle', q!, cycleGrader(NECK), locate(q!))
     },
   ],

@@ -12,6 +12,8 @@ export interface FieldSpec {
   /** Shown to the teacher as value + offset (strings count from 1 in the form, from 0 in data). */
   offset?: number
   nullable?: boolean
+  /** What an empty nullable choice means ("first key of the cycle"). */
+  emptyText?: string
   options?: { title: string; value: string }[]
   advanced?: boolean
   /** Only shown when another setting has a value (e.g. custom keys when the cycle is custom). */

@@ -21,6 +21,7 @@ export function attemptInput(overrides: Partial<AttemptInput> = {}): AttemptInpu
     createdAt: new Date().toISOString(),
     detail: {},
     planItemId: null,
+    outcome: 'answered',
     ...overrides,
   }
 }

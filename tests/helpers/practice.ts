@@ -34,6 +34,9 @@ export interface Answer {
   drill?: string
   pitch?: number
   detail?: Record<string, string | number | boolean | null>
+  /** 'shown' for a "show me" (default: answered). */
+  outcome?: 'answered' | 'shown'
+  planItemId?: string | null
 }
 
 /** An attempt body for the contract of POST /api/attempts. */
@@ -58,7 +61,8 @@ export function attemptBody(
     responseMs: a.ms,
     createdAt: a.at,
     detail: a.detail ?? {},
-    planItemId: null,
+    planItemId: a.planItemId ?? null,
+    ...(a.outcome ? { outcome: a.outcome } : {}),
   }
 }
 

@@ -37,6 +37,7 @@ describe('figures of pooled places', () => {
         pitch: 36,
         attempts: 4,
         correct: 3,
+        shown: 1,
         lastAt: at,
         recentCorrect: [true, true, false, true],
         recentMs: [1200, 1800, 900],
@@ -47,15 +48,17 @@ describe('figures of pooled places', () => {
         pitch: 36,
         attempts: 2,
         correct: 1,
+        shown: 0,
         lastAt: later,
         recentCorrect: [true, false],
         recentMs: [2000],
       },
     ])
-    // 6 answers, 4 right; times 900 1200 1800 2000 → median 1500.
+    // 6 answers, 4 right, 1 shown apart; times 900 1200 1800 2000 → median 1500.
     expect(f).toMatchObject({
       attempts: 6,
       correct: 4,
+      shown: 1,
       recentAnswers: 6,
       medianMs: 1500,
       lastSeenAt: later.toISOString(),
@@ -104,8 +107,8 @@ describe('days and streaks', () => {
     const day = { drill: '*', lastAt: new Date(), medianMs: null, p90Ms: null }
     const totals = totalsOf(
       [
-        { ...day, day: '2026-03-01', attempts: 8, correct: 6, activeMs: 172_200 },
-        { ...day, day: '2026-03-02', attempts: 2, correct: 1, activeMs: 6000 },
+        { ...day, day: '2026-03-01', attempts: 8, correct: 6, shown: 2, activeMs: 172_200 },
+        { ...day, day: '2026-03-02', attempts: 2, correct: 1, shown: 0, activeMs: 6000 },
       ],
       3,
     )
@@ -113,6 +116,7 @@ describe('days and streaks', () => {
     expect(totals).toEqual({
       attempts: 10,
       correct: 7,
+      shown: 2,
       accuracy: 0.7,
       minutes: 3,
       days: 2,

@@ -4,12 +4,19 @@ import { customCycle, CYCLES, cycleTonics, missingPitchClasses, pitchName } from
 import { defineDrillContract, type SettingsIssue } from './drill-contract'
 import { DetailText, Length, Pitch, Scale, scaleLabel, Tonic } from './fields'
 
+/** The ways a window cycle's keys are played (the drill's default: alternate). */
+export const CYCLE_DIRECTIONS = ['alternate', 'up', 'down'] as const
+
 export const CycleSettingsSchema = Length.extend({
   low: Pitch,
   high: Pitch,
   scale: Scale.default('major'),
   cycle: z.enum(['fourths', 'fifths', 'chromatic', 'whole-tone', 'custom']).default('fourths'),
   customTonics: z.array(Tonic).max(24).default([]),
+  /** Up, down, or alternating (up, down, up …) so a wide window is used from bottom to top. */
+  direction: z.enum(CYCLE_DIRECTIONS).default('alternate'),
+  /** The key to begin the cycle on; null: its first key (C for fourths and fifths). */
+  startTonic: Tonic.nullable().default(null),
   tempo: z.number().int().min(30).max(240).default(72),
   click: z.boolean().default(false),
 }).refine((s) => s.low < s.high, 'The low note must be below the high note.')
@@ -22,9 +29,26 @@ export const CycleDetailSchema = z.strictObject({
   degree: z.number().int().min(1),
   /** The note was folded back an octave to stay inside the window. */
   displaced: z.boolean(),
+  /** Where the note is in its key (0 = the first root) and which way the key went: the next
+   * session continues after it. */
+  noteIndex: z.number().int().min(0).max(12).optional(),
+  phase: z.enum(['up', 'down']).optional(),
+  revealed: z.literal(true).optional(),
 })
 
 type CycleChoice = Pick<CycleSettings, 'cycle' | 'customTonics' | 'scale'>
+
+/** Where the last session stopped: the key of its last note, the note in it and its way. */
+export interface CycleStop {
+  key: string
+  noteIndex: number
+  phase: 'up' | 'down'
+}
+
+/** GET /api/progress/cycle-position: the last Window Cycle note of a scale (of a plan item). */
+export interface CyclePositionAnswer {
+  stop: (CycleStop & { at: string }) | null
+}
 
 /** The tonics of the chosen cycle (spelled for the scale), starting on C, or the custom list. */
 export function cycleKeys(settings: CycleChoice): string[] {
@@ -53,9 +77,14 @@ function presetIssues(settings: CycleSettings): SettingsIssue[] {
   return [{ path: ['high'], message }]
 }
 
-function cycleLabel(cycle: string, customTonics: readonly string[]): string {
-  if (cycle === 'custom') return `keys ${customTonics.join(' ')}`
-  return CYCLES.find((c) => c.id === cycle)?.label.toLowerCase() ?? cycle
+function cycleLabel(settings: CycleSettings): string {
+  const { cycle, customTonics, startTonic, direction } = settings
+  const keys =
+    cycle === 'custom'
+      ? `keys ${customTonics.join(' ')}`
+      : (CYCLES.find((c) => c.id === cycle)?.label.toLowerCase() ?? cycle)
+  const from = startTonic && cycle !== 'custom' ? ` from ${startTonic}` : ''
+  return `${keys}${from}${direction === 'alternate' ? '' : `, all ${direction}`}`
 }
 
 export const cycleContract = defineDrillContract({
@@ -65,7 +94,7 @@ export const cycleContract = defineDrillContract({
   detail: CycleDetailSchema,
   focus: { keys: true, regions: false },
   describe: (s) =>
-    `${scaleLabel(s.scale)}, ${cycleLabel(s.cycle, s.customTonics)}, window ${pitchName(s.low, 'flat')}–${pitchName(s.high, 'flat')}`,
+    `${scaleLabel(s.scale)}, ${cycleLabel(s)}, window ${pitchName(s.low, 'flat')}–${pitchName(s.high, 'flat')}`,
   keysOf,
   presetIssues,
 })

@@ -1,7 +1,11 @@
 // Range Runs' contract: a scale from the lowest to the highest note a hand position offers.
 import { z } from 'zod'
+import { MAX_SHIFTS } from '../../theory'
 import { defineDrillContract } from './drill-contract'
 import { DetailText, Fret, Length, Scale, scaleLabel, Tonic } from './fields'
+
+/** The hand systems a run may be fingered with (the theory core's names). */
+export const HAND_SYSTEMS = ['one-finger-per-fret', 'three-fret'] as const
 
 export const RunsSettingsSchema = Length.extend({
   tonic: Tonic,
@@ -9,11 +13,18 @@ export const RunsSettingsSchema = Length.extend({
   lowFret: Fret,
   highFret: Fret,
   maxPerString: z.number().int().min(1).max(8).default(4),
-  handSpan: z.number().int().min(2).max(8).default(4),
+  /** Hand shifts a fingering may use; each widens the position by a fret on either side. */
+  shifts: z.number().int().min(0).max(MAX_SHIFTS).default(1),
+  /** One finger per fret over four frets, or fingers 1-2-4 over three (low register on bass). */
+  handSystem: z.enum(HAND_SYSTEMS).default('one-finger-per-fret'),
   /** Show the chosen fingering's cells on the board while playing (off: from memory). */
   showFingering: z.boolean().default(true),
 })
 export type RunsSettings = z.infer<typeof RunsSettingsSchema>
+
+/** "no shift", "1 shift", "2 shifts". */
+export const describeShifts = (shifts: number) =>
+  shifts === 0 ? 'no shift' : `${shifts} shift${shifts === 1 ? '' : 's'}`
 
 export const RunsDetailSchema = z.strictObject({
   tonic: DetailText,
@@ -34,5 +45,6 @@ export const runsContract = defineDrillContract({
   settings: RunsSettingsSchema,
   detail: RunsDetailSchema,
   focus: { keys: true, regions: true },
-  describe: (s) => `${s.tonic} ${scaleLabel(s.scale)}, frets ${s.lowFret}–${s.highFret}`,
+  describe: (s) =>
+    `${s.tonic} ${scaleLabel(s.scale)}, frets ${s.lowFret}–${s.highFret}, ${describeShifts(s.shifts)}`,
 })

@@ -1,6 +1,6 @@
 // Octave Scatter's contract: a scale whose notes jump octaves, found at their exact pitch.
 import { z } from 'zod'
-import { pitchName } from '../../theory'
+import { DEFAULT_MAX_LEAP, pitchName } from '../../theory'
 import { defineDrillContract } from './drill-contract'
 import { DetailText, Length, Pitch, Scale, scaleLabel, Tonic } from './fields'
 
@@ -11,7 +11,17 @@ export const ScatterSettingsSchema = Length.extend({
   low: Pitch.nullable().default(null),
   high: Pitch.nullable().default(null),
   minDisplaced: z.number().int().min(0).max(12).default(2),
-  maxLeap: z.number().int().min(1).max(48).nullable().default(null),
+  /** Largest leap between neighbouring notes (semitones); plans saved with none get the default. */
+  maxLeap: z
+    .number()
+    .int()
+    .min(1)
+    .max(48)
+    .nullable()
+    .default(DEFAULT_MAX_LEAP)
+    .transform((leap) => leap ?? DEFAULT_MAX_LEAP),
+  /** `each-moved`: every note in a different octave from a plain step up from the one before. */
+  placement: z.enum(['any', 'each-moved']).default('any'),
   seed: z.number().int().nullable().default(null),
 })
 export type ScatterSettings = z.infer<typeof ScatterSettingsSchema>

@@ -15,6 +15,7 @@ const D2: CycleQuestion = {
   name: 'D2',
   displaced: true,
   keyIndex: 1,
+  direction: 'up',
   detail: {},
 }
 
@@ -37,8 +38,19 @@ describe('Window Cycle grader', () => {
 
   it('names the step for the prompt', () => {
     expect(describeStep(D2)).toBe('F major, degree 6')
-    expect(describeStep({ tonic: 'Eb', scale: 'major', degree: 1, octave: true })).toBe(
-      'E♭ major, degree 1 (the octave)',
-    )
+    expect(
+      describeStep({ tonic: 'Eb', scale: 'major', degree: 1, octave: true, displaced: false }),
+    ).toBe('E♭ major, degree 1 (the octave)')
+  })
+
+  it('a closing root folded onto the starting pitch is a fold, not the octave (PRODUCT.md)', () => {
+    const closing = { tonic: 'F', scale: 'major', degree: 1, octave: false, displaced: true }
+    expect(describeStep(closing)).toBe('F major, degree 1 (folded)')
+  })
+
+  it('going down, a note below the window is folded up (PRODUCT.md "down": mirror image)', () => {
+    const down = { ...D2, direction: 'down' as const }
+    const grade = grader.grade(down, { string: 2, fret: 0, pitch: 38 }, [])
+    expect(grade.feedback).toBe('Right: D2 (folded up an octave to stay inside the window).')
   })
 })

@@ -4,12 +4,14 @@ import { gradeLocate, revealLocate, type Neck, type PickedCell } from '../engine
 import type { DrillGrader, Grade } from '../engine/types'
 import type { CycleQuestion } from './cycle-generator'
 
-const FOLDED = 'folded down an octave to stay inside the window'
+// Going up, a note above the window folds down; going down, a note below it folds up.
+const folded = (question: Pick<CycleQuestion, 'direction'>) =>
+  `folded ${question.direction === 'down' ? 'up' : 'down'} an octave to stay inside the window`
 
 function flagDisplaced(question: CycleQuestion, grade: Grade): Grade {
-  const detail = { displaced: question.displaced }
+  const detail = { ...grade.detail, displaced: question.displaced }
   if (!question.displaced) return { ...grade, detail }
-  const note = grade.correct ? ` (${FOLDED}).` : ` It was ${FOLDED}.`
+  const note = grade.correct ? ` (${folded(question)}).` : ` It was ${folded(question)}.`
   return {
     ...grade,
     detail,
@@ -17,26 +19,40 @@ function flagDisplaced(question: CycleQuestion, grade: Grade): Grade {
   }
 }
 
+/** The neck naming notes in the question's key (each key of the cycle in its own spelling). */
+export const questionKeyed = <N extends Neck>(
+  neck: N,
+  question: Pick<CycleQuestion, 'tonic' | 'scale'> | null,
+): N => ({ ...neck, key: question && { tonic: question.tonic, scale: question.scale } })
+
 export function cycleGrader(neck: Neck): DrillGrader<CycleQuestion, PickedCell> {
   return {
     grade: (question, pick) =>
       flagDisplaced(
         question,
         gradeLocate({
-          neck,
+          neck: questionKeyed(neck, question),
           expectedPitch: question.expectedPitch,
           expectedName: question.name,
           pick,
         }),
       ),
     reveal: (question) =>
-      flagDisplaced(question, revealLocate(neck, question.expectedPitch, question.name)),
+      flagDisplaced(
+        question,
+        revealLocate(questionKeyed(neck, question), question.expectedPitch, question.name),
+      ),
   }
 }
 
-/** "E♭ major, degree 3" (or "degree 1, the octave") for prompts and feedback. */
+/**
+ * "E♭ major, degree 3" for prompts and feedback; the closing root says "(the octave)" only when it
+ * lies an octave from the key's first note, and "(folded)" when a fold brought it back there.
+ */
 export function describeStep(
-  question: Pick<CycleQuestion, 'tonic' | 'scale' | 'degree' | 'octave'>,
+  question: Pick<CycleQuestion, 'tonic' | 'scale' | 'degree' | 'octave' | 'displaced'>,
 ): string {
-  return `${toUnicode(question.tonic)} ${question.scale}, degree ${question.degree}${question.octave ? ' (the octave)' : ''}`
+  const step = `${toUnicode(question.tonic)} ${question.scale}, degree ${question.degree}`
+  if (question.octave) return `${step} (the octave)`
+  return question.displaced && question.degree === 1 ? `${step} (folded)` : step
 }

@@ -6,6 +6,7 @@ import { instrumentRange } from '../../theory'
 import { defineDrill } from '../drill-definition'
 import { LENGTH_FIELDS, switchField } from '../setting-fields'
 import { defaultWindow } from './cycle-generator'
+import { DIRECTION_OPTIONS } from './directions'
 
 export const cycleDrill = defineDrill(cycleContract, {
   route: '/practice/cycle',
@@ -35,6 +36,19 @@ export const cycleDrill = defineDrill(cycleContract, {
         { title: 'Whole steps', value: 'whole-tone' },
         { title: 'My own list', value: 'custom' },
       ],
+    },
+    {
+      path: 'direction',
+      label: 'Direction',
+      kind: 'select',
+      options: DIRECTION_OPTIONS,
+    },
+    {
+      path: 'startTonic',
+      label: 'Start key',
+      kind: 'tonic',
+      nullable: true,
+      emptyText: 'first key of the cycle',
     },
     {
       path: 'customTonics',

@@ -8,8 +8,9 @@ import type { PickedCell } from '../engine/locate'
 import { currentPickMarks } from '../engine/locate-marks'
 import { limitsOf } from '../engine/session'
 import { useDrill } from '../engine/useDrill'
-import { cycleGrader } from './cycle-grader'
-import { cycleQuestions, type CycleQuestion } from './cycle-generator'
+import { cycleGrader, questionKeyed } from './cycle-grader'
+import { cycleOptions, cycleSession, positionAfter, type CycleQuestion } from './cycle-generator'
+import { useCycleStop } from './useCycleStop'
 import { cycleDrill } from './definition'
 import { useCycleWindow } from './useCycleWindow'
 import { useWindowPicker } from './useWindowPicker'
@@ -19,14 +20,12 @@ export function useWindowCycle() {
     ...LOCATE_ANSWERS,
     grader: ({ neck }) => cycleGrader(neck),
     problem: () => cycleWindow.problem.value,
-    prepare: ({ settings }) => {
+    prepare: async ({ settings }) => {
       picker.stop()
-      const questions = cycleQuestions(
-        cycleWindow.cycle.value.keys,
-        settings.scale,
-        settings.questionCount,
-      )
-      // no count = the whole cycle, a known length
+      const options = cycleOptions(settings)
+      const from = positionAfter(options, await stops.lastStop())
+      const { questions } = cycleSession(options, from, settings.questionCount)
+      // no count = a whole round of the cycle, a known length
       return { questions, limits: { ...limitsOf(settings), openEnded: false } }
     },
     afterStart: ({ settings }) => {
@@ -37,6 +36,8 @@ export function useWindowCycle() {
   const { neck, settings, session, sound } = drill
   const cycleWindow = useCycleWindow(settings, neck)
   const picker = useWindowPicker(settings)
+  const records = computed(() => session.state.value?.records)
+  const stops = useCycleStop(settings, drill.plan.planItemId, records)
   watch(session.status, (status) => {
     if (status === 'finished' || status === 'ready') sound.stopClick()
   })
@@ -49,9 +50,20 @@ export function useWindowCycle() {
     session.current.value
       ? [
           ...cycleWindow.shading.value,
-          ...currentPickMarks(session, neck.value, (q) => toUnicode(q.name)),
+          ...currentPickMarks(session, questionKeyed(neck.value, session.current.value), (q) =>
+            toUnicode(q.name),
+          ),
         ]
       : [...cycleWindow.shading.value, ...picker.marks.value],
   )
-  return { ...drill, ...cycleWindow, picker, previous, marks }
+  /** "F major, note 3": where the next session continues, when not at the start key's first note. */
+  const continuesAt = computed(() => {
+    const options = cycleWindow.cycle.value.error ? null : cycleOptions(settings.value)
+    const from = options && positionAfter(options, stops.current.value)
+    if (!options || !from) return null
+    const tonic = toUnicode(options.tonics[from.keyIndex] ?? '')
+    const note = from.noteIndex === 0 ? '' : `, note ${from.noteIndex + 1}`
+    return `${tonic} ${settings.value.scale}${note}`
+  })
+  return { ...drill, ...cycleWindow, picker, previous, marks, stops, continuesAt }
 }

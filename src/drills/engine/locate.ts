@@ -1,9 +1,10 @@
 // Grading "find this exact pitch on the neck" (Pitch Hunt, Range Runs, Octave Scatter, Window Cycle).
 import {
-  pitchName,
+  nameInContext,
   positionsOf,
   toUnicode,
   type AccidentalPreference,
+  type KeyRef,
   type Position,
 } from '../../theory'
 import type { Grade } from './types'
@@ -12,7 +13,19 @@ export interface Neck {
   tuning: readonly number[]
   frets: number
   accidentals: AccidentalPreference
+  /** The key notes are named in (nameInContext), when the drill plays in one. */
+  key?: KeyRef | null
 }
+
+/** The neck with the drill's key (tonic and scale of its settings), for naming notes. */
+export const keyed = <N extends Neck>(neck: N, settings: { tonic: string; scale: string }): N => ({
+  ...neck,
+  key: { tonic: settings.tonic, scale: settings.scale },
+})
+
+/** A pitch named for the drill: in its key, else with the instrument's accidentals ("B♭2"). */
+export const nameOnNeck = (neck: Neck, pitch: number) =>
+  toUnicode(nameInContext(pitch, { key: neck.key, prefer: neck.accidentals }))
 
 /** A picked cell as the attempt stores it: "string:fret" (0 = lowest string). */
 export const cellText = (cell: Position) => `${cell.string}:${cell.fret}`
@@ -51,9 +64,11 @@ export interface LocateOptions {
 export function gradeLocate(options: LocateOptions): Grade {
   const { neck, expectedPitch, pick } = options
   const places = positionsOf(neck.tuning, neck.frets, expectedPitch)
-  const name = toUnicode(options.expectedName ?? pitchName(expectedPitch, neck.accidentals))
+  const name = options.expectedName
+    ? toUnicode(options.expectedName)
+    : nameOnNeck(neck, expectedPitch)
   const correct = pick.pitch === expectedPitch
-  const picked = toUnicode(pitchName(pick.pitch, neck.accidentals))
+  const picked = nameOnNeck(neck, pick.pitch)
   const feedback = correct
     ? `Right: ${name}.`
     : `That is ${picked}; ${name} is ${describeMiss(pick.pitch, expectedPitch)}. It lives at the marked places.`
@@ -85,7 +100,7 @@ export function describeMiss(picked: number, expected: number): string {
 /** The grade for "show me" on a locate question: a miss that reveals every place. */
 export function revealLocate(neck: Neck, expectedPitch: number, expectedName?: string): Grade {
   const places = positionsOf(neck.tuning, neck.frets, expectedPitch)
-  const name = toUnicode(expectedName ?? pitchName(expectedPitch, neck.accidentals))
+  const name = expectedName ? toUnicode(expectedName) : nameOnNeck(neck, expectedPitch)
   return {
     correct: false,
     answer: '',

@@ -1,5 +1,6 @@
 // What a session adds up to: accuracy, median response time, the slowest cells and the misses.
 import type { SessionState } from './session'
+import { isShown } from './to-attempt'
 import type { AnswerRecord, DrillQuestion, SessionSummary, SlowCell } from './types'
 
 /** Median of a list of numbers (mean of the middle two for an even count); null when empty. */
@@ -27,7 +28,9 @@ export function slowestCells<Q extends DrillQuestion>(
     const cell = group[0]?.grade.cell ?? { string: 0, fret: 0 }
     const correct = group.filter((record) => record.grade.correct).length
     const ms = median(group.map((record) => record.responseMs)) ?? 0
-    return { string: cell.string, fret: cell.fret, medianMs: ms, answers: group.length, correct }
+    const name = group[0]?.question.name
+    const slow = { string: cell.string, fret: cell.fret, medianMs: ms, answers: group.length }
+    return { ...slow, correct, ...(name ? { name } : {}) }
   })
   cells.sort((a, b) => b.medianMs - a.medianMs || a.correct / a.answers - b.correct / b.answers)
   return cells.slice(0, limit)
@@ -46,13 +49,15 @@ export function missedQuestions<Q extends DrillQuestion>(records: readonly Answe
 
 export function summarize<Q extends DrillQuestion>(state: SessionState<Q>): SessionSummary<Q> {
   const { records } = state
-  const correct = records.filter((record) => record.grade.correct).length
+  const answered = records.filter((record) => !isShown(record.grade))
+  const correct = answered.filter((record) => record.grade.correct).length
   const asked = new Set(records.map((record) => record.questionIndex)).size
   return {
-    answers: records.length,
+    answers: answered.length,
     correct,
-    accuracy: records.length === 0 ? null : correct / records.length,
-    medianMs: median(records.map((record) => record.responseMs)),
+    shown: records.length - answered.length,
+    accuracy: answered.length === 0 ? null : correct / answered.length,
+    medianMs: median(answered.map((record) => record.responseMs)),
     slowest: slowestCells(records),
     misses: missedQuestions(records),
     questionsAsked: asked,

@@ -2,7 +2,7 @@
 // drill's contract describes (question detail and grade detail together).
 import type { DrillAttempt } from '../../contract/attempts'
 import type { DrillDetail, DrillId } from '../../contract/drills'
-import type { AnswerRecord, DrillQuestion } from './types'
+import type { AnswerRecord, DrillQuestion, Grade } from './types'
 
 export interface AttemptContext {
   instrumentId: string | null
@@ -11,6 +11,9 @@ export interface AttemptContext {
 }
 
 const MAX_RESPONSE_MS = 600_000
+
+/** A grade given by "show me" (the answer revealed on request). */
+export const isShown = (grade: Grade) => grade.detail.revealed === true
 
 export function toAttempt<D extends DrillId, Q extends DrillQuestion>(
   drill: D,
@@ -35,5 +38,7 @@ export function toAttempt<D extends DrillId, Q extends DrillQuestion>(
     createdAt: createdAt.toISOString(),
     detail: { ...question.detail, ...grade.detail } as DrillDetail[D],
     planItemId: context.planItemId,
+    // "show me" is stored as shown: neither right nor a miss in the statistics
+    outcome: isShown(grade) ? 'shown' : 'answered',
   }
 }

@@ -15,6 +15,8 @@ export interface DrillQuestion {
   detail: AttemptDetail
   /** Why the focus selector chose this question ("missed twice this week"), when it did. */
   reason?: string
+  /** The expected note as this drill names it (nameInContext: in its key, with octave). */
+  name?: string
 }
 
 /** What a grader decides about one answer. */
@@ -54,8 +56,10 @@ export interface AnswerRecord<Q extends DrillQuestion> {
 
 /** What a finished session adds up to. */
 export interface SessionSummary<Q extends DrillQuestion> {
+  /** Answers given (right or wrong); "show me" is counted apart in `shown`. */
   answers: number
   correct: number
+  shown: number
   /** 0..1; null when nothing was answered. */
   accuracy: number | null
   medianMs: number | null
@@ -67,6 +71,8 @@ export interface SessionSummary<Q extends DrillQuestion> {
 
 /** A cell and how slowly it was answered (median over its answers in the session). */
 export interface SlowCell extends Position {
+  /** The note as the session named it (in its key), when its questions name notes. */
+  name?: string
   medianMs: number
   answers: number
   correct: number

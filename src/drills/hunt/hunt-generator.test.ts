@@ -30,6 +30,22 @@ describe('Pitch Hunt questions', () => {
     expect(huntQuestions(plan({ questionCount: 100 }))).toEqual(questions)
   })
 
+  it('pick by pitch: E1 (one place) comes up about as often as A2 (four places) (issue 13)', () => {
+    // frets 0–12 (arithmetic, open string + fret): E1 = 28 only at E 0; A2 = 45 at A 12, D 7, G 2
+    const cells = huntCells(plan())
+    const places = (pitch: number) => cells.filter((cell) => cell.pitch === pitch).length
+    expect(places(28)).toBe(1)
+    expect(places(45)).toBe(3)
+    const distinct = new Set(cells.map((cell) => cell.pitch)).size // 28 … 55: 28 pitches
+    const pitches = huntQuestions(plan({ questionCount: 500 }, { seed: 3 })).map(
+      (q) => q.expectedPitch,
+    )
+    const share = (pitch: number) => pitches.filter((p) => p === pitch).length / pitches.length
+    // even by pitch: each near 1/28 ≈ 3.6 %; by cell A2 would be 3/52 ≈ 5.8 % and E1 1/52 ≈ 1.9 %
+    expect(distinct).toBe(28)
+    expect(Math.abs(share(45) - share(28))).toBeLessThan(0.025)
+  })
+
   it('clip the band to the instrument (frets 15–24 on a 20-fret neck)', () => {
     expect(huntCells(plan({ lowFret: 15, highFret: 24 }))).toHaveLength(4 * 6)
   })

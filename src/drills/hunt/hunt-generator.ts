@@ -1,8 +1,8 @@
 // Pitch Hunt questions: pitches drawn from a fret band of the neck, weak spots first.
 import {
   createRandom,
+  drawByPitch,
   positionsInRegion,
-  randomInt,
   type FrettedNote,
   type Position,
 } from '../../theory'
@@ -41,20 +41,10 @@ function toQuestion(cell: FrettedNote, reason?: string): HuntQuestion {
   }
 }
 
-// A random cell whose pitch differs from the last question's (when the band allows it).
-function drawCell(
-  cells: FrettedNote[],
-  random: () => number,
-  lastPitch: number | undefined,
-): FrettedNote {
-  const choices = cells.filter((cell) => cell.pitch !== lastPitch)
-  const pool = choices.length > 0 ? choices : cells
-  return pool[randomInt(random, pool.length)] as FrettedNote
-}
-
 /**
  * The questions of a session: with focus on, the weak spots inside the band first (weakest first),
- * then random cells of the band, never the same pitch twice in a row. No question count (a time
+ * then pitches of the band drawn evenly (each pitch as likely, whatever its number of places),
+ * never the same pitch twice in a row. No question count (a time
  * limit only) draws 500.
  */
 export function huntQuestions(plan: HuntPlan): HuntQuestion[] {
@@ -71,7 +61,8 @@ export function huntQuestions(plan: HuntPlan): HuntQuestion[] {
       questions.push(toQuestion(item, item.reason))
   }
   while (questions.length < count) {
-    questions.push(toQuestion(drawCell(cells, random, questions.at(-1)?.expectedPitch)))
+    // pitch first, then a place: a pitch with more places comes up no more often (drawByPitch)
+    questions.push(toQuestion(drawByPitch(cells, random, questions.at(-1)?.expectedPitch)))
   }
   return questions
 }

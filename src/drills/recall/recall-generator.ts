@@ -1,10 +1,10 @@
 // Neck Recall questions: the cells of a blank region, in order or shuffled, weak spots first.
 import {
   createRandom,
-  pitchName,
+  nameInContext,
   positionsInRegion,
   shuffled,
-  spellInKey,
+  spellPitch,
   type AccidentalPreference,
   type FrettedNote,
   type Position,
@@ -65,14 +65,14 @@ export interface RecallPlan {
 
 function toQuestion(cell: FrettedNote, plan: RecallPlan, reason?: string): RecallQuestion {
   const { keyTonic, keyScale, spellInKey: inKey } = plan.settings
-  const name = inKey
-    ? spellInKey(cell.pitch, keyTonic, keyScale)
-    : pitchName(cell.pitch, plan.accidentals)
+  const key = inKey ? { tonic: keyTonic, scale: keyScale } : null
+  const name = nameInContext(cell.pitch, { key, prefer: plan.accidentals, withOctave: false })
   return {
     key: `${cell.string}:${cell.fret}`,
     expectedPitch: cell.pitch,
     cell: { string: cell.string, fret: cell.fret },
-    spelled: name.replace(/-?\d+$/, ''),
+    spelled: name,
+    name: spellPitch(cell.pitch, name),
     detail: reason ? { focusReason: reason.slice(0, 64) } : {},
     ...(reason ? { reason } : {}),
   }

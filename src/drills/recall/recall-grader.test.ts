@@ -10,8 +10,10 @@ const QUESTION: RecallQuestion = {
   spelled: 'Eb',
   detail: {},
 }
-const plain = recallGrader({ spellInKey: false, keyLabel: 'Bb major', accidentals: 'flat' })
-const inKey = recallGrader({ spellInKey: true, keyLabel: 'Bb major', accidentals: 'flat' })
+const BB_MAJOR = { tonic: 'Bb', scale: 'major' }
+const plain = recallGrader({ key: null, keyLabel: 'Bb major', accidentals: 'flat' })
+const inKey = recallGrader({ key: BB_MAJOR, keyLabel: 'Bb major', accidentals: 'flat' })
+const cell = (pitch: number): RecallQuestion => ({ ...QUESTION, expectedPitch: pitch })
 
 describe('Neck Recall grader', () => {
   it.each(['Eb', 'eb', 'D#', 'd#', 'E♭', 'D♯', ' EB '])(
@@ -30,6 +32,33 @@ describe('Neck Recall grader', () => {
     expect(grade.correct).toBe(false)
     expect(grade.answer).toBe('D#')
     expect(grade.feedback).toBe('D♯ sounds right, but in B♭ major it is spelled E♭.')
+  })
+
+  it('in a key, a note outside it takes either single-accidental name (issue 13, common practice)', () => {
+    const dMinor = recallGrader({
+      key: { tonic: 'D', scale: 'minor' },
+      keyLabel: 'D minor',
+      accidentals: 'sharp',
+    })
+    // C#2 = 37 is the raised 7th of D minor (handbook); Db is its other single-accidental name
+    expect(dMinor.grade(cell(37), 'C#', []).correct).toBe(true)
+    expect(dMinor.grade(cell(37), 'Db', []).correct).toBe(true)
+    // Bb2 = 46 is not in C major: A# and Bb both count
+    const cMajor = recallGrader({
+      key: { tonic: 'C', scale: 'major' },
+      keyLabel: 'C major',
+      accidentals: 'sharp',
+    })
+    expect(cMajor.grade(cell(46), 'Bb', []).correct).toBe(true)
+    expect(cMajor.grade(cell(46), 'A#', []).correct).toBe(true)
+  })
+
+  it('without a key, a natural note takes its natural name only: Fb for E and B## for C# are misses', () => {
+    const fb = plain.grade(cell(40), 'Fb', []) // E2 = 40 (scientific pitch notation)
+    expect(fb.correct).toBe(false)
+    expect(fb.feedback).toBe('F♭ sounds right, but write it E.')
+    expect(plain.grade(cell(37), 'B##', []).correct).toBe(false) // C#2 = 37
+    expect(plain.grade(cell(37), 'Db', []).correct).toBe(true)
   })
 
   it('a wrong note is a counted miss naming both spellings of the right one', () => {

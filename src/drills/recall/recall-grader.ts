@@ -1,17 +1,19 @@
-// Neck Recall grading: the typed or picked note name for the asked cell.
+// Neck Recall grading: the typed or picked note name for the asked cell, accepted as the theory
+// core's acceptedNames allows (in a key: its spelling for scale notes).
 import {
+  acceptedNames,
   pitchClassFromAnswer,
-  pitchClassName,
   toAscii,
   toUnicode,
   type AccidentalPreference,
+  type KeyRef,
 } from '../../theory'
 import type { DrillGrader, Grade } from '../engine/types'
 import type { RecallQuestion } from './recall-generator'
 
 export interface RecallGrading {
-  /** Only the spelling in the key counts (D# is wrong in Bb major, where the note is Eb). */
-  spellInKey: boolean
+  /** With "spell in a key": scale notes only as the key spells them (D# is wrong in Bb major). */
+  key: KeyRef | null
   keyLabel: string
   accidentals: AccidentalPreference
 }
@@ -22,11 +24,15 @@ export function normalizeNoteName(text: string): string {
   return `${ascii.charAt(0).toUpperCase()}${ascii.slice(1).toLowerCase()}`
 }
 
-// Both names of a black key ("G♯/A♭"), the instrument's preference first.
-function bothNames(pitchClass: number, prefer: AccidentalPreference): string {
-  const first = pitchClassName(pitchClass, prefer)
-  const second = pitchClassName(pitchClass, prefer === 'flat' ? 'sharp' : 'flat')
-  return toUnicode(first === second ? first : `${first}/${second}`)
+// The names a right answer may have ("E♭/D♯"), the preferred first.
+const acceptedText = (question: RecallQuestion, options: RecallGrading) =>
+  acceptedNames(question.expectedPitch, options.key, options.accidentals).map(toUnicode).join('/')
+
+// Why a right-sounding name is not accepted: the key's spelling, or a name no player writes (B𝄪).
+function spellingMiss(shown: string, expected: string, options: RecallGrading): string {
+  return options.key
+    ? `${shown} sounds right, but in ${toUnicode(options.keyLabel)} it is spelled ${expected}.`
+    : `${shown} sounds right, but write it ${expected.replace('/', ' or ')}.`
 }
 
 function grade(question: RecallQuestion, text: string, options: RecallGrading): Grade {
@@ -46,18 +52,14 @@ function grade(question: RecallQuestion, text: string, options: RecallGrading): 
     }
   }
   const answer = normalizeNoteName(text)
-  const expectedClass = question.expectedPitch % 12
-  const rightSound = pitchClass === expectedClass
-  const rightSpelling = !options.spellInKey || answer === question.spelled
-  const correct = rightSound && rightSpelling
+  const rightSound = pitchClass === question.expectedPitch % 12
+  const accepted = acceptedNames(question.expectedPitch, options.key, options.accidentals)
+  const correct = rightSound && accepted.includes(answer)
   const shown = toUnicode(answer)
-  const expected = options.spellInKey
-    ? toUnicode(question.spelled)
-    : bothNames(expectedClass, options.accidentals)
+  const expected = acceptedText(question, options)
   let feedback = `Right: ${expected}.`
   if (!rightSound) feedback = `Not ${shown}: this cell is ${expected}.`
-  else if (!rightSpelling)
-    feedback = `${shown} sounds right, but in ${toUnicode(options.keyLabel)} it is spelled ${expected}.`
+  else if (!correct) feedback = spellingMiss(shown, expected, options)
   return { ...base, correct, answer, complete: true, counted: true, feedback }
 }
 
@@ -70,7 +72,7 @@ export function recallGrader(options: RecallGrading): DrillGrader<RecallQuestion
       cell: question.cell,
       complete: true,
       counted: true,
-      feedback: `This cell is ${options.spellInKey ? toUnicode(question.spelled) : bothNames(question.expectedPitch % 12, options.accidentals)}.`,
+      feedback: `This cell is ${acceptedText(question, options)}.`,
       reveal: [question.cell],
       detail: { revealed: true },
     }),

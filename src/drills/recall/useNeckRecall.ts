@@ -3,7 +3,8 @@
 import { computed } from 'vue'
 import type { CellMark } from '../../components/fretboard/fretboard-types'
 import type { RecallSettings } from '../../contract/drills'
-import { pitchClassName, toUnicode, type AccidentalPreference } from '../../theory'
+import { scaleLabel } from '../../contract/drills/fields'
+import { nameInContext, toUnicode, type AccidentalPreference } from '../../theory'
 import { useDrill, type DrillContext } from '../engine/useDrill'
 import type { DrillNeck } from '../engine/useDrillNeck'
 import type { useFocus } from '../engine/useFocus'
@@ -37,7 +38,7 @@ function heardName(pitch: number, question: RecallQuestion, accidentals: Acciden
   const pitchClass = pitch % 12
   return pitchClass === question.expectedPitch % 12
     ? question.spelled
-    : pitchClassName(pitchClass, accidentals)
+    : nameInContext(pitch, { prefer: accidentals, withOctave: false })
 }
 
 // Per answered cell, its latest answer: right (the name) or wrong (the right name, to learn it).
@@ -56,8 +57,8 @@ export function useNeckRecall() {
   const drill = useDrill<'recall', RecallQuestion, string>(recallDrill, {
     grader: ({ settings, neck }) =>
       recallGrader({
-        spellInKey: settings.spellInKey,
-        keyLabel: `${settings.keyTonic} ${settings.keyScale}`,
+        key: settings.spellInKey ? { tonic: settings.keyTonic, scale: settings.keyScale } : null,
+        keyLabel: `${settings.keyTonic} ${scaleLabel(settings.keyScale)}`,
         accidentals: neck.accidentals,
       }),
     prepare,

@@ -2,6 +2,8 @@
 // through each fingering in turn.
 import { mdiStairs } from '@mdi/js'
 import { runsContract, RunsSettingsSchema } from '../../contract/drills'
+import { HAND_SYSTEM_OPTIONS } from './hand-systems'
+import { MAX_SHIFTS } from '../../theory'
 import { defineDrill } from '../drill-definition'
 import { fretField, LENGTH_FIELDS, switchField } from '../setting-fields'
 
@@ -32,14 +34,8 @@ export const runsDrill = defineDrill(runsContract, {
       max: 8,
       advanced: true,
     },
-    {
-      path: 'handSpan',
-      label: 'Hand span (frets)',
-      kind: 'number',
-      min: 2,
-      max: 8,
-      advanced: true,
-    },
+    { path: 'shifts', label: 'Hand shifts allowed', kind: 'number', min: 0, max: MAX_SHIFTS },
+    { path: 'handSystem', label: 'Hand system', kind: 'select', options: HAND_SYSTEM_OPTIONS },
     switchField('showFingering', 'Show the fingering while playing', true),
     ...LENGTH_FIELDS,
   ],

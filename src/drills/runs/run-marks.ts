@@ -1,7 +1,30 @@
-// Range Runs' board: the chosen fingering (named notes), the notes already played in this pass
-// where they were played, the note to play ringed, and the current pick's marks.
+// Range Runs' board: the chosen fingering (finger numbers, or named notes), the notes already
+// played in this pass where they were played, the note to play ringed, and the current pick's marks.
 import type { CellMark } from '../../components/fretboard/fretboard-types'
-import { toUnicode, type Fingering, type Position } from '../../theory'
+import { toUnicode, type Fingering, type HandMove, type Position } from '../../theory'
+
+/** What a move adds to a finger number on the board: a stretch "↔", a shift "→" (open: "O"). */
+export const MOVE_SIGNS: Readonly<Record<HandMove, string>> = {
+  open: '',
+  hand: '',
+  stretch: '↔',
+  shift: '→',
+}
+
+/** A finger as the board labels it: "1" … "4", "O" for an open string, with the move's sign. */
+export function fingerLabel(finger: number | null | undefined, move: HandMove | null | undefined) {
+  if (finger === null || finger === undefined) return ''
+  return `${finger === 0 ? 'O' : finger}${move ? MOVE_SIGNS[move] : ''}`
+}
+
+/** The fingering's cells labelled with their finger numbers (stretches and shifts marked). */
+export function fingerMarks(fingering: Fingering | null): CellMark[] {
+  return (fingering?.positions ?? []).map((cell, index) => ({
+    ...cell,
+    kind: 'hint',
+    label: fingerLabel(fingering?.fingers?.[index], fingering?.moves?.[index]),
+  }))
+}
 import type { SessionState } from '../engine/session'
 import type { RunsQuestion } from './runs-generator'
 

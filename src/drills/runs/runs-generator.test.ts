@@ -10,7 +10,7 @@ const KEY: RunKey = {
   lowFret: 2,
   highFret: 5,
   maxPerString: 4,
-  handSpan: 4,
+  shifts: 2,
 }
 const RUN = [31, 33, 35, 36, 38, 40, 41, 43, 45, 47, 48]
 
@@ -37,6 +37,57 @@ describe('Range Runs overview', () => {
     expect(() =>
       runOverview(NECK, { ...KEY, scale: 'major pentatonic', lowFret: 1, highFret: 1 }),
     ).toThrow(/no note of the scale/)
+  })
+})
+
+describe('Range Runs in a hand position (issue 13, PRODUCT.md "Range run")', () => {
+  // G major (G A B C D E F#, handbook) in frets 5–8 on E1 A1 D2 G2: the box holds A1 … D3 but not
+  // F#2 (D string fret 4) or B2 (G string fret 4 / D string fret 9) — arithmetic: open string + fret.
+  const G_FIVE: RunKey = { tonic: 'G', scale: 'major', lowFret: 5, highFret: 8, maxPerString: 4 }
+
+  it('plays the complete scale A1 to D3, F#2 and B2 included', () => {
+    const overview = runOverview(NECK, G_FIVE)
+    expect(overview.names).toEqual([
+      'A1',
+      'B1',
+      'C2',
+      'D2',
+      'E2',
+      'F#2',
+      'G2',
+      'A2',
+      'B2',
+      'C3',
+      'D3',
+    ])
+  })
+
+  it('keeps every fingering inside frets 4–9 with the default one shift, fingered from position V', () => {
+    const overview = runOverview(NECK, G_FIVE)
+    const frets = overview.fingerings.flatMap((f) => f.positions.map((cell) => cell.fret))
+    expect(overview.total).toBeGreaterThan(0)
+    expect(Math.min(...frets)).toBeGreaterThanOrEqual(4)
+    expect(Math.max(...frets)).toBeLessThanOrEqual(9)
+    expect(overview.fingerings.every((f) => f.positionName === 'V')).toBe(true) // common practice
+    expect(overview.fingerings[0]?.moves).toContain('stretch')
+  })
+
+  it('without shifts stays in frets 5–8 or finds no fingering; more shifts never offer fewer', () => {
+    const none = runOverview(NECK, { ...G_FIVE, shifts: 0 })
+    const frets = none.fingerings.flatMap((f) => f.positions.map((cell) => cell.fret))
+    expect(frets.every((fret) => fret >= 5 && fret <= 8)).toBe(true)
+    expect(runOverview(NECK, { ...G_FIVE, shifts: 3 }).total).toBeGreaterThanOrEqual(
+      runOverview(NECK, G_FIVE).total,
+    )
+  })
+
+  it('gives each question its finger and move from the fingering', () => {
+    const overview = runOverview(NECK, G_FIVE)
+    const fingering = overview.fingerings[0]!
+    const questions = passQuestions(overview, fingering, G_FIVE, 0)
+    expect(questions.slice(0, 11).map((q) => q.finger)).toEqual(fingering.fingers)
+    expect(questions[0]?.finger).toBe(1) // A1 at fret 5 under the first finger in position V
+    expect(questions.slice(0, 11).map((q) => q.move)).toEqual(fingering.moves)
   })
 })
 

@@ -6,6 +6,7 @@ import {
   rangeRun,
   spellInKey,
   type Fingering,
+  type HandMove,
   type Position,
 } from '../../theory'
 import type { RunsSettings } from '../../contract/drills'
@@ -21,6 +22,10 @@ export interface RunsQuestion extends DrillQuestion {
   cell: Position
   /** The note as the key spells it, with octave ("Eb2"). */
   name: string
+  /** The finger the fingering plays it with (0 = open string), when it has finger numbers. */
+  finger: number | null
+  /** How the hand reaches it: in the hand, a stretch, a shift, an open string. */
+  move: HandMove | null
   direction: 'up' | 'down'
   pattern: string
 }
@@ -30,10 +35,12 @@ export interface RunNeck {
   frets: number
 }
 
+/** The settings a run depends on; the hand system and shifts default to the drill's defaults. */
 export type RunKey = Pick<
   RunsSettings,
-  'tonic' | 'scale' | 'lowFret' | 'highFret' | 'maxPerString' | 'handSpan'
->
+  'tonic' | 'scale' | 'lowFret' | 'highFret' | 'maxPerString'
+> &
+  Partial<Pick<RunsSettings, 'shifts' | 'handSystem'>>
 
 export interface RunOverview {
   run: number[]
@@ -61,12 +68,16 @@ export function runOverview(neck: RunNeck, key: RunKey): RunOverview {
   })
   if (run.length === 0) throw new RangeError('This region holds no note of the scale; widen it.')
   const names = run.map((pitch) => spellInKey(pitch, key.tonic, key.scale))
+  // Inside the hand position widened by the allowed shifts, fingered by the chosen hand system.
   const options = {
     tuning: neck.tuning,
     frets: neck.frets,
     run,
     maxPerString: key.maxPerString,
-    handSpan: key.handSpan,
+    lowFret: Math.min(key.lowFret, highFret),
+    highFret,
+    shifts: key.shifts ?? 1,
+    handSystem: key.handSystem ?? 'one-finger-per-fret',
   }
   const total = countFingerings(options)
   const tooMany = total > MAX_LISTED_FINGERINGS
@@ -117,6 +128,8 @@ export function passQuestions(
       expectedPitch: overview.run[index] ?? 0,
       cell: fingering.positions[index] ?? { string: 0, fret: 0 },
       name: overview.names[index] ?? pitchName(overview.run[index] ?? 0),
+      finger: fingering.fingers?.[index] ?? null,
+      move: fingering.moves?.[index] ?? null,
       direction,
       pattern,
       detail: {

@@ -11,6 +11,8 @@ const D2: RunsQuestion = {
   name: 'D2',
   direction: 'up',
   pattern: '0:2-3-3-3',
+  finger: 4,
+  move: 'hand',
   detail: {},
 }
 

@@ -1,14 +1,15 @@
 // Range Runs on the page: the run of a hand position, its fingerings (least practised offered
 // first), the run shown up and back down, then played note by note.
-import { computed, watch } from 'vue'
+import { computed, ref, watch } from 'vue'
 import type { CellMark } from '../../components/fretboard/fretboard-types'
 import { toUnicode } from '../../theory'
 import { LOCATE_ANSWERS } from '../engine/heard-pitch'
 import type { PickedCell } from '../engine/locate'
+import { keyed } from '../engine/locate'
 import { currentPickMarks } from '../engine/locate-marks'
 import { useDrill } from '../engine/useDrill'
 import { runsDrill } from './definition'
-import { fingeringMarks, trailMarks } from './run-marks'
+import { fingeringMarks, fingerMarks, trailMarks } from './run-marks'
 import { runsGrader } from './runs-grader'
 import { fingeringId, runsQuestions, type RunsQuestion } from './runs-generator'
 import { useRunChoice } from './useRunChoice'
@@ -18,7 +19,7 @@ export const RUN_BPM = 120
 export function useRangeRuns() {
   const drill = useDrill<'runs', RunsQuestion, PickedCell>(runsDrill, {
     ...LOCATE_ANSWERS,
-    grader: ({ neck }) => runsGrader(neck),
+    grader: ({ neck, settings }) => runsGrader(keyed(neck, settings)),
     problem: () => choice.problem.value ?? (choice.chosen.value ? null : 'Choose a fingering.'),
     prepare: ({ settings }) => {
       const view = choice.overview.value.value
@@ -46,20 +47,27 @@ export function useRangeRuns() {
     const run = choice.overview.value.value?.run ?? []
     sound.playSequence([...run, ...run.slice(0, -1).reverse()], RUN_BPM)
   }
+  /** What the fingering's cells show: finger numbers (default) or note names. */
+  const boardLabels = ref<'fingers' | 'notes'>('fingers')
   // During a session, the fingering of the pass being played.
   const shown = computed(() => {
     const question = session.current.value
     const playing = question && choice.order.value.find((f) => fingeringId(f) === question.pattern)
-    return fingeringMarks(playing ?? choice.chosen.value, choice.overview.value.value?.names ?? [])
+    const fingering = playing ?? choice.chosen.value
+    return boardLabels.value === 'fingers'
+      ? fingerMarks(fingering)
+      : fingeringMarks(fingering, choice.overview.value.value?.names ?? [])
   })
   const marks = computed<CellMark[]>(() => {
     const question = session.current.value
     const state = session.state.value
     if (!question || !state) return shown.value
-    const picks = currentPickMarks(session, neck.value, (q) => toUnicode(q.name))
+    const picks = currentPickMarks(session, keyed(neck.value, settings.value), (q) =>
+      toUnicode(q.name),
+    )
     const trail = trailMarks(state, question)
     if (!settings.value.showFingering) return [...trail, ...picks]
     return [...shown.value, ...trail, { ...question.cell, kind: 'target' }, ...picks]
   })
-  return { ...drill, ...choice, runCells, playRun, marks }
+  return { ...drill, ...choice, runCells, playRun, marks, boardLabels }
 }

@@ -2,7 +2,7 @@
 // student may pick another; and why no fingering fits, when none does.
 import { computed, ref, watch, type Ref } from 'vue'
 import type { RunsSettings } from '../../contract/drills'
-import type { Fingering } from '../../theory'
+import { MAX_SHIFTS, type Fingering } from '../../theory'
 import type { DrillNeck } from '../engine/useDrillNeck'
 import { fingeringId, rotation, runOverview, type RunOverview } from './runs-generator'
 import { useFingeringPractice } from './useFingeringPractice'
@@ -21,6 +21,8 @@ function noFingeringProblem(
   if (view.run.length > room) {
     return `The run has ${view.run.length} notes, but ${strings} strings × ${settings.maxPerString} notes per string hold only ${room}: allow more notes per string or narrow the frets.`
   }
+  if (settings.shifts < MAX_SHIFTS)
+    return 'No fingering stays in this hand position: allow another shift or more notes per string.'
   return 'No fingering fits these settings: allow more notes per string or narrow the frets.'
 }
 
@@ -43,8 +45,9 @@ export function useRunChoice(neck: Ref<DrillNeck>, settings: Ref<RunsSettings>) 
   const pickedId = ref<string | null>(null)
   watch(
     () => {
-      const { tonic, scale, lowFret, highFret, maxPerString, handSpan } = settings.value
-      return [neck.value.tuning.join(), tonic, scale, lowFret, highFret, maxPerString, handSpan]
+      const { tonic, scale, lowFret, highFret, maxPerString, shifts, handSystem } = settings.value
+      const region = [lowFret, highFret, maxPerString, shifts, handSystem]
+      return [neck.value.tuning.join(), tonic, scale, ...region]
     },
     () => (pickedId.value = null),
   )

@@ -43,8 +43,16 @@ export const scatterDrill = defineDrill(scatterContract, {
       kind: 'number',
       min: 1,
       max: 48,
-      nullable: true,
       advanced: true,
+    },
+    {
+      path: 'placement',
+      label: 'Octaves',
+      kind: 'select',
+      options: [
+        { title: 'Any octave', value: 'any' },
+        { title: 'Every note in a different octave from the one before', value: 'each-moved' },
+      ],
     },
     ...LENGTH_FIELDS,
   ],

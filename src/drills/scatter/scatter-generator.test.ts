@@ -56,6 +56,29 @@ describe('Octave Scatter questions', () => {
     expect(questions[1]?.name).toMatch(/^C#\d$/) // the chromatic scale going up takes sharps (common practice)
   })
 
+  it('leap at most two octaves by default, also for plans saved without a limit (issue 13)', () => {
+    expect(settings().maxLeap).toBe(24)
+    expect(settings({ maxLeap: null }).maxLeap).toBe(24)
+    for (const seed of [1, 2, 3, 4, 5]) {
+      const pitches = scatterQuestions(NECK, settings(), seed).map((q) => q.expectedPitch)
+      pitches.slice(1).forEach((pitch, i) => {
+        expect(Math.abs(pitch - pitches[i]!)).toBeLessThanOrEqual(24) // arithmetic: semitones
+      })
+    }
+  })
+
+  it('"every note moved": no note is a plain step up from the one before (issue 13)', () => {
+    const steps = [2, 2, 1, 2, 2, 2, 1] // major scale steps in semitones (handbook)
+    for (const seed of [7, 8, 9]) {
+      const pitches = scatterQuestions(NECK, settings({ placement: 'each-moved' }), seed).map(
+        (q) => q.expectedPitch,
+      )
+      pitches.slice(1).forEach((pitch, i) => {
+        expect(pitch - pitches[i]!).not.toBe(steps[i])
+      })
+    }
+  })
+
   it('explain a window that lacks a scale note', () => {
     // E1 (28) to B1 (35) holds no C, D (arithmetic)
     expect(() => scatterQuestions(NECK, settings({ low: 28, high: 35 }), 1)).toThrow(RangeError)

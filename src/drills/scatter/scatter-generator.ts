@@ -43,7 +43,8 @@ export function scatterSequence(
     tonic: settings.tonic,
     scale: settings.scale,
     minDisplaced: settings.minDisplaced,
-    ...(settings.maxLeap === null ? {} : { maxLeap: settings.maxLeap }),
+    maxLeap: settings.maxLeap,
+    placement: settings.placement,
     seed,
   })
 }

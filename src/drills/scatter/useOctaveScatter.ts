@@ -4,7 +4,7 @@ import { computed, ref, watch } from 'vue'
 import type { ScatterSettings } from '../../contract/drills'
 import { instrumentRange, toUnicode, type PitchWindow } from '../../theory'
 import { LOCATE_ANSWERS } from '../engine/heard-pitch'
-import type { PickedCell } from '../engine/locate'
+import { keyed, type PickedCell } from '../engine/locate'
 import { currentPickMarks } from '../engine/locate-marks'
 import { useDrill } from '../engine/useDrill'
 import { scatterDrill } from './definition'
@@ -25,7 +25,7 @@ export function useOctaveScatter() {
   /** A session starts with a new seed, or, given one, replays that session note for note. */
   const drill = useDrill<'scatter', ScatterQuestion, PickedCell, number>(scatterDrill, {
     ...LOCATE_ANSWERS,
-    grader: ({ neck }) => scatterGrader(neck),
+    grader: ({ neck, settings }) => scatterGrader(keyed(neck, settings)),
     prepare: ({ settings, neck }, replaySeed) => {
       const chosen = fitted(settings, instrumentRange(neck.tuning, neck.frets))
       const sessionSeed = replaySeed ?? chosen.seed ?? newSeed()
@@ -54,6 +54,8 @@ export function useOctaveScatter() {
       sequence.value.map((q) => q.expectedPitch),
       SEQUENCE_BPM,
     )
-  const marks = computed(() => currentPickMarks(session, neck.value, (q) => toUnicode(q.name)))
+  const marks = computed(() =>
+    currentPickMarks(session, keyed(neck.value, settings.value), (q) => toUnicode(q.name)),
+  )
   return { ...drill, range, seed, sequence, playSequence, marks }
 }
