@@ -29,6 +29,11 @@ export const LIVE_SQL: readonly LiveObject[] = [
     functions: ['progress_runs_rollup'],
     trigger: { name: 'attempts_runs_rollup', function: 'progress_runs_rollup' },
   },
+  {
+    file: 'progress_chords_rollup.sql',
+    functions: ['progress_chords_rollup'],
+    trigger: { name: 'attempts_chords_rollup', function: 'progress_chords_rollup' },
+  },
 ]
 
 export const liveSqlText = (file: string) => readFileSync(path.join(SQL_DIR, file), 'utf8')

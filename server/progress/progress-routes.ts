@@ -3,8 +3,13 @@ import { Router } from 'express'
 import { requireAuth } from '../auth/auth-middleware'
 import type { AppContext } from '../context'
 import { parse } from '../lib/validate'
-import { FingeringsQuerySchema, ProgressScopeSchema, RangeQuerySchema } from './progress-schema'
-import { fingerings, notes, positions, summary, timeline } from './progress-service'
+import {
+  ChordTonesQuerySchema,
+  FingeringsQuerySchema,
+  ProgressScopeSchema,
+  RangeQuerySchema,
+} from './progress-schema'
+import { chordTones, fingerings, notes, positions, summary, timeline } from './progress-service'
 
 export function progressRoutes(ctx: AppContext): Router {
   const router = Router()
@@ -28,6 +33,10 @@ export function progressRoutes(ctx: AppContext): Router {
 
   router.get('/fingerings', async (req, res) => {
     res.json(await fingerings(ctx, req.user!, parse(FingeringsQuerySchema, req, 'query')))
+  })
+
+  router.get('/chords', async (req, res) => {
+    res.json(await chordTones(ctx, req.user!, parse(ChordTonesQuerySchema, req, 'query')))
   })
 
   return router

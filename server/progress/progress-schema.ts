@@ -66,3 +66,10 @@ export const FingeringsQuerySchema = z
     message: 'The region ends before it starts.',
   })
 export type FingeringsQuery = z.infer<typeof FingeringsQuerySchema>
+
+/** Whose Chord Tones figures, on which instrument (default: every instrument). */
+export const ChordTonesQuerySchema = z.strictObject({
+  student: z.uuid('Not a valid student id.').optional(),
+  instrument: z.uuid('Not a valid instrument id.').optional(),
+})
+export type ChordTonesQuery = z.infer<typeof ChordTonesQuerySchema>

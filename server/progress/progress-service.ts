@@ -18,6 +18,7 @@ import {
 } from './progress-stats'
 import * as repo from './progress-repository'
 import type {
+  ChordTonesAnswer,
   FingeringsAnswer,
   NotesAnswer,
   PositionsAnswer,
@@ -25,7 +26,8 @@ import type {
   SummaryAnswer,
   TimelineAnswer,
 } from '../../src/contract/progress'
-import type { FingeringsQuery, ProgressScope, RangeQuery } from './progress-schema'
+import type { ChordTonesQuery, FingeringsQuery, ProgressScope, RangeQuery } from './progress-schema'
+import { chordToneFigures } from './chord-tone-stats'
 
 const { ALL_DRILLS, ALL_INSTRUMENTS } = repo
 const DEFAULT_TIMELINE_DAYS = 30
@@ -190,4 +192,18 @@ export async function fingerings(
     instrumentId: instrument?.id,
   })
   return { patterns }
+}
+
+/** Chord Tones answers per chord type and degree (every instrument unless one is asked for). */
+export async function chordTones(
+  ctx: AppContext,
+  viewer: PublicUser,
+  q: ChordTonesQuery,
+): Promise<ChordTonesAnswer> {
+  const studentId = await readableStudent(ctx, viewer, q.student)
+  const instrument = q.instrument
+    ? pickInstrument(await instrumentsOf(ctx, studentId), q.instrument, false)
+    : null
+  const rows = await repo.chordToneRows(ctx.db, studentId, instrument?.id)
+  return chordToneFigures(rows, instrument?.id ?? null)
 }

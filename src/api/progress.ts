@@ -1,6 +1,7 @@
 // /api/progress endpoints: a student's statistics (own, or `student` for their teachers).
 import type { DrillId } from '../contract/drills'
 import type {
+  ChordTonesAnswer,
   FingeringsAnswer,
   NotesAnswer,
   PositionsAnswer,
@@ -43,3 +44,7 @@ export interface FingeringsParams {
 /** How often each fingering of a key and region was practised in Range Runs. */
 export const fetchFingerings = (p: FingeringsParams) =>
   http.get<FingeringsAnswer>('/progress/fingerings', { query: { ...p } })
+
+/** Chord Tones answers per chord type and degree (every instrument unless one is given). */
+export const fetchChordTones = (p: { student?: string; instrument?: string }) =>
+  http.get<ChordTonesAnswer>('/progress/chords', { query: { ...p } })
