@@ -177,16 +177,26 @@ export async function timeline(
   return { timeZone, from, to, series }
 }
 
+/** The readable student and the instrument asked for (null: none asked, every instrument). */
+async function studentAndInstrument(
+  ctx: AppContext,
+  viewer: PublicUser,
+  q: { student?: string; instrument?: string },
+) {
+  const studentId = await readableStudent(ctx, viewer, q.student)
+  const instrument = q.instrument
+    ? pickInstrument(await instrumentsOf(ctx, studentId), q.instrument, false)
+    : null
+  return { studentId, instrument }
+}
+
 /** How often each fingering pattern of a key and region was practised in Range Runs. */
 export async function fingerings(
   ctx: AppContext,
   viewer: PublicUser,
   q: FingeringsQuery,
 ): Promise<FingeringsAnswer> {
-  const studentId = await readableStudent(ctx, viewer, q.student)
-  const instrument = q.instrument
-    ? pickInstrument(await instrumentsOf(ctx, studentId), q.instrument, false)
-    : null
+  const { studentId, instrument } = await studentAndInstrument(ctx, viewer, q)
   const patterns = await repo.fingeringRows(ctx.db, studentId, {
     ...q,
     instrumentId: instrument?.id,
@@ -200,10 +210,7 @@ export async function chordTones(
   viewer: PublicUser,
   q: ChordTonesQuery,
 ): Promise<ChordTonesAnswer> {
-  const studentId = await readableStudent(ctx, viewer, q.student)
-  const instrument = q.instrument
-    ? pickInstrument(await instrumentsOf(ctx, studentId), q.instrument, false)
-    : null
+  const { studentId, instrument } = await studentAndInstrument(ctx, viewer, q)
   const rows = await repo.chordToneRows(ctx.db, studentId, instrument?.id)
   return chordToneFigures(rows, instrument?.id ?? null)
 }
