@@ -1,7 +1,18 @@
 // Chord Tones' contract: the chord tones of each chord of a progression (ii–V–I or 12-bar blues
 // around a cycle, or an own list of chord symbols), in a fret position or inside a pitch window.
 import { z } from 'zod'
-import { customProgression, cycleTonics, pitchName, toUnicode } from '../../theory'
+import {
+  chordOfSize,
+  customProgression,
+  cycleTonics,
+  invertChord,
+  pitchName,
+  toUnicode,
+  twelveBarBlues,
+  twoFiveOne,
+  type ChordInfo,
+  type KeyRef,
+} from '../../theory'
 import { defineDrillContract, type SettingsIssue } from './drill-contract'
 import { DetailText, Fret, Length, Pitch, Tonic } from './fields'
 
@@ -58,6 +69,56 @@ export function progressionKeys(settings: KeyChoice): string[] {
   if (settings.progression === 'custom') return []
   const scale = settings.quality === 'major' ? 'major' : 'minor'
   return cycleTonics(settings.cycle, { start: settings.startKey, scale })
+}
+
+/** One chord of the progression as played, with the key it belongs to (null for an own list). */
+export interface PlayedChord {
+  chord: ChordInfo
+  key: KeyRef | null
+}
+
+type ProgressionChoice = KeyChoice & Pick<ChordsSettings, 'customChords'>
+
+/** The chords of the whole progression as written (ii–V–I or blues in every key of the cycle). */
+export function progressionChords(settings: ProgressionChoice): PlayedChord[] {
+  if (settings.progression === 'custom')
+    return customProgression(settings.customChords).map((chord) => ({ chord, key: null }))
+  const { quality } = settings
+  const scale = quality === 'major' ? 'major' : 'minor'
+  return progressionKeys(settings).flatMap((tonic) => {
+    const chords =
+      settings.progression === 'blues'
+        ? twelveBarBlues(tonic, { quality })
+        : twoFiveOne(tonic, quality)
+    return chords.map((chord) => ({ chord, key: { tonic, scale } }))
+  })
+}
+
+const INVERSION_INDEX = { root: 0, first: 1, second: 2, third: 3 } as const
+
+/**
+ * The chord with the inversion asked for (`index`: its place in the progression, for 'rotate');
+ * 'root' keeps a slash chord as written; a triad has no third inversion and stays in root position.
+ */
+export function invertAsAsked(
+  chord: ChordInfo,
+  inversion: ChordsSettings['inversion'],
+  index: number,
+): ChordInfo {
+  if (inversion === 'root') return chord
+  const size = chord.tones.length
+  const wanted = inversion === 'rotate' ? index % size : INVERSION_INDEX[inversion]
+  return invertChord(chord, wanted < size ? wanted : 0)
+}
+
+/** The progression's chords as the settings play them: in their size and inversion. */
+export function playedChords(
+  settings: ProgressionChoice & Pick<ChordsSettings, 'size' | 'inversion'>,
+): PlayedChord[] {
+  return progressionChords(settings).map((played, index) => ({
+    ...played,
+    chord: invertAsAsked(chordOfSize(played.chord, settings.size), settings.inversion, index),
+  }))
 }
 
 function keysOf(settings: KeyChoice): string[] {
