@@ -185,6 +185,59 @@ export const RunsQuerySchema = z
   })
 export type RunsQuery = z.infer<typeof RunsQuerySchema>
 
+export const ChordsQuerySchema = z
+  .object({
+    ...Instrument,
+    progression: z
+      .enum(['two-five-one', 'blues', 'custom'], {
+        error: 'Choose two-five-one, blues or custom.',
+      })
+      .default('two-five-one'),
+    quality: z.enum(['major', 'minor'], { error: 'Choose major or minor.' }).default('major'),
+    cycle: z.enum(['fourths', 'fifths'], { error: 'Choose fourths or fifths.' }).default('fourths'),
+    start: Tonic.default('C'),
+    /** The own list: chord symbols separated by spaces, commas or bar lines. */
+    chords: z.string().max(200, 'Use at most 200 characters.').default(''),
+    size: z
+      .enum(['triad', 'sixth', 'seventh'], { error: 'Choose triad, sixth or seventh.' })
+      .default('seventh'),
+    inversion: z
+      .enum(['root', 'first', 'second', 'third', 'rotate'], {
+        error: 'Choose root, first, second, third or rotate.',
+      })
+      .default('root'),
+    lowFret: whole(0, 30).default(2),
+    highFret: whole(0, 30).default(6),
+    /** How many chords of the progression the sheet lists, from its first. */
+    count: whole(1, 48).default(12),
+    answers: Flag,
+  })
+  .superRefine((query, ctx) => {
+    fretsReachable(query, ctx)
+    if (query.highFret < query.lowFret) {
+      ctx.addIssue({
+        code: 'custom',
+        path: ['highFret'],
+        message: 'The position ends before it starts.',
+      })
+    }
+    if (query.highFret > query.frets) {
+      ctx.addIssue({
+        code: 'custom',
+        path: ['highFret'],
+        message: 'The position goes past the last fret.',
+      })
+    }
+    if (query.progression === 'custom' && !query.chords.trim()) {
+      ctx.addIssue({
+        code: 'custom',
+        path: ['chords'],
+        message: 'List the chords, e.g. Am7 D7 Gmaj7.',
+      })
+    }
+  })
+export type ChordsQuery = z.infer<typeof ChordsQuerySchema>
+
 /** Every worksheet kind and the query it takes (the client builds its links from these). */
-export const WORKSHEET_KINDS = ['neck', 'cycle', 'scatter', 'runs'] as const
+export const WORKSHEET_KINDS = ['neck', 'cycle', 'scatter', 'runs', 'chords'] as const
 export type WorksheetKind = (typeof WORKSHEET_KINDS)[number]
