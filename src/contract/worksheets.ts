@@ -110,6 +110,17 @@ function fretsReachable(query: { tuning: number[]; frets: number }, ctx: z.Refin
   }
 }
 
+// A fret region (Range Runs) or position (Chord Tones) must start before it ends, on the neck.
+function regionChecks(
+  query: { lowFret: number; highFret: number; frets: number },
+  ctx: z.RefinementCtx,
+  word: 'region' | 'position',
+) {
+  const issue = (message: string) => ctx.addIssue({ code: 'custom', path: ['highFret'], message })
+  if (query.highFret < query.lowFret) issue(`The ${word} ends before it starts.`)
+  if (query.highFret > query.frets) issue(`The ${word} goes past the last fret.`)
+}
+
 export const CycleQuerySchema = z
   .object({
     ...Instrument,
@@ -168,20 +179,7 @@ export const RunsQuerySchema = z
   })
   .superRefine((query, ctx) => {
     fretsReachable(query, ctx)
-    if (query.highFret < query.lowFret) {
-      ctx.addIssue({
-        code: 'custom',
-        path: ['highFret'],
-        message: 'The region ends before it starts.',
-      })
-    }
-    if (query.highFret > query.frets) {
-      ctx.addIssue({
-        code: 'custom',
-        path: ['highFret'],
-        message: 'The region goes past the last fret.',
-      })
-    }
+    regionChecks(query, ctx, 'region')
   })
 export type RunsQuery = z.infer<typeof RunsQuerySchema>
 
@@ -214,20 +212,7 @@ export const ChordsQuerySchema = z
   })
   .superRefine((query, ctx) => {
     fretsReachable(query, ctx)
-    if (query.highFret < query.lowFret) {
-      ctx.addIssue({
-        code: 'custom',
-        path: ['highFret'],
-        message: 'The position ends before it starts.',
-      })
-    }
-    if (query.highFret > query.frets) {
-      ctx.addIssue({
-        code: 'custom',
-        path: ['highFret'],
-        message: 'The position goes past the last fret.',
-      })
-    }
+    regionChecks(query, ctx, 'position')
     if (query.progression === 'custom' && !query.chords.trim()) {
       ctx.addIssue({
         code: 'custom',
