@@ -33,8 +33,9 @@ export const ChordsSettingsSchema = Length.extend({
   inversion: z.enum(CHORD_INVERSIONS).default('root'),
   /** Where the chord tones are played: a hand position (frets) or a low/high pitch window. */
   area: z.enum(['position', 'window']).default('position'),
-  lowFret: Fret.default(5),
-  highFret: Fret.default(8),
+  /** Five frets: on a neck in fourths they hold every pitch class, so every key has its root. */
+  lowFret: Fret.default(2),
+  highFret: Fret.default(6),
   low: Pitch.default(28),
   high: Pitch.default(43),
 })
@@ -147,6 +148,14 @@ const PROGRESSION_WORDS: Record<ChordsSettings['progression'], string> = {
   custom: 'own chords',
 }
 
+const INVERSION_WORDS: Record<ChordsSettings['inversion'], string> = {
+  root: '',
+  first: '1st inversion',
+  second: '2nd inversion',
+  third: '3rd inversion',
+  rotate: 'inversions in turn',
+}
+
 function describe(s: ChordsSettings): string {
   const what =
     s.progression === 'custom'
@@ -156,11 +165,8 @@ function describe(s: ChordsSettings): string {
     s.area === 'position'
       ? `frets ${s.lowFret}–${s.highFret}`
       : `window ${pitchName(s.low, 'flat')}–${pitchName(s.high, 'flat')}`
-  const inversion =
-    s.inversion === 'root'
-      ? ''
-      : `, ${s.inversion} inversion`.replace('rotate inversion', 'inversions in turn')
-  return `${what}, ${s.size === 'seventh' ? 'as written' : `${s.size}s`}${inversion}, ${where}`
+  const size = s.size === 'seventh' ? 'as written' : `${s.size}s`
+  return [what, size, INVERSION_WORDS[s.inversion], where].filter(Boolean).join(', ')
 }
 
 export const chordsContract = defineDrillContract({
