@@ -33,6 +33,7 @@ export const LIVE_SQL: readonly LiveObject[] = [
     functions: ['rollup_enqueue'],
     trigger: { name: 'attempts_enqueue_rollup', catchUp: QUEUE_STORED_ATTEMPTS },
   },
+  { file: 'progress_chords_rollup.sql', functions: ['progress_chords_rollup'] },
 ]
 
 export const liveSqlText = (file: string) => readFileSync(path.join(SQL_DIR, file), 'utf8')

@@ -180,3 +180,33 @@ export async function fingeringRows(db: Db, userId: string, f: FingeringFilter) 
     lastPractisedAt: r.last_at.toISOString(),
   }))
 }
+
+export interface ChordToneRow {
+  chordType: string
+  degree: string
+  attempts: number
+  correct: number
+  lastAt: Date
+  recentMs: number[]
+}
+
+/** Chord Tones rollup rows of a player (one instrument, or every instrument when none is given). */
+export async function chordToneRows(
+  db: Db,
+  userId: string,
+  instrumentId?: string,
+): Promise<ChordToneRow[]> {
+  const q = db('progress_chords').where('user_id', userId)
+  if (instrumentId) q.where('instrument_key', instrumentId)
+  const rows = await q
+    .orderBy(['chord_type', 'degree'])
+    .select('chord_type', 'degree', 'attempts', 'correct', 'last_at', 'recent_ms')
+  return rows.map((r) => ({
+    chordType: r.chord_type,
+    degree: r.degree,
+    attempts: r.attempts,
+    correct: r.correct,
+    lastAt: r.last_at,
+    recentMs: r.recent_ms.map(Number),
+  }))
+}

@@ -4,12 +4,21 @@ import { requireAuth } from '../auth/auth-middleware'
 import type { AppContext } from '../context'
 import { parse } from '../lib/validate'
 import {
+  ChordTonesQuerySchema,
   CyclePositionQuerySchema,
   FingeringsQuerySchema,
   ProgressScopeSchema,
   RangeQuerySchema,
 } from './progress-schema'
-import { cyclePosition, fingerings, notes, positions, summary, timeline } from './progress-service'
+import {
+  chordTones,
+  cyclePosition,
+  fingerings,
+  notes,
+  positions,
+  summary,
+  timeline,
+} from './progress-service'
 
 export function progressRoutes(ctx: AppContext): Router {
   const router = Router()
@@ -37,6 +46,10 @@ export function progressRoutes(ctx: AppContext): Router {
 
   router.get('/cycle-position', async (req, res) => {
     res.json(await cyclePosition(ctx, req.user!, parse(CyclePositionQuerySchema, req, 'query')))
+  })
+
+  router.get('/chords', async (req, res) => {
+    res.json(await chordTones(ctx, req.user!, parse(ChordTonesQuerySchema, req, 'query')))
   })
 
   return router

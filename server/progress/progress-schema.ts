@@ -78,3 +78,9 @@ export const CyclePositionQuerySchema = z.strictObject({
   planItem: z.uuid('Not a valid plan item id.').optional(),
 })
 export type CyclePositionQuery = z.infer<typeof CyclePositionQuerySchema>
+/** Whose Chord Tones figures, on which instrument (default: every instrument). */
+export const ChordTonesQuerySchema = z.strictObject({
+  student: z.uuid('Not a valid student id.').optional(),
+  instrument: z.uuid('Not a valid instrument id.').optional(),
+})
+export type ChordTonesQuery = z.infer<typeof ChordTonesQuerySchema>

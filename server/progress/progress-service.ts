@@ -20,6 +20,7 @@ import * as repo from './progress-repository'
 import { lastCycleStop } from './cycle-stop-repository'
 import type { CyclePositionAnswer } from '../../src/contract/drills'
 import type {
+  ChordTonesAnswer,
   FingeringsAnswer,
   NotesAnswer,
   PositionsAnswer,
@@ -28,11 +29,13 @@ import type {
   TimelineAnswer,
 } from '../../src/contract/progress'
 import type {
+  ChordTonesQuery,
   CyclePositionQuery,
   FingeringsQuery,
   ProgressScope,
   RangeQuery,
 } from './progress-schema'
+import { chordToneFigures } from './chord-tone-stats'
 
 const { ALL_DRILLS, ALL_INSTRUMENTS } = repo
 const DEFAULT_TIMELINE_DAYS = 30
@@ -192,16 +195,26 @@ export async function timeline(
   return { timeZone, from, to, series }
 }
 
+/** The readable student and the instrument asked for (null: none asked, every instrument). */
+async function studentAndInstrument(
+  ctx: AppContext,
+  viewer: PublicUser,
+  q: { student?: string; instrument?: string },
+) {
+  const studentId = await readableStudent(ctx, viewer, q.student)
+  const instrument = q.instrument
+    ? pickInstrument(await instrumentsOf(ctx, studentId), q.instrument, false)
+    : null
+  return { studentId, instrument }
+}
+
 /** How often each fingering pattern of a key and region was practised in Range Runs. */
 export async function fingerings(
   ctx: AppContext,
   viewer: PublicUser,
   q: FingeringsQuery,
 ): Promise<FingeringsAnswer> {
-  const studentId = await readableStudent(ctx, viewer, q.student)
-  const instrument = q.instrument
-    ? pickInstrument(await instrumentsOf(ctx, studentId), q.instrument, false)
-    : null
+  const { studentId, instrument } = await studentAndInstrument(ctx, viewer, q)
   const patterns = await repo.fingeringRows(ctx.db, studentId, {
     ...q,
     instrumentId: instrument?.id,
@@ -221,4 +234,15 @@ export async function cyclePosition(
     planItemId: q.planItem ?? null,
   })
   return { stop: row && { ...row, at: row.at.toISOString() } }
+}
+
+/** Chord Tones answers per chord type and degree (every instrument unless one is asked for). */
+export async function chordTones(
+  ctx: AppContext,
+  viewer: PublicUser,
+  q: ChordTonesQuery,
+): Promise<ChordTonesAnswer> {
+  const { studentId, instrument } = await studentAndInstrument(ctx, viewer, q)
+  const rows = await repo.chordToneRows(ctx.db, studentId, instrument?.id)
+  return chordToneFigures(rows, instrument?.id ?? null)
 }

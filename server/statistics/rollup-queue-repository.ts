@@ -29,12 +29,13 @@ export async function takeQueued(
   return rows
 }
 
-/** Folds these attempts into every statistics rollup (db/sql/progress_rollup.sql and the runs). */
+/** Folds these attempts into every statistics rollup (db/sql: progress, runs and chord tones). */
 export async function rollUp(trx: Knex.Transaction, attemptIds: string[]) {
-  await trx.raw('select progress_rollup(?::uuid[]), progress_runs_rollup(?::uuid[])', [
-    attemptIds,
-    attemptIds,
-  ])
+  await trx.raw(
+    `select progress_rollup(:ids::uuid[]), progress_runs_rollup(:ids::uuid[]),
+      progress_chords_rollup(:ids::uuid[])`,
+    { ids: attemptIds },
+  )
 }
 
 export interface PlacedAnswer {

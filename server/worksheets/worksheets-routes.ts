@@ -1,15 +1,17 @@
-// /api/worksheets: printable PDFs for signed-in players and teachers (neck, cycle, scatter, runs).
+// /api/worksheets: printable PDFs for signed-in players and teachers (neck, cycle, scatter, runs, chords).
 import { Router, type Response } from 'express'
 import { requireAuth } from '../auth/auth-middleware'
 import type { AppContext } from '../context'
 import { parse } from '../lib/validate'
 import {
+  ChordsQuerySchema,
   CycleQuerySchema,
   NeckQuerySchema,
   RunsQuerySchema,
   ScatterQuerySchema,
 } from '../../src/contract/worksheets'
 import {
+  chordsWorksheet,
   cycleWorksheet,
   neckWorksheet,
   runsWorksheet,
@@ -43,6 +45,10 @@ export function worksheetRoutes(ctx: AppContext): Router {
 
   router.get('/runs.pdf', async (req, res) => {
     sendPdf(res, await runsWorksheet(parse(RunsQuerySchema, req, 'query')))
+  })
+
+  router.get('/chords.pdf', async (req, res) => {
+    sendPdf(res, await chordsWorksheet(parse(ChordsQuerySchema, req, 'query')))
   })
   return router
 }

@@ -1,5 +1,7 @@
 // Worksheet use cases: read the theory core for what a sheet shows, then lay it out as a PDF.
 import {
+  chordArpeggioInRegion,
+  chordTonesInRegion,
   countFingerings,
   customCycle,
   cycleTonics,
@@ -10,14 +12,24 @@ import {
   pitchName,
   rangeRun,
   spellInKey,
+  stringNames,
+  toUnicode,
   windowFromFrets,
   type CycleId,
 } from '../../src/theory'
+import { playedChords, type PlayedChord } from '../../src/contract/drills'
+import { chordsSheet, degreeGlyphs, type ChordRow } from './sheets/chords-sheet'
 import { cycleSheet } from './sheets/cycle-sheet'
 import { neckSheet } from './sheets/neck-sheet'
 import { runsSheet } from './sheets/runs-sheet'
 import { scatterSheet } from './sheets/scatter-sheet'
-import type { CycleQuery, NeckQuery, RunsQuery, ScatterQuery } from '../../src/contract/worksheets'
+import type {
+  ChordsQuery,
+  CycleQuery,
+  NeckQuery,
+  RunsQuery,
+  ScatterQuery,
+} from '../../src/contract/worksheets'
 
 /** A finished worksheet: the PDF and the name it is saved under. */
 export interface Worksheet {
@@ -115,4 +127,51 @@ export async function runsWorksheet(query: RunsQuery): Promise<Worksheet> {
   })
   const region = `frets-${query.lowFret}-${query.highFret}`
   return { fileName: `${slug('range-run', query.tonic, query.scale, region)}.pdf`, pdf }
+}
+
+// One chord's row: its tones, its arpeggio in the position and the string and fret of each note.
+function chordRow({ chord }: PlayedChord, query: ChordsQuery): ChordRow {
+  const region = { tuning: query.tuning, lowFret: query.lowFret, highFret: query.highFret }
+  const arpeggio = chordArpeggioInRegion(chord, region)
+  const cells = chordTonesInRegion(chord, region)
+  const names = stringNames(query.tuning)
+  const places = arpeggio.map((tone) => {
+    const cell = cells.find((c) => c.pitch === tone.pitch)
+    return cell ? `${names[cell.string] ?? ''} ${cell.fret}` : ''
+  })
+  const tones = chord.tones.map((tone) => `${tone.name} (${degreeGlyphs(tone.degree)})`).join(' ')
+  return { symbol: chord.symbol, tones, arpeggio, places }
+}
+
+const PROGRESSION_TITLES = { 'two-five-one': 'ii–V–I', blues: '12-bar blues', custom: 'own chords' }
+// A minor ii–V–i resolves to a minor chord: lower-case i, as harmony texts write it.
+const progressionTitle = (q: ChordsQuery) =>
+  q.quality === 'minor' && q.progression === 'two-five-one'
+    ? 'ii–V–i'
+    : PROGRESSION_TITLES[q.progression]
+
+export async function chordsWorksheet(query: ChordsQuery): Promise<Worksheet> {
+  const played = playedChords({ ...query, startKey: query.start, customChords: query.chords })
+  const rows = played.slice(0, query.count).map((chord) => chordRow(chord, query))
+  const what =
+    query.progression === 'custom'
+      ? PROGRESSION_TITLES.custom
+      : `${query.quality} ${progressionTitle(query)} from ${toUnicode(query.start)}`
+  const tuning = query.tuning.map((pitch) => pitchName(pitch)).join(' ')
+  const pdf = await chordsSheet({
+    rows,
+    title: query.title ?? `Chord Tones: ${what}`,
+    subtitle: `Frets ${query.lowFret}–${query.highFret} · tuning ${tuning} · ${rows.length} chords`,
+    answers: query.answers,
+    paper: query.paper,
+  })
+  const name = slug(
+    'chord-tones',
+    query.progression,
+    query.start,
+    'frets',
+    query.lowFret,
+    query.highFret,
+  )
+  return { fileName: `${name}.pdf`, pdf }
 }

@@ -1,6 +1,7 @@
 // /api/progress endpoints: a student's statistics (own, or `student` for their teachers).
 import type { CyclePositionAnswer, DrillId } from '../contract/drills'
 import type {
+  ChordTonesAnswer,
   FingeringsAnswer,
   NotesAnswer,
   PositionsAnswer,
@@ -47,3 +48,6 @@ export const fetchFingerings = (p: FingeringsParams) =>
 /** Where the last Window Cycle session of a scale (of a plan item) stopped. */
 export const fetchCyclePosition = (p: { scale: string; planItem?: string }) =>
   http.get<CyclePositionAnswer>('/progress/cycle-position', { query: { ...p } })
+/** Chord Tones answers per chord type and degree (every instrument unless one is given). */
+export const fetchChordTones = (p: { student?: string; instrument?: string }) =>
+  http.get<ChordTonesAnswer>('/progress/chords', { query: { ...p } })

@@ -1,6 +1,7 @@
-// /api/worksheets endpoints: printable PDFs (neck, cycle, scatter, runs) as Blobs.
+// /api/worksheets endpoints: printable PDFs (neck, cycle, scatter, runs, chords) as Blobs.
 import type { z } from 'zod'
 import type {
+  ChordsQuerySchema,
   CycleQuerySchema,
   NeckQuerySchema,
   RunsQuerySchema,
@@ -17,12 +18,16 @@ export interface WorksheetParams {
   cycle: z.input<typeof CycleQuerySchema>
   scatter: z.input<typeof ScatterQuerySchema>
   runs: z.input<typeof RunsQuerySchema>
+  chords: z.input<typeof ChordsQuerySchema>
 }
 
 type Query = Record<string, string | number | boolean | undefined>
 
 /** The address of a sheet (for links that open it directly). */
-export function worksheetPath<K extends WorksheetKind>(kind: K, params: WorksheetParams[K]): string {
+export function worksheetPath<K extends WorksheetKind>(
+  kind: K,
+  params: WorksheetParams[K],
+): string {
   const query = new URLSearchParams()
   for (const [name, value] of Object.entries(params as Query)) {
     if (value !== undefined && value !== '') query.set(name, String(value))

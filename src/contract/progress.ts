@@ -104,3 +104,21 @@ export interface SummaryAnswer {
 export interface FingeringsAnswer {
   patterns: { pattern: string; sessions: number; attempts: number; lastPractisedAt: string }[]
 }
+
+/** Chord Tones figures of one chord type, one degree, or one chord type × degree. */
+export interface ChordToneFigures {
+  attempts: number
+  correct: number
+  accuracy: number | null
+  /** Median of the latest right answers' response times (ms; up to 50 per type × degree). */
+  medianMs: number | null
+  lastSeenAt: string | null
+}
+
+/** GET /api/progress/chords: Chord Tones answers per chord type, per degree and per both. */
+export interface ChordTonesAnswer {
+  instrumentId: string | null
+  chordTypes: (ChordToneFigures & { chordType: string })[]
+  degrees: (ChordToneFigures & { degree: string })[]
+  cells: (ChordToneFigures & { chordType: string; degree: string })[]
+}

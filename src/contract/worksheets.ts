@@ -110,6 +110,17 @@ function fretsReachable(query: { tuning: number[]; frets: number }, ctx: z.Refin
   }
 }
 
+// A fret region (Range Runs) or position (Chord Tones) must start before it ends, on the neck.
+function regionChecks(
+  query: { lowFret: number; highFret: number; frets: number },
+  ctx: z.RefinementCtx,
+  word: 'region' | 'position',
+) {
+  const issue = (message: string) => ctx.addIssue({ code: 'custom', path: ['highFret'], message })
+  if (query.highFret < query.lowFret) issue(`The ${word} ends before it starts.`)
+  if (query.highFret > query.frets) issue(`The ${word} goes past the last fret.`)
+}
+
 export const CycleQuerySchema = z
   .object({
     ...Instrument,
@@ -168,23 +179,50 @@ export const RunsQuerySchema = z
   })
   .superRefine((query, ctx) => {
     fretsReachable(query, ctx)
-    if (query.highFret < query.lowFret) {
-      ctx.addIssue({
-        code: 'custom',
-        path: ['highFret'],
-        message: 'The region ends before it starts.',
-      })
-    }
-    if (query.highFret > query.frets) {
-      ctx.addIssue({
-        code: 'custom',
-        path: ['highFret'],
-        message: 'The region goes past the last fret.',
-      })
-    }
+    regionChecks(query, ctx, 'region')
   })
 export type RunsQuery = z.infer<typeof RunsQuerySchema>
 
+export const ChordsQuerySchema = z
+  .object({
+    ...Instrument,
+    progression: z
+      .enum(['two-five-one', 'blues', 'custom'], {
+        error: 'Choose two-five-one, blues or custom.',
+      })
+      .default('two-five-one'),
+    quality: z.enum(['major', 'minor'], { error: 'Choose major or minor.' }).default('major'),
+    cycle: z.enum(['fourths', 'fifths'], { error: 'Choose fourths or fifths.' }).default('fourths'),
+    start: Tonic.default('C'),
+    /** The own list: chord symbols separated by spaces, commas or bar lines. */
+    chords: z.string().max(200, 'Use at most 200 characters.').default(''),
+    size: z
+      .enum(['triad', 'sixth', 'seventh'], { error: 'Choose triad, sixth or seventh.' })
+      .default('seventh'),
+    inversion: z
+      .enum(['root', 'first', 'second', 'third', 'rotate'], {
+        error: 'Choose root, first, second, third or rotate.',
+      })
+      .default('root'),
+    lowFret: whole(0, 30).default(2),
+    highFret: whole(0, 30).default(6),
+    /** How many chords of the progression the sheet lists, from its first. */
+    count: whole(1, 48).default(12),
+    answers: Flag,
+  })
+  .superRefine((query, ctx) => {
+    fretsReachable(query, ctx)
+    regionChecks(query, ctx, 'position')
+    if (query.progression === 'custom' && !query.chords.trim()) {
+      ctx.addIssue({
+        code: 'custom',
+        path: ['chords'],
+        message: 'List the chords, e.g. Am7 D7 Gmaj7.',
+      })
+    }
+  })
+export type ChordsQuery = z.infer<typeof ChordsQuerySchema>
+
 /** Every worksheet kind and the query it takes (the client builds its links from these). */
-export const WORKSHEET_KINDS = ['neck', 'cycle', 'scatter', 'runs'] as const
+export const WORKSHEET_KINDS = ['neck', 'cycle', 'scatter', 'runs', 'chords'] as const
 export type WorksheetKind = (typeof WORKSHEET_KINDS)[number]

@@ -2,6 +2,7 @@
 // drill), for a right answer, a wrong one and "show me". Answers are computed from the theory core.
 import { describe, expect, it } from 'vitest'
 import {
+  ChordsSettingsSchema,
   CycleSettingsSchema,
   drillContract,
   HuntSettingsSchema,
@@ -12,6 +13,8 @@ import {
 } from '../contract/drills'
 import { noteAt, positionsOf } from '../theory'
 import { cycleOptions, cycleSession } from './cycle/cycle-generator'
+import { chordsSession } from './chords/chords-generator'
+import { chordsGrader } from './chords/chords-grader'
 import { cycleGrader } from './cycle/cycle-grader'
 import { toAttempt } from './engine/to-attempt'
 import type { PickedCell } from './engine/locate'
@@ -105,6 +108,14 @@ const CASES: [DrillId, () => Record<string, unknown>[]][] = [
       const settings = CycleSettingsSchema.parse({ low: 28, high: 47 })
       const [q] = cycleSession(cycleOptions(settings), null, null).questions
       return detailsOf('cycle', q!, cycleGrader(NECK), locate(q!))
+    },
+  ],
+  [
+    'chords',
+    () => {
+      const settings = ChordsSettingsSchema.parse({ inversion: 'first' })
+      const [q] = chordsSession(settings, NECK.tuning).questions
+      return detailsOf('chords', q!, chordsGrader(NECK), locate(q!))
     },
   ],
 ]

@@ -3,6 +3,7 @@
 // definition.ts), its contract in src/contract/drills/, and one line here.
 import { DRILL_IDS, type DrillId } from '../contract/drills'
 import type { DrillDefinition } from './drill-definition'
+import { chordsDrill } from './chords/definition'
 import { cycleDrill } from './cycle/definition'
 import { huntDrill } from './hunt/definition'
 import { recallDrill } from './recall/definition'
@@ -15,6 +16,7 @@ export const DRILLS: { readonly [D in DrillId]: DrillDefinition<D> } = {
   runs: runsDrill,
   scatter: scatterDrill,
   cycle: cycleDrill,
+  chords: chordsDrill,
 }
 
 /** The drills in the order the practice page shows them. */

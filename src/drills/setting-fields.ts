@@ -1,6 +1,7 @@
 // How a drill setting is edited in the plan editor: the kinds of field, and the fields every drill
 // shares (frets, the session length). Each drill lists its own in its definition.
-export type FieldKind = 'number' | 'switch' | 'select' | 'tonic' | 'scale' | 'pitch' | 'tonics'
+export type FieldKind =
+  'number' | 'switch' | 'select' | 'tonic' | 'scale' | 'pitch' | 'tonics' | 'text'
 
 export interface FieldSpec {
   /** Dotted path inside the settings ("region.lowFret"). */

@@ -9,7 +9,7 @@ import { activeInstrument, answerAll, choose, STUDENT, studentOn } from '../help
 const e2e = useDrillE2e()
 
 describe('practice page', () => {
-  it('lists the five drills, each with why it helps, on a laptop and a phone', async () => {
+  it('lists the six drills, each with why it helps, on a laptop and a phone', async () => {
     for (const [viewport, name] of [
       [LAPTOP, 'laptop'],
       [PHONE, 'phone'],
@@ -17,7 +17,7 @@ describe('practice page', () => {
       const { page, context } = await newPage(e2e.browser, viewport)
       await signInThroughUi(page, STUDENT)
       await page.waitForURL('**/practice')
-      for (const drill of ['recall', 'hunt', 'runs', 'scatter', 'cycle']) {
+      for (const drill of ['recall', 'hunt', 'runs', 'scatter', 'cycle', 'chords']) {
         await expect.poll(() => page.getByTestId(`drill-card-${drill}`).isVisible()).toBe(true)
       }
       expect(await page.getByTestId('drill-card-hunt').textContent()).toContain('Hear a pitch')

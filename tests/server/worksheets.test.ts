@@ -199,6 +199,39 @@ describe('the other sheets', () => {
     expect(key.body.error.fields['query.tonic']![0]).toMatch(/"H" is not a key tonic/)
     const region = await agent.get('/api/worksheets/runs.pdf?lowFret=7&highFret=3')
     expect(region.status).toBe(400)
-    expect(region.body.error.fields['query.highFret']).toEqual(['The region ends before it starts.'])
+    expect(region.body.error.fields['query.highFret']).toEqual([
+      'The region ends before it starts.',
+    ])
+  })
+
+  it('when a Chord Tones answer key is asked for, then each arpeggio in the position is printed with its places', async () => {
+    const { res, pages } = await pdf(
+      '/api/worksheets/chords.pdf?tuning=E1,A1,D2,G2&frets=20&lowFret=2&highFret=6&count=3&answers=1',
+    )
+    const text = pages[0]!.text
+    expect(text).toContain('Chord Tones: major ii–V–I from C')
+    expect(text).toContain('Answer key')
+    // Dm7 = D F A C, degrees 1 b3 5 b7 (OMT v2 "Seventh Chords"); in frets 2–6 from D2 up:
+    // D2 = A string fret 5, F2 = D string fret 3, A2 = G string fret 2, C3 = G string fret 5
+    // (open string + fret, arithmetic: 33 + 5, 38 + 3, 43 + 2, 43 + 5)
+    expect(text).toContain('D (1) F (♭3) A (5) C (♭7)')
+    expect(text).toMatch(/D2 F2 A2 C3/)
+    expect(text).toMatch(/A 5 D 3 G 2 G 5/)
+    // G7 from G1 (E string fret 3): G1 B1 D2 F2 G2 B2
+    expect(text).toMatch(/G1 B1 D2 F2 G2 B2/)
+    expect(res.headers['content-disposition']).toContain('chord-tones-two-five-one-C-frets-2-6.pdf')
+  })
+
+  it('when the chord list does not parse or the position holds no bass note, then 400', async () => {
+    const bad = await agent.get('/api/worksheets/chords.pdf?progression=custom&chords=Am7,Gxx9')
+    expect(bad.status).toBe(400)
+    expect(bad.body.error.message).toMatch(
+      /Chord 2 of the progression: "Gxx9" is not a chord symbol/,
+    )
+    const empty = await agent.get('/api/worksheets/chords.pdf?progression=custom')
+    expect(empty.body.error.fields['query.chords']).toEqual(['List the chords, e.g. Am7 D7 Gmaj7.'])
+    const narrow = await agent.get('/api/worksheets/chords.pdf?lowFret=0&highFret=1&frets=20')
+    expect(narrow.status).toBe(400)
+    expect(narrow.body.error.message).toMatch(/Frets 0–1 hold no/)
   })
 })

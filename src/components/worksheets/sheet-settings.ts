@@ -32,6 +32,11 @@ export interface SheetSettings {
   seed: number
   lowFret: number
   highFret: number
+  /** Chord Tones sheets: the progression, from `tonic` round the cycle of fourths, and a
+   * five-fret position (it holds every pitch class on a neck in fourths, so every key has a root). */
+  progression: 'two-five-one' | 'blues'
+  chordLowFret: number
+  chordHighFret: number
 }
 
 /** Settings that suit the instrument: its accidentals, a first window, a position it has. */
@@ -54,6 +59,9 @@ export function defaultSettings(neck: DrillNeck): SheetSettings {
     seed: 1,
     lowFret: Math.min(2, neck.frets - 3),
     highFret: Math.min(5, neck.frets),
+    progression: 'two-five-one',
+    chordLowFret: Math.min(2, neck.frets - 4),
+    chordHighFret: Math.min(6, neck.frets),
   }
 }
 
@@ -97,6 +105,10 @@ export function sheetParams(
       const { tonic, scale, lowFret, highFret, count } = settings
       return { ...instrument, frets, tonic, scale, lowFret, highFret, count }
     }
+    case 'chords': {
+      const { tonic: start, progression, chordLowFret: lowFret, chordHighFret: highFret } = settings
+      return { ...instrument, frets, start, progression, lowFret, highFret, answers }
+    }
   }
 }
 
@@ -133,9 +145,13 @@ function runsExercise(settings: SheetSettings, neck: DrillNeck): Exercise {
  * theory core's message when the settings cannot make one. Neck sheets have none.
  */
 export function sheetExercise(settings: SheetSettings, neck: DrillNeck): SheetExercise {
-  const build = { neck: null, cycle: cycleExercise, scatter: scatterExercise, runs: runsExercise }[
-    settings.kind
-  ]
+  const build = {
+    neck: null,
+    cycle: cycleExercise,
+    scatter: scatterExercise,
+    runs: runsExercise,
+    chords: null,
+  }[settings.kind]
   if (!build) return { exercise: null, error: null }
   try {
     return { exercise: build(settings, neck), error: null }

@@ -2,6 +2,7 @@
 // (a drill with its settings, as a plan item holds it) and the words that describe one.
 // Adding a drill: a contract file beside this one and its line in DRILL_CONTRACTS.
 import { z } from 'zod'
+import { chordsContract } from './chords'
 import { cycleContract } from './cycle'
 import type { DrillContract } from './drill-contract'
 import { describeLength } from './fields'
@@ -16,6 +17,7 @@ export const DRILL_CONTRACTS = {
   runs: runsContract,
   scatter: scatterContract,
   cycle: cycleContract,
+  chords: chordsContract,
 } as const
 
 export type DrillId = keyof typeof DRILL_CONTRACTS
@@ -67,3 +69,4 @@ export * from './hunt'
 export * from './runs'
 export * from './scatter'
 export * from './cycle'
+export * from './chords'
