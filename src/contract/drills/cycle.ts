@@ -2,7 +2,7 @@
 import { z } from 'zod'
 import { customCycle, CYCLES, cycleTonics, missingPitchClasses, pitchName } from '../../theory'
 import { defineDrillContract, type SettingsIssue } from './drill-contract'
-import { DetailText, Length, Pitch, Scale, scaleLabel, Tonic } from './fields'
+import { DetailText, Length, Pitch, PlayedDetail, Scale, scaleLabel, Tonic } from './fields'
 
 export const CycleSettingsSchema = Length.extend({
   low: Pitch,
@@ -22,6 +22,7 @@ export const CycleDetailSchema = z.strictObject({
   degree: z.number().int().min(1),
   /** The note was folded back an octave to stay inside the window. */
   displaced: z.boolean(),
+  ...PlayedDetail,
 })
 
 type CycleChoice = Pick<CycleSettings, 'cycle' | 'customTonics' | 'scale'>

@@ -1,7 +1,7 @@
 // Range Runs' contract: a scale from the lowest to the highest note a hand position offers.
 import { z } from 'zod'
 import { defineDrillContract } from './drill-contract'
-import { DetailText, Fret, Length, Scale, scaleLabel, Tonic } from './fields'
+import { DetailText, Fret, Length, PlayedDetail, Scale, scaleLabel, Tonic } from './fields'
 
 export const RunsSettingsSchema = Length.extend({
   tonic: Tonic,
@@ -26,6 +26,7 @@ export const RunsDetailSchema = z.strictObject({
   /** The pick was the cell the chosen fingering plays. */
   onFingering: z.boolean().optional(),
   revealed: z.literal(true).optional(),
+  ...PlayedDetail,
 })
 
 export const runsContract = defineDrillContract({
