@@ -4,7 +4,7 @@ import { requireAuth } from '../auth/auth-middleware'
 import type { AppContext } from '../context'
 import { parse } from '../lib/validate'
 import { FingeringsQuerySchema, ProgressScopeSchema, RangeQuerySchema } from './progress-schema'
-import { fingerings, notes, positions, summary, timeline } from './progress-service'
+import { fingerings, notes, positions, summary, tempos, timeline } from './progress-service'
 
 export function progressRoutes(ctx: AppContext): Router {
   const router = Router()
@@ -24,6 +24,10 @@ export function progressRoutes(ctx: AppContext): Router {
 
   router.get('/timeline', async (req, res) => {
     res.json(await timeline(ctx, req.user!, parse(RangeQuerySchema, req, 'query')))
+  })
+
+  router.get('/tempos', async (req, res) => {
+    res.json(await tempos(ctx, req.user!, parse(RangeQuerySchema, req, 'query')))
   })
 
   router.get('/fingerings', async (req, res) => {

@@ -5,6 +5,7 @@ import type {
   NotesAnswer,
   PositionsAnswer,
   SummaryAnswer,
+  TemposAnswer,
   TimelineAnswer,
 } from '../contract/progress'
 import { http } from './http'
@@ -43,3 +44,7 @@ export interface FingeringsParams {
 /** How often each fingering of a key and region was practised in Range Runs. */
 export const fetchFingerings = (p: FingeringsParams) =>
   http.get<FingeringsAnswer>('/progress/fingerings', { query: { ...p } })
+
+/** The fastest clean tempo of played takes per drill and settings, per day. */
+export const fetchTempos = (f: ProgressFilter) =>
+  http.get<TemposAnswer>('/progress/tempos', { query: { ...f } })

@@ -5,11 +5,12 @@
 // refused microphone falls back to tapping. Pitches are MIDI numbers (E1 = 28, common practice).
 import { flushPromises } from '@vue/test-utils'
 import { afterEach, beforeEach, describe, expect, it, vi } from 'vitest'
-import { defineComponent, h } from 'vue'
+import { defineComponent, h, type Component } from 'vue'
 import { setPitchPlayer } from '../../src/audio'
 import DrillPage from '../../src/components/drills/DrillPage.vue'
 import { useWindowCycle } from '../../src/drills/cycle/useWindowCycle'
 import { TAKE_SILENCE_MS } from '../../src/drills/engine/usePlayTake'
+import type { DrillQuestion } from '../../src/drills/engine/types'
 import type { DrillPageModel } from '../../src/drills/engine/useDrill'
 import { usePitchHunt } from '../../src/drills/hunt/usePitchHunt'
 import { useNeckRecall } from '../../src/drills/recall/useNeckRecall'
@@ -47,7 +48,9 @@ afterEach(() => {
 async function inPlayMode<T extends DrillPageModel>(use: () => T, settings?: [string, unknown]) {
   if (settings) localStorage.setItem(`ambitus.drill.${settings[0]}`, JSON.stringify(settings[1]))
   let drill: T | undefined
-  const page = defineComponent({ setup: () => ((drill = use()), () => h(DrillPage, { drill })) })
+  const page = defineComponent({
+    setup: () => ((drill = use()), () => h(DrillPage as unknown as Component, { drill })),
+  })
   const { wrapper } = mountWithApp(page, { attachTo: document.body })
   await flushPromises()
   await wrapper.find('[data-testid="input-play"]').trigger('click')
@@ -69,7 +72,8 @@ function playNote(pitch: number, afterMs = 400) {
   })
 }
 
-const questionsOf = (drill: DrillPageModel) => drill.session.state.value?.questions ?? []
+const questionsOf = <Q extends DrillQuestion>(drill: DrillPageModel<Q>): readonly Q[] =>
+  drill.session.state.value?.questions ?? []
 const kinds = (wrapper: ReturnType<typeof mountWithApp>['wrapper']) =>
   wrapper.findAll('[data-testid="take-notes"] li').map((li) => li.attributes('data-kind'))
 const feedback = (wrapper: ReturnType<typeof mountWithApp>['wrapper']) =>

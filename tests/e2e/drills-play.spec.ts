@@ -149,7 +149,11 @@ describe('Pitch Hunt played on the instrument', () => {
     })
     const seed = Math.floor(0.5 * 2 ** 31)
     const asked = huntQuestions({ ...BASS, settings, seed, focus: [] })[0]!.expectedPitch
-    const notes = [0, 1, 2].map((k) => ({ pitch: asked, startMs: 300 + k * 1500, durationMs: 1200 }))
+    const notes = [0, 1, 2].map((k) => ({
+      pitch: asked,
+      startMs: 300 + k * 1500,
+      durationMs: 1200,
+    }))
     const browser = await launchBrowser({
       microphoneFile: await writeTakeWav('play-hunt', notes, { voice: 'bass', tailMs: 300 }),
     })

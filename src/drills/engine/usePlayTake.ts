@@ -69,25 +69,10 @@ export function usePlayClock(drill: string) {
 }
 export type PlayClock = ReturnType<typeof usePlayClock>
 
-export function usePlayTake<Q extends DrillQuestion, A>(
-  options: PlayTakeOptions<Q, A>,
-  clock: PlayClock,
-) {
-  const notes = ref<TakeNote[]>([])
-  const last = shallowRef<GradedTake<Q> | null>(null)
-  let silence: ReturnType<typeof setTimeout> | undefined
+/** Grading played notes: one note alone, or a take lined up and settled question by question. */
+function takeGrading<Q extends DrillQuestion, A>(options: PlayTakeOptions<Q, A>, clock: PlayClock) {
   const { session, rules } = options
   const match = playedMatch(rules)
-
-  const passQuestions = (): Q[] => {
-    const state = session.state.value
-    const first = session.current.value
-    if (!state || !first || !rules.passOf) return []
-    const pass = rules.passOf(first)
-    const rest = state.questions.slice(state.index)
-    const end = rest.findIndex((q) => rules.passOf!(q) !== pass)
-    return end < 0 ? [...rest] : rest.slice(0, end)
-  }
 
   const timingOf = (note: TakeNote, spreadMs?: number): AttemptDetail => {
     const grid = clock.grid.value
@@ -107,85 +92,111 @@ export function usePlayTake<Q extends DrillQuestion, A>(
         accidentals: options.neck.value.accidentals,
       })
 
-  /** One note answers the current question (drills without passes). */
-  function answerNote(note: TakeNote) {
-    session.settle(gradeOf(note, null, timingOf(note)), note.onsetMs)
-  }
-
-  function finish() {
-    clearTimeout(silence)
-    const questions = passQuestions()
-    const heard = notes.value
-    notes.value = []
-    if (questions.length === 0 || session.status.value !== 'asking') return
-    const take = gradeTake(questions, heard)
-    settleTake(take, heard)
-    last.value = take
-    if (take.bpm !== null) climbLadder(take)
-  }
-
   function gradeTake(questions: Q[], heard: TakeNote[]): GradedTake<Q> {
     const entries = alignTake(questions.length, heard, (i, h, p) => match(questions[i]!, h, p))
     const grid = clock.grid.value
-    const offsets = grid
-      ? beatOffsets(
-          heard.map((n) => n.onsetMs),
-          grid,
-          clock.toleranceMs.value,
-        )
-      : null
+    const onsets = heard.map((n) => n.onsetMs)
+    const offsets = grid ? beatOffsets(onsets, grid, clock.toleranceMs.value) : null
     const played = entries.flatMap((e) =>
-      e.kind === 'right' || e.kind === 'wrong' ? [e.heard] : [],
+      e.kind === 'right' || e.kind === 'wrong' ? [e.heard.onsetMs] : [],
     )
-    const evenness = takeEvenness(played.map((n) => n.onsetMs))
     const bpm = grid ? clock.bpm.value : null
-    return { questions, entries, evenness, offsets, clean: isCleanTake(entries, offsets), bpm }
+    const clean = isCleanTake(entries, offsets)
+    return { questions, entries, evenness: takeEvenness(played), offsets, clean, bpm }
+  }
+
+  function settleMissing(question: Q, at: number | undefined) {
+    const name = pitchName(question.expectedPitch, options.neck.value.accidentals)
+    session.settle((g, q, picks) => missingGrade(g.reveal(q, picks), name), at)
   }
 
   function settleTake(take: GradedTake<Q>, heard: TakeNote[]) {
     let at = session.state.value?.shownAt ?? undefined
-    const clean = take.clean && take.bpm !== null
-    const extra = {
-      ...(clean ? { cleanTempo: take.bpm!, playedSettings: options.settingsLabel() } : {}),
-    }
+    const clean: AttemptDetail =
+      take.clean && take.bpm !== null
+        ? { cleanTempo: take.bpm, playedSettings: options.settingsLabel() }
+        : {}
     for (const entry of take.entries) {
       if (entry.kind === 'extra') continue
       const question = take.questions[entry.index]!
-      if (entry.kind === 'missing') {
-        const name = pitchName(question.expectedPitch, options.neck.value.accidentals)
-        session.settle((g, q, picks) => missingGrade(g.reveal(q, picks), name), at)
-      } else {
+      if (entry.kind === 'missing') settleMissing(question, at)
+      else {
         const previous = heard[heard.indexOf(entry.heard) - 1] ?? null
         const timing = timingOf(entry.heard, take.evenness?.spreadMs)
-        session.settle(gradeOf(entry.heard, previous, { ...timing, ...extra }), entry.heard.onsetMs)
+        session.settle(gradeOf(entry.heard, previous, { ...timing, ...clean }), entry.heard.onsetMs)
         at = entry.heard.onsetMs
       }
       if (session.current.value === question) session.next(at)
     }
   }
 
-  function climbLadder(take: GradedTake<Q>) {
-    if (take.clean)
-      clock.fastestClean.value = Math.max(clock.fastestClean.value ?? 0, take.bpm ?? 0)
-    clock.bpm.value = nextTempo(clock.bpm.value, take.clean)
-    clock.save()
+  /** One note answers the current question (drills without passes). */
+  const answerNote = (note: TakeNote) =>
+    session.settle(gradeOf(note, null, timingOf(note)), note.onsetMs)
+
+  return { match, gradeTake, settleTake, answerNote }
+}
+
+/** The questions of the pass now asked (from the current one to the pass's end). */
+function passQuestions<Q extends DrillQuestion>(
+  session: DrillSession<Q, unknown>,
+  passOf: ((question: Q) => string) | undefined,
+): Q[] {
+  const state = session.state.value
+  const first = session.current.value
+  if (!state || !first || !passOf) return []
+  const rest = state.questions.slice(state.index)
+  const end = rest.findIndex((q) => passOf(q) !== passOf(first))
+  return end < 0 ? [...rest] : rest.slice(0, end)
+}
+
+/** Whether the notes heard so far end the take: its last note played, or too many extra. */
+function takeEnded<Q extends DrillQuestion>(
+  questions: readonly Q[],
+  heard: readonly TakeNote[],
+  match: (question: Q, heard: TakeNote, previous: TakeNote | null) => boolean,
+) {
+  const last = questions[questions.length - 1]
+  const note = heard[heard.length - 1]
+  if (heard.length >= questions.length + MAX_EXTRA_NOTES) return true
+  return (
+    heard.length >= questions.length &&
+    !!last &&
+    !!note &&
+    match(last, note, heard[heard.length - 2] ?? null)
+  )
+}
+
+export function usePlayTake<Q extends DrillQuestion, A>(
+  options: PlayTakeOptions<Q, A>,
+  clock: PlayClock,
+) {
+  const notes = ref<TakeNote[]>([])
+  const last = shallowRef<GradedTake<Q> | null>(null)
+  let silence: ReturnType<typeof setTimeout> | undefined
+  const { session, rules } = options
+  const grading = takeGrading(options, clock)
+  const pass = () => passQuestions(session as DrillSession<Q, unknown>, rules.passOf)
+
+  function finish() {
+    clearTimeout(silence)
+    const questions = pass()
+    const heard = notes.value
+    notes.value = []
+    if (questions.length === 0 || session.status.value !== 'asking') return
+    const take = grading.gradeTake(questions, heard)
+    grading.settleTake(take, heard)
+    last.value = take
+    if (take.bpm !== null) climbLadder(clock, take)
   }
 
   /** A note heard in the "play" mode (ignored outside a question). */
   function hear(note: TakeNote) {
     if (session.status.value !== 'asking') return
-    if (!rules.passOf) return answerNote(note)
+    if (!rules.passOf) return grading.answerNote(note)
     notes.value = [...notes.value, note]
-    const questions = passQuestions()
-    const lastQuestion = questions[questions.length - 1]
-    const heard = notes.value
-    const ended =
-      heard.length >= questions.length + MAX_EXTRA_NOTES ||
-      (heard.length >= questions.length &&
-        !!lastQuestion &&
-        match(lastQuestion, note, heard[heard.length - 2] ?? null))
     clearTimeout(silence)
-    if (ended) finish()
+    if (takeEnded(pass(), notes.value, grading.match)) finish()
     else silence = setTimeout(finish, TAKE_SILENCE_MS)
   }
 
@@ -203,3 +214,10 @@ export function usePlayTake<Q extends DrillQuestion, A>(
   return { notes, last, hear, finish, marks, reset, takes: !!rules.passOf }
 }
 export type PlayTake = ReturnType<typeof usePlayTake>
+
+/** The tempo ladder after a take with the click: a step up when clean, down when not. */
+function climbLadder(clock: PlayClock, take: GradedTake) {
+  if (take.clean) clock.fastestClean.value = Math.max(clock.fastestClean.value ?? 0, take.bpm ?? 0)
+  clock.bpm.value = nextTempo(clock.bpm.value, take.clean)
+  clock.save()
+}
