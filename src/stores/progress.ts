@@ -1,7 +1,7 @@
 // Progress figures of one student (the signed-in one, or a teacher's student via `student`): summary,
 // timeline, places and notes, loaded together for one filter.
 import { defineStore } from 'pinia'
-import { computed, ref } from 'vue'
+import { computed, ref, type Ref } from 'vue'
 import { ApiError } from '../api/http'
 import * as api from '../api/progress'
 import type {
@@ -9,6 +9,7 @@ import type {
   PositionsAnswer,
   ProgressFilter,
   SummaryAnswer,
+  TemposAnswer,
   TimelineAnswer,
 } from '../api/progress'
 import type { DrillId } from '../contract/drills'
@@ -36,10 +37,29 @@ const localToday = () =>
     new Date(),
   )
 
+/** The played takes' tempos, beside the rest of a load; a failure stays with them. */
+async function loadTempos(
+  into: { tempos: Ref<TemposAnswer | null>; temposError: Ref<ApiError | null> },
+  f: Parameters<typeof api.fetchTempos>[0],
+  current: () => boolean,
+) {
+  into.temposError.value = null
+  try {
+    const answer = await api.fetchTempos(f)
+    if (current()) into.tempos.value = answer
+  } catch (e) {
+    if (current())
+      into.temposError.value = e instanceof ApiError ? e : new ApiError(0, 'unknown', String(e))
+  }
+}
+
 export const useProgressStore = defineStore('progress', () => {
   const selection = ref<ProgressSelection>({ rangeDays: 30 })
   const summary = ref<SummaryAnswer | null>(null)
   const timeline = ref<TimelineAnswer | null>(null)
+  /** Played takes' fastest clean tempos, loaded beside the rest (their failure is their own). */
+  const tempos = ref<TemposAnswer | null>(null)
+  const temposError = ref<ApiError | null>(null)
   const positions = ref<PositionsAnswer | null>(null)
   const notes = ref<NotesAnswer | null>(null)
   const isLoading = ref(false)
@@ -69,6 +89,7 @@ export const useProgressStore = defineStore('progress', () => {
     error.value = null
     try {
       const f = filterOf(selection.value)
+      void loadTempos({ tempos, temposError }, f, () => mine === request)
       const [s, t, p, n] = await Promise.all([
         api.fetchSummary(f),
         api.fetchTimeline(f),
@@ -88,5 +109,8 @@ export const useProgressStore = defineStore('progress', () => {
     }
   }
 
-  return { selection, summary, timeline, positions, notes, isLoading, error, isEmpty, load }
+  return {
+    ...{ selection, summary, timeline, tempos, temposError, positions, notes },
+    ...{ isLoading, error, isEmpty, load },
+  }
 })
