@@ -59,7 +59,12 @@ async function playedAttempts(email: string, drill: string, atLeast: number) {
       .join('users', 'users.id', 'attempts.user_id')
       .where({ 'users.email': email, 'attempts.drill': drill })
       .orderBy('attempts.created_at')
-      .select('attempts.correct', 'attempts.expected_pitch', 'attempts.detail')
+      .select(
+        'attempts.correct',
+        'attempts.expected_pitch',
+        'attempts.detail',
+        'attempts.created_at',
+      )
   await expect
     .poll(async () => (await read()).length, { timeout: 20_000 })
     .toBeGreaterThanOrEqual(atLeast)
@@ -93,9 +98,13 @@ describe('Range Runs played on the instrument', () => {
     const kinds = await notes.evaluateAll((items) => items.map((li) => li.dataset.kind))
     expect(kinds).toEqual(PASS.map(() => 'right'))
     await screenshot(page, 'drills-play-runs-take-laptop')
-    const stored = await playedAttempts(email, 'runs', PASS.length)
-    expect(stored.slice(0, PASS.length).map((row) => row.expected_pitch)).toEqual(PASS)
-    expect(stored.slice(0, PASS.length).every((row) => row.correct && row.detail.played)).toBe(true)
+    const all = await playedAttempts(email, 'runs', PASS.length)
+    const firstAt = new Date(all[0]!.created_at).getTime()
+    const stored = all.filter((row) => new Date(row.created_at).getTime() - firstAt < 1000)
+    // one take's answers are stored together (the same instant): compare them as a set of notes
+    const byPitch = (a: number, b: number) => a - b
+    expect(stored.map((row) => row.expected_pitch).sort(byPitch)).toEqual([...PASS].sort(byPitch))
+    expect(stored.every((row) => row.correct && row.detail.played)).toBe(true)
     await context.close()
   })
 
@@ -129,8 +138,13 @@ describe('Range Runs played on the instrument', () => {
       const kinds = await notes.evaluateAll((items) => items.map((li) => li.dataset.kind))
       expect(kinds).toEqual(PASS.map((_, k) => (k === WRONG_AT ? 'wrong' : 'right')))
       await screenshot(page, 'drills-play-runs-wrong-laptop')
-      const stored = (await playedAttempts(email, 'runs', PASS.length)).slice(0, PASS.length)
-      expect(stored.map((row) => row.correct)).toEqual(PASS.map((_, k) => k !== WRONG_AT))
+      // the first take's answers (stored within a second; the looped file may start a next take)
+      const stored = await playedAttempts(email, 'runs', PASS.length)
+      const firstAt = new Date(stored[0]!.created_at).getTime()
+      const firstTake = stored.filter((row) => new Date(row.created_at).getTime() - firstAt < 1000)
+      expect(firstTake).toHaveLength(PASS.length)
+      const wrongRows = firstTake.filter((row) => !row.correct)
+      expect(wrongRows.map((row) => row.expected_pitch)).toEqual([PASS[WRONG_AT]])
     } finally {
       await wrongBrowser.close()
     }
