@@ -210,3 +210,35 @@ export async function chordToneRows(
     recentMs: r.recent_ms.map(Number),
   }))
 }
+
+export interface TempoRow {
+  drill: string
+  settings: string
+  day: string
+  bpm: number
+}
+
+/** The fastest clean tempo of played takes per drill, settings and local day (attempts' detail). */
+export async function tempoRows(
+  db: Db,
+  userId: string,
+  f: { instrumentKey: string; drill: string | null; timeZone: string; range: Required<DayRange> },
+): Promise<TempoRow[]> {
+  const day = db.raw('to_char((created_at at time zone ?)::date, ?)', [f.timeZone, 'YYYY-MM-DD'])
+  const q = db('attempts')
+    .where('user_id', userId)
+    .whereRaw(`detail->>'cleanTempo' is not null`)
+    .whereRaw('(created_at at time zone ?)::date between ? and ?', [
+      f.timeZone,
+      f.range.from,
+      f.range.to,
+    ])
+  if (f.instrumentKey !== ALL_INSTRUMENTS) q.where('instrument_id', f.instrumentKey)
+  if (f.drill) q.where('drill', f.drill)
+  const rows = (await q
+    .select('drill', db.raw(`coalesce(detail->>'playedSettings', '') as settings`), { day })
+    .max({ bpm: db.raw(`(detail->>'cleanTempo')::int`) })
+    .groupBy('drill', 'settings', 'day')
+    .orderBy(['drill', 'settings', 'day'])) as unknown as TempoRow[]
+  return rows.map((r) => ({ ...r, bpm: Number(r.bpm) }))
+}

@@ -17,6 +17,7 @@ import {
   notes,
   positions,
   summary,
+  tempos,
   timeline,
 } from './progress-service'
 
@@ -38,6 +39,10 @@ export function progressRoutes(ctx: AppContext): Router {
 
   router.get('/timeline', async (req, res) => {
     res.json(await timeline(ctx, req.user!, parse(RangeQuerySchema, req, 'query')))
+  })
+
+  router.get('/tempos', async (req, res) => {
+    res.json(await tempos(ctx, req.user!, parse(RangeQuerySchema, req, 'query')))
   })
 
   router.get('/fingerings', async (req, res) => {

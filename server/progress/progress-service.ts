@@ -5,6 +5,7 @@ import type { AppContext } from '../context'
 import { badRequest } from '../lib/errors'
 import { listInstruments } from '../instruments/instruments-repository'
 import type { PublicUser } from '../users/users-schema'
+import type { DrillId } from '../../src/contract/drills'
 import {
   addDays,
   localDay,
@@ -22,6 +23,7 @@ import type { CyclePositionAnswer } from '../../src/contract/drills'
 import type {
   ChordTonesAnswer,
   FingeringsAnswer,
+  TemposAnswer,
   NotesAnswer,
   PositionsAnswer,
   ProgressInstrument,
@@ -245,4 +247,29 @@ export async function chordTones(
   const { studentId, instrument } = await studentAndInstrument(ctx, viewer, q)
   const rows = await repo.chordToneRows(ctx.db, studentId, instrument?.id)
   return chordToneFigures(rows, instrument?.id ?? null)
+}
+
+/** The fastest clean tempo of takes played on the instrument, per drill and settings, per day. */
+export async function tempos(
+  ctx: AppContext,
+  viewer: PublicUser,
+  q: RangeQuery,
+): Promise<TemposAnswer> {
+  const { studentId, timeZone, key } = await rangeScope(ctx, viewer, q)
+  const to = q.to ?? localDay(new Date(), timeZone)
+  const from = q.from ?? addDays(to, -(DEFAULT_TIMELINE_DAYS - 1))
+  const filter = { instrumentKey: key, drill: q.drill ?? null, timeZone, range: { from, to } }
+  const rows = await repo.tempoRows(ctx.db, studentId, filter)
+  const series = new Map<string, TemposAnswer['series'][number]>()
+  for (const { drill, settings, day, bpm } of rows) {
+    const name = `${drill}\u0000${settings}`
+    const line: TemposAnswer['series'][number] = series.get(name) ?? {
+      ...{ drill: drill as DrillId, settings },
+      ...{ fastest: 0, points: [] },
+    }
+    line.points.push({ day, bpm })
+    line.fastest = Math.max(line.fastest, bpm)
+    series.set(name, line)
+  }
+  return { timeZone, from, to, series: [...series.values()] }
 }

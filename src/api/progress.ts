@@ -6,6 +6,7 @@ import type {
   NotesAnswer,
   PositionsAnswer,
   SummaryAnswer,
+  TemposAnswer,
   TimelineAnswer,
 } from '../contract/progress'
 import { http } from './http'
@@ -51,3 +52,6 @@ export const fetchCyclePosition = (p: { scale: string; planItem?: string }) =>
 /** Chord Tones answers per chord type and degree (every instrument unless one is given). */
 export const fetchChordTones = (p: { student?: string; instrument?: string }) =>
   http.get<ChordTonesAnswer>('/progress/chords', { query: { ...p } })
+/** The fastest clean tempo of played takes per drill and settings, per day. */
+export const fetchTempos = (f: ProgressFilter) =>
+  http.get<TemposAnswer>('/progress/tempos', { query: { ...f } })

@@ -6,12 +6,13 @@ interface Settings {
   volume: number
   referenceHz: number
   tuning: number[] | null
+  clickVolume: number
 }
 
 export function createLazyPlayer(
   load: () => Promise<PitchPlayer>,
 ): PitchPlayer & { preload(): void } {
-  const settings: Settings = { volume: 0.6, referenceHz: 440, tuning: null }
+  const settings: Settings = { volume: 0.6, referenceHz: 440, tuning: null, clickVolume: 1 }
   let real: PitchPlayer | null = null
   let loading: Promise<PitchPlayer> | null = null
 
@@ -20,6 +21,7 @@ export function createLazyPlayer(
       player.setVolume(settings.volume)
       player.setReferenceHz(settings.referenceHz)
       if (settings.tuning) player.setTuning?.(settings.tuning)
+      player.setClickVolume?.(settings.clickVolume)
       real = player
       return player
     })
@@ -52,6 +54,10 @@ export function createLazyPlayer(
     setReferenceHz: (hz) => {
       settings.referenceHz = hz
       real?.setReferenceHz(hz)
+    },
+    setClickVolume: (volume) => {
+      settings.clickVolume = volume
+      real?.setClickVolume?.(volume)
     },
     setTuning: (tuning) => {
       settings.tuning = [...tuning]

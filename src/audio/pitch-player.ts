@@ -11,6 +11,8 @@ export interface PitchPlayer {
   /** Starts or stops a metronome click at `bpm` (Tone.Transport). */
   startClick(bpm: number): void
   stopClick(): void
+  /** The click's own volume (0..1), apart from the notes'. Optional. */
+  setClickVolume?(volume: number): void
   setVolume(volume: number): void
   setReferenceHz(hz: number): void
   /** Picks the voice for an instrument (bass or guitar samples) from its open strings. Optional. */

@@ -60,7 +60,8 @@ function loadSampler(voice: SampleVoice, output: Tone.ToneAudioNode): Promise<To
 
 /** The metronome: a click each beat, the first of every four higher. */
 function createMetronome(output: Tone.ToneAudioNode) {
-  const click = createClick(output)
+  const level = new Tone.Volume(0).connect(output)
+  const click = createClick(level)
   let clickId: number | null = null
   const stop = () => {
     const transport = Tone.getTransport()
@@ -79,7 +80,12 @@ function createMetronome(output: Tone.ToneAudioNode) {
     }, '4n')
     transport.start()
   }
-  return { start, stop }
+  const setVolume = (volume: number) => {
+    const gain = Math.min(1, Math.max(0, volume))
+    level.mute = gain === 0
+    if (gain > 0) level.volume.value = Tone.gainToDb(gain)
+  }
+  return { start, stop, setVolume }
 }
 
 /** Each voice's sampler, loaded once on first use (null when its samples cannot be loaded). */
@@ -135,6 +141,7 @@ export function createTonePlayer(): PitchPlayer {
       ),
     startClick: metronome.start,
     stopClick: metronome.stop,
+    setClickVolume: metronome.setVolume,
     setVolume: (volume) => {
       const gain = Math.min(1, Math.max(0, volume))
       master.mute = gain === 0

@@ -122,3 +122,18 @@ export interface ChordTonesAnswer {
   degrees: (ChordToneFigures & { degree: string })[]
   cells: (ChordToneFigures & { chordType: string; degree: string })[]
 }
+
+/** The fastest clean tempo (BPM) of takes played on the instrument, per drill and settings, per day. */
+export interface TemposAnswer {
+  timeZone: string
+  from: string
+  to: string
+  series: {
+    drill: DrillId
+    /** The settings in words ("C major, frets 2–5"). */
+    settings: string
+    /** The fastest over the whole range. */
+    fastest: number
+    points: { day: string; bpm: number }[]
+  }[]
+}

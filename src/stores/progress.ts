@@ -2,7 +2,7 @@
 // timeline, places and notes, loaded together for one filter; loaded again while answers still wait
 // for the statistics (`pending`).
 import { defineStore } from 'pinia'
-import { computed, ref } from 'vue'
+import { computed, ref, type Ref } from 'vue'
 import { ApiError } from '../api/http'
 import * as api from '../api/progress'
 import type {
@@ -10,6 +10,7 @@ import type {
   PositionsAnswer,
   ProgressFilter,
   SummaryAnswer,
+  TemposAnswer,
   TimelineAnswer,
 } from '../api/progress'
 import type { DrillId } from '../contract/drills'
@@ -43,10 +44,29 @@ const localToday = () =>
 const fetchAll = (f: ProgressFilter) =>
   Promise.all([api.fetchSummary(f), api.fetchTimeline(f), api.fetchPositions(f), api.fetchNotes(f)])
 
+/** The played takes' tempos, beside the rest of a load; a failure stays with them. */
+async function loadTempos(
+  into: { tempos: Ref<TemposAnswer | null>; temposError: Ref<ApiError | null> },
+  f: Parameters<typeof api.fetchTempos>[0],
+  current: () => boolean,
+) {
+  into.temposError.value = null
+  try {
+    const answer = await api.fetchTempos(f)
+    if (current()) into.tempos.value = answer
+  } catch (e) {
+    if (current())
+      into.temposError.value = e instanceof ApiError ? e : new ApiError(0, 'unknown', String(e))
+  }
+}
+
 export const useProgressStore = defineStore('progress', () => {
   const selection = ref<ProgressSelection>({ rangeDays: 30 })
   const summary = ref<SummaryAnswer | null>(null)
   const timeline = ref<TimelineAnswer | null>(null)
+  /** Played takes' fastest clean tempos, loaded beside the rest (their failure is their own). */
+  const tempos = ref<TemposAnswer | null>(null)
+  const temposError = ref<ApiError | null>(null)
   const positions = ref<PositionsAnswer | null>(null)
   const notes = ref<NotesAnswer | null>(null)
   const isLoading = ref(false)
@@ -80,7 +100,9 @@ export const useProgressStore = defineStore('progress', () => {
     isLoading.value = true
     error.value = null
     try {
-      const [s, t, p, n] = await fetchAll(filterOf(selection.value))
+      const f = filterOf(selection.value)
+      void loadTempos({ tempos, temposError }, f, () => mine === request)
+      const [s, t, p, n] = await fetchAll(f)
       if (mine !== request) return
       summary.value = s
       timeline.value = t
@@ -99,16 +121,7 @@ export const useProgressStore = defineStore('progress', () => {
   const stopRefresh = () => clearTimeout(refresh)
 
   return {
-    selection,
-    summary,
-    timeline,
-    positions,
-    notes,
-    isLoading,
-    error,
-    isEmpty,
-    pending,
-    load,
-    stopRefresh,
+    ...{ selection, summary, timeline, tempos, temposError, positions, notes },
+    ...{ isLoading, error, isEmpty, pending, load, stopRefresh },
   }
 })

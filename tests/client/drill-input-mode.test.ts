@@ -55,7 +55,7 @@ describe('answerPitch (the "play" input mode)', () => {
     expect(places).toContainEqual(state().lastGrade?.cell)
   })
 
-  it('Neck Recall: the played note names the cell by its pitch class, in any octave', async () => {
+  it('Neck Recall: the played note must be the cell’s exact pitch (its name an octave up is wrong)', async () => {
     const region = { lowString: 1, highString: 1, lowFret: 5, highFret: 5 } // A string fret 5 = D2
     localStorage.setItem(
       'ambitus.drill.recall',
@@ -66,10 +66,10 @@ describe('answerPitch (the "play" input mode)', () => {
     const state = () => recall.session.state.value!
     expect(recall.session.current.value?.expectedPitch).toBe(38) // D2 = 33 + 5 (arithmetic)
     recall.answerPitch(50, { onsetMs: state().shownAt! }) // D3: the same note an octave up
-    expect(state().lastGrade?.correct).toBe(true)
-    recall.session.next()
-    recall.answerPitch(39, { onsetMs: state().shownAt! }) // Eb2: a semitone off
     expect(state().lastGrade?.correct).toBe(false)
+    recall.session.next()
+    recall.answerPitch(38, { onsetMs: state().shownAt! }) // D2: the cell's own pitch
+    expect(state().lastGrade?.correct).toBe(true)
   })
 
   it('a played note outside a question (before the session) is ignored', async () => {

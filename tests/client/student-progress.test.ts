@@ -55,6 +55,22 @@ const figures = (attempts: number, recentAccuracy: number, medianMs: number) => 
 const BODIES: Record<string, unknown> = {
   summary: summary('2026-03-09T10:00:00Z'),
   timeline: { timeZone: 'UTC', from: '2026-02-09', to: '2026-03-10', series: [] },
+  tempos: {
+    timeZone: 'UTC',
+    from: '2026-02-09',
+    to: '2026-03-10',
+    series: [
+      {
+        drill: 'runs',
+        settings: 'C major, frets 2–5',
+        fastest: 84,
+        points: [
+          { day: '2026-03-08', bpm: 76 },
+          { day: '2026-03-09', bpm: 84 },
+        ],
+      },
+    ],
+  },
   positions: {
     instrument: BASS,
     positions: [
@@ -111,10 +127,12 @@ describe('StudentProgress', () => {
 
   it("when a teacher's page passes a student, then every request asks for that student", async () => {
     const fetch = stubApi(BODIES)
-    mountProgress({ studentId: 'student-7' })
+    const { wrapper } = mountProgress({ studentId: 'student-7' })
     await flushPromises()
-    expect(fetch).toHaveBeenCalledTimes(4)
+    expect(fetch).toHaveBeenCalledTimes(5) // summary, timeline, places, notes and the tempo ladder
     for (const [url] of fetch.mock.calls) expect(String(url)).toContain('student=student-7')
+    // the teacher sees the student's tempo ladder too: its fastest clean take
+    expect(wrapper.text()).toContain('Tempo ladder')
   })
 
   it('when the server fails, then its message and a way to retry are shown', async () => {

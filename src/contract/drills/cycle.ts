@@ -2,7 +2,7 @@
 import { z } from 'zod'
 import { customCycle, CYCLES, cycleTonics, missingPitchClasses, pitchName } from '../../theory'
 import { defineDrillContract, type SettingsIssue } from './drill-contract'
-import { DetailText, Length, Pitch, Scale, scaleLabel, Tonic } from './fields'
+import { DetailText, Length, Pitch, PlayedDetail, Scale, scaleLabel, Tonic } from './fields'
 
 /** The ways a window cycle's keys are played (the drill's default: alternate). */
 export const CYCLE_DIRECTIONS = ['alternate', 'up', 'down'] as const
@@ -34,6 +34,7 @@ export const CycleDetailSchema = z.strictObject({
   noteIndex: z.number().int().min(0).max(12).optional(),
   phase: z.enum(['up', 'down']).optional(),
   revealed: z.literal(true).optional(),
+  ...PlayedDetail,
 })
 
 type CycleChoice = Pick<CycleSettings, 'cycle' | 'customTonics' | 'scale'>

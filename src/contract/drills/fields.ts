@@ -47,3 +47,17 @@ export function scaleLabel(scale: string): string {
   const label = SCALE_TYPES.find((s) => s.name === scale)?.label ?? scale
   return `${label.charAt(0).toLowerCase()}${label.slice(1)}`
 }
+
+/**
+ * What an answer played on the instrument adds to any drill's detail: that it was played, the
+ * click's tempo, the onset against the beat (ms, negative early), the spread of the take's note
+ * gaps, and — on every note of a clean take — the tempo it was clean at, with the settings named.
+ */
+export const PlayedDetail = {
+  played: z.literal(true).optional(),
+  tempo: z.number().int().min(20).max(400).optional(),
+  beatMs: z.number().int().min(-5000).max(5000).optional(),
+  spreadMs: z.number().int().min(0).max(60_000).optional(),
+  cleanTempo: z.number().int().min(20).max(400).optional(),
+  playedSettings: DetailText.optional(),
+}

@@ -1,7 +1,7 @@
 // Pitch Hunt's contract: hear a pitch and find where it lives, in the right octave.
 import { z } from 'zod'
 import { defineDrillContract } from './drill-contract'
-import { DetailText, Fret, Length } from './fields'
+import { DetailText, Fret, Length, PlayedDetail } from './fields'
 
 export const HuntSettingsSchema = Length.extend({
   showName: z.boolean().default(false),
@@ -22,6 +22,7 @@ export const HuntDetailSchema = z.strictObject({
   found: Count.optional(),
   places: Count.optional(),
   revealed: z.literal(true).optional(),
+  ...PlayedDetail,
 })
 
 export const huntContract = defineDrillContract({

@@ -1,7 +1,7 @@
 // Neck Recall's contract: name every cell of a blank region from memory.
 import { z } from 'zod'
 import { defineDrillContract } from './drill-contract'
-import { DetailText, Length, Region, Scale, Tonic } from './fields'
+import { DetailText, Length, PlayedDetail, Region, Scale, Tonic } from './fields'
 
 export const RecallSettingsSchema = Length.extend({
   region: Region,
@@ -20,6 +20,7 @@ export const RecallDetailSchema = z.strictObject({
   focusReason: DetailText.optional(),
   /** "Show me": the answer was revealed. */
   revealed: z.literal(true).optional(),
+  ...PlayedDetail,
 })
 
 export const recallContract = defineDrillContract({

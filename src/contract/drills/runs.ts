@@ -2,7 +2,7 @@
 import { z } from 'zod'
 import { MAX_SHIFTS } from '../../theory'
 import { defineDrillContract } from './drill-contract'
-import { DetailText, Fret, Length, Scale, scaleLabel, Tonic } from './fields'
+import { DetailText, Fret, Length, PlayedDetail, Scale, scaleLabel, Tonic } from './fields'
 
 /** The hand systems a run may be fingered with (the theory core's names). */
 export const HAND_SYSTEMS = ['one-finger-per-fret', 'three-fret'] as const
@@ -37,6 +37,7 @@ export const RunsDetailSchema = z.strictObject({
   /** The pick was the cell the chosen fingering plays. */
   onFingering: z.boolean().optional(),
   revealed: z.literal(true).optional(),
+  ...PlayedDetail,
 })
 
 export const runsContract = defineDrillContract({

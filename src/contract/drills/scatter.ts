@@ -2,7 +2,7 @@
 import { z } from 'zod'
 import { DEFAULT_MAX_LEAP, pitchName } from '../../theory'
 import { defineDrillContract } from './drill-contract'
-import { DetailText, Length, Pitch, Scale, scaleLabel, Tonic } from './fields'
+import { DetailText, Length, Pitch, PlayedDetail, Scale, scaleLabel, Tonic } from './fields'
 
 export const ScatterSettingsSchema = Length.extend({
   tonic: Tonic,
@@ -35,6 +35,7 @@ export const ScatterDetailSchema = z.strictObject({
   /** The note was moved to another octave. */
   displaced: z.boolean().optional(),
   revealed: z.literal(true).optional(),
+  ...PlayedDetail,
 })
 
 const windowText = (low: number | null, high: number | null) =>

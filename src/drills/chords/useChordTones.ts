@@ -61,6 +61,7 @@ export function useChordTones() {
   const marks = computed<CellMark[]>(() => [
     ...shading.value,
     ...currentPickMarks(session, neck.value, (q) => toUnicode(q.name)),
+    ...drill.take.marks.value,
   ])
   /** The current chord's arpeggio and where the player is in it. */
   const arpeggio = computed(() => {

@@ -2,7 +2,7 @@
 // widening the window, and each key's lowest tone on this instrument.
 import { computed, onBeforeUnmount, watch } from 'vue'
 import type { CellMark } from '../../components/fretboard/fretboard-types'
-import { toUnicode } from '../../theory'
+import { pitchName, toUnicode } from '../../theory'
 import { LOCATE_ANSWERS } from '../engine/heard-pitch'
 import type { PickedCell } from '../engine/locate'
 import { currentPickMarks } from '../engine/locate-marks'
@@ -16,6 +16,8 @@ import { useCycleWindow } from './useCycleWindow'
 import { useWindowPicker } from './useWindowPicker'
 
 export function useWindowCycle() {
+  const inWindow = (pitch: number): boolean =>
+    pitch >= drill.settings.value.low && pitch <= drill.settings.value.high
   const drill = useDrill<'cycle', CycleQuestion, PickedCell>(cycleDrill, {
     ...LOCATE_ANSWERS,
     grader: ({ neck }) => cycleGrader(neck),
@@ -32,7 +34,18 @@ export function useWindowCycle() {
       if (settings.click) drill.sound.startClick(settings.tempo)
     },
     autoAdvanceMs: 400,
+    play: {
+      passOf: (question) => String(question.keyIndex),
+      // played: the key's pitch class in order, in any octave inside the window
+      matches: (question, heard): boolean =>
+        heard.pitch % 12 === question.expectedPitch % 12 && inWindow(heard.pitch),
+      wrongWhy: (question, heard) =>
+        heard.pitch % 12 === question.expectedPitch % 12
+          ? `${toUnicode(pitchName(heard.pitch))} is outside the window; stay between its ends.`
+          : null,
+    },
   })
+
   const { neck, settings, session, sound } = drill
   const cycleWindow = useCycleWindow(settings, neck)
   const picker = useWindowPicker(settings)
@@ -53,6 +66,7 @@ export function useWindowCycle() {
           ...currentPickMarks(session, questionKeyed(neck.value, session.current.value), (q) =>
             toUnicode(q.name),
           ),
+          ...drill.take.marks.value,
         ]
       : [...cycleWindow.shading.value, ...picker.marks.value],
   )

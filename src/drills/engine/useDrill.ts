@@ -18,6 +18,8 @@ import { useDrillSettings } from './useDrillSettings'
 import { silentSound, useDrillSound } from './useDrillSound'
 import { useFocus } from './useFocus'
 import { usePlanItem } from './usePlanItem'
+import type { PlayRules } from './played-grade'
+import { usePlayClock, usePlayTake, type PlayClock, type PlayTake } from './usePlayTake'
 
 /**
  * How answers come in: 'tap' on the board (or the keyboard and note buttons), or 'play' on the
@@ -68,6 +70,8 @@ export interface DrillSetup<D extends DrillId, Q extends DrillQuestion, A, R = v
   problem?(context: DrillContext<D>): string | null
   onQuestion?(question: Q): void
   afterStart?(context: DrillContext<D>): void
+  /** How notes played on the instrument are heard (default: one note per question, exact pitch). */
+  play?: PlayRules<Q>
 }
 
 export function useDrill<D extends DrillId, Q extends DrillQuestion, A, R = void>(
@@ -85,8 +89,20 @@ export function useDrill<D extends DrillId, Q extends DrillQuestion, A, R = void
   })
   const startProblem = ref<string | null>(null)
   const problem = computed(() => startProblem.value ?? setup.problem?.(context()) ?? null)
+  const clock = usePlayClock(definition.id)
+  const take = usePlayTake<Q, A>(
+    {
+      session,
+      neck,
+      rules: setup.play ?? {},
+      heard: (pitch, question, picks) => setup.heard(pitch, question, { ...context(), picks }),
+      settingsLabel: () => definition.describe(settings.value as never).slice(0, 64),
+    },
+    clock,
+  )
   const parts = {
     ...{ definition, neck, settled, instrumentError, plan, settings, session, problem },
+    ...{ clock, take },
     focus: useFocus(),
     sound: definition.sound ? useDrillSound() : silentSound(),
     frame: useFrameProps(session, neck),
@@ -103,12 +119,9 @@ export function useDrill<D extends DrillId, Q extends DrillQuestion, A, R = void
     /** An answer given on the page (a typed or picked note name); `at` is when it was given. */
     answer: (given: A, at?: number) => answerWith(parts, given, at),
     pick: (cell: PickedCell) => answerWith(parts, setup.picked?.(cell) ?? null, undefined, cell),
-    answerPitch: (pitch: number, timing: NoteTiming) => {
-      const question = session.current.value
-      const picks = session.state.value?.picks ?? []
-      const given = question ? setup.heard(pitch, question, { ...context(), picks }) : null
-      answerWith(parts, given, timing.onsetMs)
-    },
+    /** A note played on the instrument: graded as the drill's play rules say (alone or in a take). */
+    answerPitch: (pitch: number, timing: NoteTiming) =>
+      take.hear({ pitch, onsetMs: timing.onsetMs }),
     promptCell: (question: Q) => setup.promptCell?.(question) ?? null,
   }
 }
@@ -138,6 +151,7 @@ type Parts<D extends DrillId, Q extends DrillQuestion, A> = {
   sound: ReturnType<typeof useDrillSound>
   starting: Ref<boolean>
   startProblem: Ref<string | null>
+  take: { reset(): void }
 }
 
 /** Grades an answer of the current question (a pick is sounded, a played note is not). */
@@ -160,6 +174,7 @@ async function begin<D extends DrillId, Q extends DrillQuestion, A, R>(
   request?: R,
 ) {
   parts.startProblem.value = null
+  parts.take.reset()
   if (setup.problem?.(context())) return
   parts.starting.value = true
   try {
@@ -197,6 +212,9 @@ export interface DrillPageModel<Q extends DrillQuestion = DrillQuestion> {
   problem: ComputedRef<string | null>
   canStart: ComputedRef<boolean>
   inputMode: Ref<InputMode>
+  clock: PlayClock
+  take: PlayTake
+  answerPitch(pitch: number, timing: NoteTiming): void
   begin(): Promise<void>
   pick(cell: PickedCell): void
   promptCell(question: Q): Position | null

@@ -80,9 +80,10 @@ function start<Q extends DrillQuestion, A>(
   }, CLOCK_MS)
 }
 
-function goNext<Q extends DrillQuestion, A>(core: Core<Q, A>) {
+function goNext<Q extends DrillQuestion, A>(core: Core<Q, A>, at?: number) {
   clearTimeout(core.timers.advance)
-  if (core.state.value) update(core, engine.nextQuestion(core.state.value, performance.now()))
+  const now = Math.min(at ?? Infinity, performance.now())
+  if (core.state.value) update(core, engine.nextQuestion(core.state.value, now))
 }
 
 /** Grades the current question with a grade from the grader; `at` is when the answer was given. */
@@ -173,7 +174,13 @@ export function useDrillSession<Q extends DrillQuestion, A>(options: DrillSessio
       applyGrade(core, (g, q, picks) => g.grade(q, given, picks), at),
     /** "Show me": a miss that reveals the answer. */
     reveal: () => applyGrade(core, (g, q, picks) => g.reveal(q, picks)),
-    next: () => goNext(core),
+    /** On to the next question; `at` (a played take's note onset) is when it was shown. */
+    next: (at?: number) => goNext(core, at),
+    /** Grades with a grade made by the caller from the grader (a played take's note). */
+    settle: (
+      gradeOf: (grader: DrillGrader<Q, A>, question: Q, picks: readonly Grade[]) => Grade,
+      at?: number,
+    ) => applyGrade(core, gradeOf, at),
     /** The student ends the session early (answers so far are kept). */
     stop: () => finish('stopped'),
     retryMisses: () => retryMisses(core),

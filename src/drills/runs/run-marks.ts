@@ -37,7 +37,8 @@ export function fingeringMarks(fingering: Fingering | null, names: readonly stri
   }))
 }
 
-const passOf = (question: RunsQuestion) => question.key.split(':')[0]
+/** Which pass (one run up and back down) a question belongs to. */
+export const passOf = (question: RunsQuestion): string => question.key.split(':')[0] ?? ''
 
 /** The notes already played in the current pass, where they were played. */
 export function trailMarks(state: SessionState<RunsQuestion>, question: RunsQuestion): CellMark[] {

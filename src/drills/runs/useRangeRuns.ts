@@ -9,7 +9,7 @@ import { keyed } from '../engine/locate'
 import { currentPickMarks } from '../engine/locate-marks'
 import { useDrill } from '../engine/useDrill'
 import { runsDrill } from './definition'
-import { fingeringMarks, fingerMarks, trailMarks } from './run-marks'
+import { fingeringMarks, fingerMarks, passOf, trailMarks } from './run-marks'
 import { runsGrader } from './runs-grader'
 import { fingeringId, runsQuestions, type RunsQuestion } from './runs-generator'
 import { useRunChoice } from './useRunChoice'
@@ -30,6 +30,7 @@ export function useRangeRuns() {
     },
     promptCell: (question) => question.cell,
     autoAdvanceMs: 250,
+    play: { passOf }, // played: the whole run up and back down, each note at its exact pitch
   })
   const { neck, settings, session, sound, focus } = drill
   const choice = useRunChoice(neck, settings)
@@ -58,16 +59,18 @@ export function useRangeRuns() {
       ? fingerMarks(fingering)
       : fingeringMarks(fingering, choice.overview.value.value?.names ?? [])
   })
+  // the board: the fingering, this pass's trail and picks, and the last take played on the instrument
   const marks = computed<CellMark[]>(() => {
     const question = session.current.value
     const state = session.state.value
-    if (!question || !state) return shown.value
+    const played = drill.take.marks.value
+    if (!question || !state) return [...shown.value, ...played]
     const picks = currentPickMarks(session, keyed(neck.value, settings.value), (q) =>
       toUnicode(q.name),
     )
     const trail = trailMarks(state, question)
-    if (!settings.value.showFingering) return [...trail, ...picks]
-    return [...shown.value, ...trail, { ...question.cell, kind: 'target' }, ...picks]
+    if (!settings.value.showFingering) return [...trail, ...picks, ...played]
+    return [...shown.value, ...trail, { ...question.cell, kind: 'target' }, ...picks, ...played]
   })
   return { ...drill, ...choice, runCells, playRun, marks, boardLabels }
 }

@@ -13,6 +13,11 @@ import { newSeed, scatterQuestions, type ScatterQuestion } from './scatter-gener
 
 export const SEQUENCE_BPM = 90
 
+const octaveOf = (pitch: number) => Math.floor(pitch / 12)
+/** The free variant: the asked pitch class, in another octave than the note played before it. */
+export const inAnotherOctave = (asked: number, heard: number, previous: number | null) =>
+  heard % 12 === asked % 12 && (previous === null || octaveOf(previous) !== octaveOf(heard))
+
 // Settings made for another instrument may reach past this one's range: keep the window inside it.
 function fitted(chosen: ScatterSettings, { low, high }: PitchWindow): ScatterSettings {
   const clip = (pitch: number | null) =>
@@ -22,6 +27,8 @@ function fitted(chosen: ScatterSettings, { low, high }: PitchWindow): ScatterSet
 
 export function useOctaveScatter() {
   const seed = ref<number | null>(null)
+  /** Played freely: the scale in order, every note in another octave than the one before. */
+  const freeOctaves = ref(false)
   /** A session starts with a new seed, or, given one, replays that session note for note. */
   const drill = useDrill<'scatter', ScatterQuestion, PickedCell, number>(scatterDrill, {
     ...LOCATE_ANSWERS,
@@ -34,6 +41,17 @@ export function useOctaveScatter() {
       return { questions, remember: { ...chosen, seed: null } }
     },
     autoAdvanceMs: 500,
+    play: {
+      passOf: (question) => String(question.sequence),
+      matches: (question, heard, previous) =>
+        freeOctaves.value
+          ? inAnotherOctave(question.expectedPitch, heard.pitch, previous?.pitch ?? null)
+          : heard.pitch === question.expectedPitch,
+      wrongWhy: (question, heard) =>
+        freeOctaves.value && heard.pitch % 12 === question.expectedPitch % 12
+          ? 'The same octave as the note before: move each note to another octave.'
+          : null,
+    },
   })
   const { neck, settings, session, sound, focus } = drill
   const range = computed(() => instrumentRange(neck.value.tuning, neck.value.frets))
@@ -54,8 +72,9 @@ export function useOctaveScatter() {
       sequence.value.map((q) => q.expectedPitch),
       SEQUENCE_BPM,
     )
-  const marks = computed(() =>
-    currentPickMarks(session, keyed(neck.value, settings.value), (q) => toUnicode(q.name)),
-  )
-  return { ...drill, range, seed, sequence, playSequence, marks }
+  const marks = computed(() => [
+    ...currentPickMarks(session, keyed(neck.value, settings.value), (q) => toUnicode(q.name)),
+    ...drill.take.marks.value,
+  ])
+  return { ...drill, range, seed, freeOctaves, sequence, playSequence, marks }
 }
