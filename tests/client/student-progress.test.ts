@@ -172,13 +172,13 @@ describe('StudentProgress', () => {
     expect(wrapper.get('[data-testid="progress-updating"]').text()).toContain(
       'Updating — 3 answers not counted yet',
     )
-    expect(fetch).toHaveBeenCalledTimes(4)
+    expect(fetch).toHaveBeenCalledTimes(5) // summary, timeline, positions, notes, tempos
 
     stubApi(BODIES) // counted now: no pending field
     await vi.advanceTimersByTimeAsync(PENDING_REFRESH_MS)
     await flushPromises()
     expect(wrapper.find('[data-testid="progress-updating"]').exists()).toBe(false)
     await vi.advanceTimersByTimeAsync(PENDING_REFRESH_MS * 3)
-    expect(vi.mocked(globalThis.fetch)).toHaveBeenCalledTimes(4) // no more loads once counted
+    expect(vi.mocked(globalThis.fetch)).toHaveBeenCalledTimes(5) // no more loads once counted
   })
 })
