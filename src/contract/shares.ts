@@ -20,6 +20,8 @@ export const SharedInstrumentSchema = z.object({
 })
 export type SharedInstrument = z.infer<typeof SharedInstrumentSchema>
 
+type ShareableInput = { drill: (typeof SHAREABLE_DRILLS)[number]; settings: unknown }
+
 /** POST /api/shares: what makes the exercise again (a scatter's seed is in its settings). */
 export const ShareCreateSchema = z.object({
   // The drill is checked first, so an unshareable drill is named rather than its settings.
@@ -28,7 +30,7 @@ export const ShareCreateSchema = z.object({
       drill: z.enum(SHAREABLE_DRILLS, { error: 'This drill cannot be shared yet.' }),
       settings: z.unknown(),
     })
-    .pipe(DrillPresetSchema),
+    .pipe(DrillPresetSchema as unknown as z.ZodType<DrillPreset, ShareableInput>),
   /** Range Runs: the fingering played, "<first string>:<notes per string>" ("0:2-3-3-3"). */
   fingering: z
     .string()
