@@ -91,6 +91,12 @@ describe('Range Runs on paper', () => {
     expect(paper.share(settings as never, questions, false).fingering).toBe(id)
   })
 
+  it('shows the TAB during a session only when the board shows the fingering too', () => {
+    expect(paper.tabWhilePlaying(settings as never)).toBe(true)
+    expect(paper.tabWhilePlaying({ ...settings, showFingering: false } as never)).toBe(false)
+    expect(paperOf('scatter').tabWhilePlaying(settings as never)).toBe(false)
+  })
+
   it('asks for the run sheet of the same region', () => {
     const query = RunsQuerySchema.parse(paper.sheet(settings as never, BASS, []).params)
     expect(query).toMatchObject({ tonic: 'G', lowFret: 2, highFret: 5, frets: 20 })

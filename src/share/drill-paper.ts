@@ -39,6 +39,8 @@ export interface DrillPaper<D extends DrillId, Q extends DrillQuestion> extends 
   /** Settings and fingering that make the shown questions again (`whole`: the whole session). */
   share(settings: DrillSettings[D], shown: readonly Q[], whole: boolean): SharedChoice<D>
   title(settings: DrillSettings[D], shown: readonly Q[]): string
+  /** Whether the TAB may show while a session runs (not when the places are what is asked). */
+  tabWhilePlaying(settings: DrillSettings[D]): boolean
   sheet(settings: DrillSettings[D], neck: PaperNeck, shown: readonly Q[]): SheetRequest
 }
 
@@ -68,6 +70,7 @@ const scatterPaper: DrillPaper<'scatter', ScatterQuestion> = {
   questions: (settings, neck, choice) =>
     scatterQuestions(neck, settings, settings.seed ?? choice.seed),
   segment: group,
+  tabWhilePlaying: () => false,
   share: (settings, shown, whole) => ({
     settings: {
       ...settings,
@@ -111,6 +114,7 @@ const runsPaper: DrillPaper<'runs', RunsQuestion> = {
     return passQuestions(overview, fingering, settings, 0)
   },
   segment: group,
+  tabWhilePlaying: (settings) => settings.showFingering,
   share: (settings, shown) => ({
     settings: { ...settings, questionCount: null },
     fingering: shown[0]?.pattern ?? null,
@@ -140,6 +144,7 @@ const cyclePaper: DrillPaper<'cycle', CycleQuestion> = {
     return cycleQuestions(plan.keys, settings.scale, settings.questionCount)
   },
   segment: (questions) => questions,
+  tabWhilePlaying: () => false,
   share: (settings) => ({ settings, fingering: null }),
   title: (settings) =>
     `Window Cycle, ${scaleLabel(settings.scale)} in ${settings.cycle}, window ${pitchName(settings.low)}–${pitchName(settings.high)}`,

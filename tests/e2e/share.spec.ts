@@ -44,7 +44,12 @@ describe('Notation in a drill and shared exercises', () => {
     const asked = await answerAll(page, async (q) => {
       await expect.poll(() => currentNote(page)).toBe(q.index)
       followed.push(await currentNote(page))
-      if (q.index === 2) await screenshot(page, 'share-scatter-session-laptop')
+      if (q.index === 2) {
+        // Scatter asks where each note is: the TAB waits for the summary, the staff alone is drawn.
+        expect(await notation.locator('.note-2').count()).toBe(1)
+        await page.getByTestId('tab-after-session').waitFor()
+        await screenshot(page, 'share-scatter-session-laptop')
+      }
       await findPitch(page, instrument)(q)
     })
     expect(followed).toEqual(asked.map((q) => q.index))
@@ -53,6 +58,7 @@ describe('Notation in a drill and shared exercises', () => {
     await expect
       .poll(() => page.getByTestId('paper-title').textContent())
       .toMatch(/octave scatter, seed/)
+    await expect.poll(() => notation.locator('.note-0').count()).toBe(2) // staff and TAB
     const xml = await downloaded(page, 'export-musicxml')
     expect(xml.name).toMatch(/octave-scatter-seed-\d+\.musicxml$/)
     const [standard, tab] = readParts(xml.bytes.toString('utf8'))
