@@ -55,6 +55,11 @@ describe('Octave Scatter on paper', () => {
     )
   })
 
+  it('calls the setup preview a sample unless the settings fix the seed', () => {
+    expect(paper.previewNote?.(settings as never)).toMatch(/sample/)
+    expect(paper.previewNote?.({ ...settings, seed: 5 } as never)).toBeNull()
+  })
+
   it('asks for the worksheet of the shown sequences with their first seed', () => {
     const sheet = paper.sheet(settings as never, BASS, questions)
     const query = ScatterQuerySchema.parse(sheet.params)

@@ -39,6 +39,8 @@ export interface DrillPaper<D extends DrillId, Q extends DrillQuestion> extends 
   /** Settings and fingering that make the shown questions again (`whole`: the whole session). */
   share(settings: DrillSettings[D], shown: readonly Q[], whole: boolean): SharedChoice<D>
   title(settings: DrillSettings[D], shown: readonly Q[]): string
+  /** A word under the preview before a session, when it is only a sample of what a session plays. */
+  previewNote?(settings: DrillSettings[D]): string | null
   /** Whether the TAB may show while a session runs (not when the places are what is asked). */
   tabWhilePlaying(settings: DrillSettings[D]): boolean
   sheet(settings: DrillSettings[D], neck: PaperNeck, shown: readonly Q[]): SheetRequest
@@ -70,6 +72,10 @@ const scatterPaper: DrillPaper<'scatter', ScatterQuestion> = {
   questions: (settings, neck, choice) =>
     scatterQuestions(neck, settings, settings.seed ?? choice.seed),
   segment: group,
+  previewNote: (settings) =>
+    settings.seed === null
+      ? 'A sample sequence: every session draws its own. The PDF and a share link keep this one.'
+      : null,
   tabWhilePlaying: () => false,
   share: (settings, shown, whole) => ({
     settings: {

@@ -80,6 +80,11 @@ export function useDrillPaper(drill: DrillPageModel) {
   return {
     available: paper !== null,
     showTab,
+    previewNote: computed(() =>
+      drill.session.status.value === 'ready'
+        ? (paper?.previewNote?.(settings.value) ?? null)
+        : null,
+    ),
     exercise,
     currentIndex: computed(() => shown.value.current),
     problem: computed(() => shown.value.error),
