@@ -25,6 +25,7 @@ import { mountRoster } from './roster/roster-routes'
 import { mountStudios } from './studios/studios-routes'
 import { lessonRoutes } from './lessons/lessons-routes'
 import { worksheetRoutes } from './worksheets/worksheets-routes'
+import { shareRoutes } from './shares/shares-routes'
 
 // Same-origin only; blob: for recorded audio, audio worklets and exported board images.
 const CSP_DIRECTIVES = {
@@ -56,6 +57,7 @@ function apiRouter(ctx: AppContext) {
   api.use('/progress', progressRoutes(ctx))
   api.use('/focus', focusRoutes(ctx))
   api.use('/worksheets', worksheetRoutes(ctx))
+  api.use('/shares', shareRoutes(ctx))
   api.use(apiNotFound)
   return api
 }

@@ -43,6 +43,12 @@ export const routes: RouteRecordRaw[] = [
     () => import('../views/ResetPasswordView.vue'),
     'Choose a new password',
   ),
+  open(
+    '/shared/:token',
+    'shared',
+    () => import('../share/SharedExerciseView.vue'),
+    'Shared exercise',
+  ),
   signedIn('/practice', 'practice', () => import('../views/PracticeView.vue'), 'Practice'),
   ...DRILL_LIST.map((drill) =>
     signedIn(drill.route, drillRouteName(drill.id), drill.page, drill.name),

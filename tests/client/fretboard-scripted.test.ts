@@ -1,8 +1,15 @@
 // Scripted SVG on a drawn board: the run marker (animateRun) and the exported image (boardSvgMarkup).
 import { mount } from '@vue/test-utils'
+import { readFileSync } from 'node:fs'
+import path from 'node:path'
 import { afterEach, describe, expect, it, vi } from 'vitest'
 import { animateRun } from '../../src/components/fretboard/animate-run'
-import { boardSvgMarkup, exportBoardImage } from '../../src/components/fretboard/board-export'
+import {
+  ACCIDENTAL_FAMILY,
+  boardSvgMarkup,
+  exportBoardImage,
+  withAccidentalFont,
+} from '../../src/components/fretboard/board-export'
 import FretboardBoard from '../../src/components/fretboard/FretboardBoard.vue'
 
 const BASS_4 = [28, 33, 38, 43] // E1 A1 D2 G2
@@ -121,5 +128,41 @@ describe('board export', () => {
     const blob = await exportBoardImage(svg, { format: 'svg' })
     expect(blob.type).toBe('image/svg+xml')
     expect(await blob.text()).toContain('<svg')
+  })
+
+  it('names the accidental font after the text font in every copied font list', () => {
+    expect(withAccidentalFont('fill:red;font-family:Roboto, sans-serif;font-size:11px')).toBe(
+      `fill:red;font-family:Roboto, "${ACCIDENTAL_FAMILY}", sans-serif;font-size:11px`,
+    )
+    const already = `font-family:Roboto, "${ACCIDENTAL_FAMILY}", sans-serif`
+    expect(withAccidentalFont(already)).toBe(already)
+    expect(withAccidentalFont('fill:red')).toBe('fill:red')
+  })
+
+  it('embeds the shipped ♯/♭ font (and Roboto) in the exported SVG, so a picture draws F♯ without a system font', async () => {
+    // the fonts are fetched from our own origin; here from the files in the repository
+    const fetched: string[] = []
+    vi.stubGlobal('fetch', async (url: string) => {
+      fetched.push(url)
+      const bytes = readFileSync(path.join(process.cwd(), url.split('?')[0]!))
+      return { blob: async () => new Blob([bytes]) } // the page's own Blob, as FileReader reads it
+    })
+    try {
+      const { svg } = drawnBoard()
+      const markup = await (await exportBoardImage(svg, { format: 'svg' })).text()
+
+      const style = new DOMParser()
+        .parseFromString(markup, 'image/svg+xml')
+        .querySelector('style')?.textContent
+      expect(fetched.some((url) => url.includes('accidentals-dejavu-sans'))).toBe(true)
+      // ♭ ♮ ♯ are U+266D–U+266F; 𝄪 𝄫 are U+1D12A–U+1D12B (Unicode Musical Symbols)
+      expect(style).toContain(`font-family:'${ACCIDENTAL_FAMILY}'`)
+      expect(style).toContain('unicode-range:U+266D-266F')
+      expect(style).toContain('unicode-range:U+1D12A-1D12B')
+      expect(style?.match(/src:url\(data:font\/woff2;base64,/g)).toHaveLength(4)
+      expect(style).toContain(`text{font-family:Roboto,"${ACCIDENTAL_FAMILY}",sans-serif}`)
+    } finally {
+      vi.unstubAllGlobals()
+    }
   })
 })

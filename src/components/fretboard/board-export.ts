@@ -3,6 +3,8 @@
 import { SVG, type Svg } from '@svgdotjs/svg.js'
 import roboto400 from '@fontsource/roboto/files/roboto-latin-400-normal.woff2?url'
 import roboto700 from '@fontsource/roboto/files/roboto-latin-700-normal.woff2?url'
+import accidentalsDejaVu from '@/assets/fonts/accidentals-dejavu-sans.woff2?url'
+import accidentalsNoto from '@/assets/fonts/accidentals-noto-music.woff2?url'
 
 export interface ExportOptions {
   format: 'svg' | 'png'
@@ -37,7 +39,7 @@ function inlineStyles(source: Element, copy: Element) {
     .filter(([, value]) => value !== '')
     .map(([name, value]) => `${name}:${value}`)
     .join(';')
-  if (style) copy.setAttribute('style', style)
+  if (style) copy.setAttribute('style', withAccidentalFont(style))
   Array.from(source.children).forEach((child, i) => {
     const copied = copy.children[i]
     if (copied) inlineStyles(child, copied)
@@ -49,13 +51,32 @@ function surfaceColour(svgElement: SVGSVGElement): string {
   return value ? `rgb(${value})` : '#ffffff'
 }
 
-// An image drawn from SVG cannot reach the page's fonts: the board's two weights travel inside the
-// file (600 on the board resolves to 700, as on the page). Fetched from our own origin, once.
-const FONT_FACES: [weight: number, url: string][] = [
-  [400, roboto400],
-  [700, roboto700],
+// An image drawn from SVG cannot reach the page's fonts: the board's two weights and the ♯ ♭ ♮ 𝄪 𝄫
+// glyphs (Roboto has none; see src/styles/accidentals.css) travel inside the file (600 on the board
+// resolves to 700, as on the page). Fetched from our own origin, once.
+export const ACCIDENTAL_FAMILY = 'Ambitus Accidentals'
+interface EmbeddedFace {
+  family: string
+  weight: number
+  url: string
+  unicodeRange?: string
+}
+const FONT_FACES: EmbeddedFace[] = [
+  { family: 'Roboto', weight: 400, url: roboto400 },
+  { family: 'Roboto', weight: 700, url: roboto700 },
+  { family: ACCIDENTAL_FAMILY, weight: 400, url: accidentalsDejaVu, unicodeRange: 'U+266D-266F' },
+  { family: ACCIDENTAL_FAMILY, weight: 400, url: accidentalsNoto, unicodeRange: 'U+1D12A-1D12B' },
 ]
 let fontCss: Promise<string> | null = null
+
+/** A copied style whose font list names the accidental font after the text font, as the page does. */
+export function withAccidentalFont(style: string): string {
+  return style.replace(/font-family:([^;]*)/, (rule, families: string) =>
+    families.includes(ACCIDENTAL_FAMILY)
+      ? rule
+      : `font-family:${families.replace(/,?\s*(sans-serif|serif)\s*$/, '')}, "${ACCIDENTAL_FAMILY}", sans-serif`,
+  )
+}
 
 async function dataUrl(url: string): Promise<string> {
   const blob = await (await fetch(url)).blob()
@@ -67,15 +88,15 @@ async function dataUrl(url: string): Promise<string> {
   })
 }
 
-/** @font-face rules for Roboto with the fonts inlined ('' when they cannot be read: system font). */
+const faceRule = async (face: EmbeddedFace) =>
+  `@font-face{font-family:'${face.family}';font-style:normal;font-weight:${face.weight};` +
+  (face.unicodeRange ? `unicode-range:${face.unicodeRange};` : '') +
+  `src:url(${await dataUrl(face.url)}) format('woff2')}`
+
+/** @font-face rules for Roboto and the accidentals, fonts inlined ('' when unreadable: system font). */
 export function embeddedFontCss(): Promise<string> {
-  fontCss ??= Promise.all(
-    FONT_FACES.map(
-      async ([weight, url]) =>
-        `@font-face{font-family:Roboto;font-style:normal;font-weight:${weight};src:url(${await dataUrl(url)}) format('woff2')}`,
-    ),
-  )
-    .then((rules) => rules.join(''))
+  fontCss ??= Promise.all(FONT_FACES.map(faceRule))
+    .then((rules) => rules.join('') + `text{font-family:Roboto,"${ACCIDENTAL_FAMILY}",sans-serif}`)
     .catch(() => {
       fontCss = null
       return ''
