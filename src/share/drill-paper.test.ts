@@ -69,18 +69,23 @@ describe('Octave Scatter on paper', () => {
 })
 
 describe('Range Runs on paper', () => {
-  const settings = RunsSettingsSchema.parse({ tonic: 'G', scale: 'major', lowFret: 2, highFret: 5 })
+  const settings = RunsSettingsSchema.parse({ tonic: 'G', scale: 'major', lowFret: 5, highFret: 8 })
   const paper = paperOf('runs')
-  const run = rangeRun({ tuning: BASS.tuning, lowFret: 2, highFret: 5, tonic: 'G', scale: 'major' })
+  const run = rangeRun({ tuning: BASS.tuning, lowFret: 5, highFret: 8, tonic: 'G', scale: 'major' })
   const fingerings = fingeringsOf({
     tuning: BASS.tuning,
     frets: BASS.frets,
     run,
-    maxPerString: 4,
-    handSpan: 4,
+    maxPerString: settings.maxPerString,
+    // the drill's hand position and its allowed shifts, fingered by its hand system
+    lowFret: 5,
+    highFret: 8,
+    shifts: settings.shifts,
+    handSystem: settings.handSystem,
   })
 
   it('plays the chosen fingering up and back down, each note where the fingering puts it', () => {
+    expect(fingerings.length).toBeGreaterThan(1) // so the choice matters
     const chosen = fingerings[1]!
     const id = `${chosen.positions[0]!.string}:${chosen.pattern}`
     const questions = paper.questions(settings as never, BASS, { fingering: id, seed: 0 })
@@ -104,7 +109,7 @@ describe('Range Runs on paper', () => {
 
   it('asks for the run sheet of the same region', () => {
     const query = RunsQuerySchema.parse(paper.sheet(settings as never, BASS, []).params)
-    expect(query).toMatchObject({ tonic: 'G', lowFret: 2, highFret: 5, frets: 20 })
+    expect(query).toMatchObject({ tonic: 'G', lowFret: 5, highFret: 8, frets: 20 })
   })
 })
 
