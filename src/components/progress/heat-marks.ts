@@ -47,10 +47,16 @@ export function heatMarks(
     )
 }
 
-/** The places most worth practising: lowest recent accuracy, then slowest (at least 3 answers). */
+/** Fewer recent answers than this, and a place's figures are told as tentative. */
+export const FEW_ANSWERS = 3
+
+/**
+ * The places most worth practising: lowest recent accuracy, then slowest. Places answered only once
+ * or twice are listed too (the list says so); places with every recent answer right never are.
+ */
 export function weakestPlaces(positions: PositionFigures[], count = 5): PositionFigures[] {
   return positions
-    .filter((p) => p.recentAnswers >= 3)
+    .filter((p) => p.recentAnswers > 0 && accuracyOf(p) < 1)
     .sort((a, b) => accuracyOf(a) - accuracyOf(b) || (b.medianMs ?? 0) - (a.medianMs ?? 0))
     .slice(0, count)
 }

@@ -197,6 +197,7 @@ export interface DrillPageModel<Q extends DrillQuestion = DrillQuestion> {
   problem: ComputedRef<string | null>
   canStart: ComputedRef<boolean>
   inputMode: Ref<InputMode>
+  settings: Ref<{ questionCount?: number | null }>
   begin(): Promise<void>
   pick(cell: PickedCell): void
   promptCell(question: Q): Position | null
