@@ -4,9 +4,12 @@ import { scalePitchClasses, scalePitchNames, TONICS } from '../../src/theory'
 import type { KeyFocus, RegionFocus } from '../../src/contract/focus'
 import type { ScoredCandidate } from './focus-types'
 
-/** A place counts as weak when its score is in the top fifth of the board (and above 0.3). */
+/** A place counts as weak when its score is in the top fifth of the practised board (and above 0.3). */
 function weakThreshold(items: readonly ScoredCandidate[]) {
-  const scores = items.map((i) => i.score).sort((a, b) => b - a)
+  const scores = items
+    .filter((i) => i.attempts > 0)
+    .map((i) => i.score)
+    .sort((a, b) => b - a)
   return Math.max(0.3, scores[Math.floor(scores.length / 5)] ?? 0)
 }
 
@@ -29,7 +32,11 @@ const mean = (values: number[]) =>
   values.length ? values.reduce((a, b) => a + b, 0) / values.length : 0
 const round = (x: number) => Math.round(x * 1000) / 1000
 
-function weakReason(weak: number, what: string) {
+// Only answered places can be weak: a place never practised is "not practised yet", not a weak spot.
+function weakReason(places: readonly ScoredCandidate[], threshold: number, what: string) {
+  const practised = places.filter((i) => i.attempts > 0)
+  if (practised.length === 0) return `not practised yet ${what}`
+  const weak = practised.filter((i) => i.score >= threshold).length
   if (weak === 0) return `a balanced review: no weak spots ${what}`
   return `${weak === 1 ? 'one of your weak spots is' : `${weak} of your weak spots are`} ${what}`
 }
@@ -41,12 +48,11 @@ export function rankKeys(items: readonly ScoredCandidate[], scale: string, limit
     .map((tonic) => {
       const classes = new Set(scalePitchClasses(tonic, scale))
       const inKey = items.filter((i) => classes.has(i.pitch % 12))
-      const weak = inKey.filter((i) => i.score >= threshold).length
       return {
         tonic,
         scale,
         score: round(mean(inKey.map((i) => i.score))),
-        reason: weakReason(weak, 'in this key'),
+        reason: weakReason(inKey, threshold, 'in this key'),
       }
     })
     .sort((a, b) => b.score - a.score)
@@ -65,12 +71,11 @@ export function rankRegions(
   for (let low = lowFret; low <= Math.max(lowFret, highFret - span + 1); low++) {
     const high = Math.min(highFret, low + span - 1)
     const inside = items.filter((i) => i.fret >= low && i.fret <= high)
-    const weak = inside.filter((i) => i.score >= threshold).length
     regions.push({
       lowFret: low,
       highFret: high,
       score: round(mean(inside.map((i) => i.score))),
-      reason: weakReason(weak, 'in these frets'),
+      reason: weakReason(inside, threshold, 'in these frets'),
     })
   }
   return regions.sort((a, b) => b.score - a.score).slice(0, 5)

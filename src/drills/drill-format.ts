@@ -3,6 +3,7 @@ import {
   noteAt,
   pitchName,
   stringNames,
+  stringNumber,
   toUnicode,
   type AccidentalPreference,
   type Position,
@@ -31,7 +32,8 @@ export function cellName(
   accidentals: AccidentalPreference,
 ): string {
   const name = toUnicode(
-    stringNames(tuning, accidentals)[cell.string] ?? `string ${cell.string + 1}`,
+    stringNames(tuning, accidentals)[cell.string] ??
+      `string ${stringNumber(cell.string, tuning.length)}`,
   )
   return cell.fret === 0 ? `open ${name} string` : `${name} string, fret ${cell.fret}`
 }

@@ -6,8 +6,8 @@ import { aliases, mdi } from 'vuetify/iconsets/mdi-svg'
 const lakewoodLight: ThemeDefinition = {
   dark: false,
   colors: {
-    background: '#F7F3EC',
-    surface: '#FFFFFF',
+    background: '#F5F0E6',
+    surface: '#FFFDF8',
     'surface-variant': '#E9E2D6',
     primary: '#1E4D6B',
     secondary: '#A85A24',
@@ -16,7 +16,11 @@ const lakewoodLight: ThemeDefinition = {
     error: '#B8360F',
     warning: '#8A5A00',
     info: '#3C5A8A',
+    'app-bar': '#173C54',
+    'on-app-bar': '#FFFFFF',
   },
+  // labels and hints in fields stack two opacities: these keep them at WCAG AA contrast
+  variables: { 'medium-emphasis-opacity': 0.74, 'disabled-opacity': 0.5 },
 }
 
 const lakewoodDark: ThemeDefinition = {
@@ -32,7 +36,11 @@ const lakewoodDark: ThemeDefinition = {
     error: '#FF8A65',
     warning: '#E0B050',
     info: '#A7BDE3',
+    // the bar stays dark at night (primary is a light blue there)
+    'app-bar': '#161D24',
+    'on-app-bar': '#E6EEF4',
   },
+  variables: { 'medium-emphasis-opacity': 0.8, 'disabled-opacity': 0.55 },
 }
 
 const storedTheme =

@@ -25,6 +25,7 @@ export {
   assertValidTuning,
   parseTuning,
   stringNames,
+  stringNumber,
 } from './tuning'
 export type { TuningPreset } from './tuning'
 export { noteAt, positionsOf, instrumentRange, positionsInRegion } from './fretboard'

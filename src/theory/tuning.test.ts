@@ -4,6 +4,7 @@ import {
   assertValidTuning,
   parseTuning,
   stringNames,
+  stringNumber,
   TUNING_PRESETS,
   tuningErrors,
   tuningPreset,
@@ -119,5 +120,23 @@ describe('stringNames (common practice names players use)', () => {
       'Bb',
       'high Eb',
     ])
+  })
+})
+
+describe('stringNumber (common practice, no source: string 1 is the highest-pitched string)', () => {
+  it.each([
+    [0, 4, 4], // 4-string bass: low E is string 4
+    [3, 4, 1], // 4-string bass: G is string 1
+    [0, 5, 5], // 5-string bass: low B is string 5
+    [5, 6, 1], // guitar: high E is string 1
+    [1, 6, 5], // guitar: A is string 5
+    [0, 7, 7], // 7-string guitar: low B is string 7
+  ])('index %i of %i strings is string %i', (index, count, number) => {
+    expect(stringNumber(index, count)).toBe(number)
+  })
+
+  it('refuses an index that is not a string of the tuning', () => {
+    expect(() => stringNumber(4, 4)).toThrow(RangeError)
+    expect(() => stringNumber(-1, 4)).toThrow(/no string -1/)
   })
 })

@@ -157,3 +157,18 @@ export function stringNames(
     return index === names.length - 1 ? `high ${name}` : name
   })
 }
+
+/**
+ * The number players give a string: 1 is the highest-pitched string, counting down to the lowest
+ * (common practice in method books and TAB). `index` is the tuning's index (0 = lowest string).
+ * Throws a RangeError when the index is not a string of the tuning.
+ *
+ * @example
+ * stringNumber(0, 4) // 4 (the low E of a 4-string bass)
+ * stringNumber(5, 6) // 1 (the high E of a guitar)
+ */
+export function stringNumber(index: number, stringCount: number): number {
+  if (!Number.isInteger(index) || index < 0 || index >= stringCount)
+    throw new RangeError(`There is no string ${index} on a ${stringCount}-string instrument.`)
+  return stringCount - index
+}

@@ -162,6 +162,30 @@ describe('keys and regions', () => {
     expect(keys[11]!.reason).toBe('a balanced review: no weak spots in this key')
   })
 
+  it('calls keys and regions of a board never practised "not practised yet", not weak spots', () => {
+    const fresh = board.map((p) => ({
+      ...p,
+      attempts: 0,
+      recentCorrect: [],
+      recentMs: [],
+      lastSeenAt: null,
+    }))
+    const keys = rankKeys(scoreAll(fresh, NOW), 'major')
+    expect(new Set(keys.map((k) => k.reason))).toEqual(new Set(['not practised yet in this key']))
+    const regions = rankRegions(scoreAll(fresh, NOW), 0, 12)
+    expect(regions.every((r) => r.reason === 'not practised yet in these frets')).toBe(true)
+  })
+
+  it('counts only answered places as weak spots', () => {
+    // F# (fret 9) weak; every other place never answered: one weak spot in a key with F#.
+    const mixed = board.map((p) =>
+      p.fret === 9 ? p : { ...p, attempts: 0, recentCorrect: [], recentMs: [] },
+    )
+    const keys = rankKeys(scoreAll(mixed, NOW), 'major')
+    expect(keys.find((k) => k.tonic === 'G')!.reason).toBe('one of your weak spots is in this key')
+    expect(keys.find((k) => k.tonic === 'C')!.reason).toBe('not practised yet in this key')
+  })
+
   it('ranks 5-fret hand regions holding the weak frets first', () => {
     // F# on the A string sits at frets 9 (F#2); regions 5–9 … 9–13 hold it.
     const regions = rankRegions(scoreAll(board, NOW), 0, 12)

@@ -11,6 +11,8 @@ export const MIN_CELL = 28
 /** A short span (a few frets) still gets this much neck, so it is not a sliver. */
 export const MIN_FRETTED_WIDTH = 520
 export const SIDE_PAD = 8
+/** Room at the nut side for the string names. */
+export const NAME_GUTTER = 24
 export const TOP_PAD = 10
 /** Room under the neck for fret numbers. */
 export const NUMBER_BAND = 22
@@ -53,6 +55,8 @@ export interface BoardLayout {
   neck: { x: number; y: number; width: number; height: number }
   showsNut: boolean
   nutX: number
+  /** Centre of the string-name gutter at the nut side (mirrored for left hands). */
+  nameX: number
   wires: FretWire[]
   stringY: number[]
   cells: CellBox[]
@@ -124,7 +128,7 @@ export function layoutBoard(spec: BoardSpec): BoardLayout {
   const firstWire = Math.max(spec.fretStart, 1) - 1
   const distances = wireDistances(spec)
   const k = unitsPerMm(distances, firstWire)
-  const origin = SIDE_PAD + (showsNut ? OPEN_WIDTH : 0)
+  const origin = SIDE_PAD + NAME_GUTTER + (showsNut ? OPEN_WIDTH : 0)
   const frettedWidth = ((distances[spec.fretEnd] ?? 0) - (distances[firstWire] ?? 0)) * k
   const width = origin + frettedWidth + SIDE_PAD
   const mirror = (x: number) => (spec.leftHanded ? width - x : x)
@@ -146,6 +150,7 @@ export function layoutBoard(spec: BoardSpec): BoardLayout {
     neck: { x: neckLeft, y: TOP_PAD, width: frettedWidth, height: neckHeight },
     showsNut,
     nutX: mirror(origin),
+    nameX: mirror(SIDE_PAD + NAME_GUTTER / 2),
     wires,
     stringY,
     cells,
@@ -157,7 +162,7 @@ export function layoutBoard(spec: BoardSpec): BoardLayout {
 function fretColumns(spec: BoardSpec, wires: FretWire[], mirror: (x: number) => number) {
   const columns: { fret: number; left: number; right: number }[] = []
   if (spec.fretStart === 0) {
-    const [a, b] = [mirror(SIDE_PAD), mirror(SIDE_PAD + OPEN_WIDTH)]
+    const [a, b] = [mirror(SIDE_PAD + NAME_GUTTER), mirror(SIDE_PAD + NAME_GUTTER + OPEN_WIDTH)]
     columns.push({ fret: 0, left: Math.min(a, b), right: Math.max(a, b) })
   }
   for (let i = 1; i < wires.length; i += 1) {

@@ -5,6 +5,7 @@ import {
   scaleDegreeOf,
   spellInKey,
   stringNames,
+  stringNumber,
   toUnicode,
   type AccidentalPreference,
 } from '@/theory'
@@ -54,7 +55,7 @@ export function stringLabels(tuning: number[], accidentals: AccidentalPreference
   try {
     return stringNames(tuning, accidentals).map((name) => `${toUnicode(name)} string`)
   } catch {
-    return tuning.map((_, index) => `String ${index + 1}`)
+    return tuning.map((_, index) => `String ${stringNumber(index, tuning.length)}`)
   }
 }
 

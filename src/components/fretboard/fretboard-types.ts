@@ -40,6 +40,10 @@ export interface FretboardProps {
   typingAnswers?: boolean
   /** Heat-map colour scale for marks with `heat`. */
   heatScale?: 'accuracy' | 'speed'
+  /** The cell the question asks about (data-asked="true"); kept in view on narrow screens. */
+  asked?: Cell | null
+  /** Take the keyboard back after each question when focus has fallen to the page (drills). */
+  holdFocus?: boolean
 }
 
 export interface FretboardEmits {

@@ -38,13 +38,17 @@ export function draftFromInstrument(instrument: Instrument): InstrumentDraft {
   }
 }
 
+/** The instrument's name a preset suggests: its label without the notes ("5-string bass"). */
+export const presetShortName = (preset: Pick<InstrumentPreset, 'label'>) =>
+  preset.label.replace(/\s*\(.*\)$/, '')
+
 /** A new instrument from a preset, with the usual sound settings. */
 export function draftFromPreset(
   preset: InstrumentPreset,
   base?: Partial<InstrumentDraft>,
 ): InstrumentDraft {
   return {
-    name: base?.name ?? preset.label.replace(/\s*\(.*\)$/, ''),
+    name: base?.name ?? presetShortName(preset),
     presetId: preset.id,
     tuning: [...preset.pitches],
     frets: Math.min(24, preset.frets),

@@ -48,6 +48,9 @@ export function heatMarks(
     )
 }
 
+/** Fewer recent answers than this, and a place's figures are told as tentative. */
+export const FEW_ANSWERS = 3
+
 /** The places most worth practising (the roster's rule): a recent miss, worst first. */
 export const weakestPlaces = (positions: PositionFigures[], count = 5): PositionFigures[] =>
   weakestOf(positions, count)

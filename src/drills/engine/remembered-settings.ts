@@ -16,9 +16,12 @@ export function loadSettings<S extends z.ZodType>(drill: DrillId, schema: S): z.
   }
 }
 
+const LAST_DRILL_KEY = 'ambitus.last-drill'
+
 export function saveSettings(drill: DrillId, settings: unknown): void {
   try {
     globalThis.localStorage?.setItem(storageKey(drill), JSON.stringify(settings))
+    globalThis.localStorage?.setItem(LAST_DRILL_KEY, drill)
   } catch {
     // storage full or blocked: the settings are simply not remembered
   }
@@ -27,4 +30,13 @@ export function saveSettings(drill: DrillId, settings: unknown): void {
 /** A plain, independent copy of settings (they may arrive as reactive proxies, which cannot be cloned). */
 export function copySettings<T>(settings: T): T {
   return JSON.parse(JSON.stringify(settings)) as T
+}
+
+/** The drill this browser last started a session of (for "continue where I left off"), or null. */
+export function lastDrill(): string | null {
+  try {
+    return globalThis.localStorage?.getItem(LAST_DRILL_KEY) ?? null
+  } catch {
+    return null
+  }
 }

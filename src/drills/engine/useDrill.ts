@@ -215,6 +215,7 @@ export interface DrillPageModel<Q extends DrillQuestion = DrillQuestion> {
   clock: PlayClock
   take: PlayTake
   answerPitch(pitch: number, timing: NoteTiming): void
+  settings: Ref<{ questionCount?: number | null }>
   begin(): Promise<void>
   pick(cell: PickedCell): void
   promptCell(question: Q): Position | null

@@ -31,6 +31,7 @@ export function useFocus() {
       drill: request.drill,
       instrument: request.instrumentId,
       n: request.n,
+      ...(request.scale ? { scale: request.scale } : {}),
       ...request.region,
     })
   }

@@ -1,0 +1,107 @@
+// A newcomer on a phone is asked what they play before the first drill, then one tap starts a short
+// first session on that instrument; on a phone every drill keeps the asked cell in view.
+import type { Browser, Page } from 'playwright-core'
+import { afterAll, beforeAll, describe, expect, it } from 'vitest'
+import { launchBrowser, newPage, PHONE, screenshot } from '../helpers/browser'
+import { pitchClassName } from '../../src/theory'
+import { readQuestion, studentOn } from '../helpers/drill-pages'
+
+let browser: Browser
+beforeAll(async () => {
+  browser = await launchBrowser()
+})
+afterAll(async () => {
+  await browser?.close()
+})
+
+/** Whether the element lies inside the board's scroll box horizontally (what the player sees). */
+async function inView(page: Page, selector: string): Promise<boolean> {
+  return page.evaluate((sel) => {
+    const cell = document.querySelector(sel)
+    const box = cell?.closest('.fb-scroll')
+    if (!cell || !box) return false
+    const [c, b] = [cell.getBoundingClientRect(), box.getBoundingClientRect()]
+    return c.left >= b.left - 1 && c.right <= b.right + 1
+  }, selector)
+}
+
+describe('first run', () => {
+  it('asks a newcomer what they play, saves it, and Practise now starts 12 notes on it', async () => {
+    const { page, context } = await newPage(browser, PHONE)
+    await page.goto('/register')
+    await page.getByLabel('Your name').fill('Ash Morrow')
+    await page.getByLabel('E-mail').fill(`ash-${Date.now()}@cedarhollow.test`)
+    await page.getByLabel('Password').fill('long enough passphrase')
+    await page.getByRole('button', { name: 'Create account' }).click()
+    await page.waitForURL('**/practice')
+    await page.getByTestId('first-run').waitFor()
+    expect(await page.getByTestId('practise-now').count()).toBe(0)
+    expect(await page.getByText('Welcome back').count()).toBe(0)
+    await page
+      .getByTestId('first-run-instrument')
+      .getByRole('button', { name: '5-string bass' })
+      .click()
+    await page
+      .getByTestId('first-run-hand')
+      .getByRole('button', { name: /left-handed/ })
+      .click()
+    await screenshot(page, 'first-run-phone')
+    await page.getByTestId('first-run-save').click()
+    await page.getByTestId('practise-now').waitFor()
+
+    const { instruments } = (await (await page.request.get('/api/instruments')).json()) as {
+      instruments: { name: string; presetId: string; handedness: string; tuning: number[] }[]
+    }
+    expect(instruments).toHaveLength(1)
+    // 5-string bass, common practice: B0 E1 A1 D2 G2 = MIDI 23 28 33 38 43
+    expect(instruments[0]).toMatchObject({
+      name: '5-string bass',
+      presetId: 'bass-5',
+      handedness: 'left',
+      tuning: [23, 28, 33, 38, 43],
+    })
+
+    await page.getByTestId('practise-now-start').click()
+    await page.getByTestId('question').waitFor()
+    expect(page.url()).toContain('/practice/hunt')
+    await page
+      .getByTestId('session-progress')
+      .getByText('Question 1 of 12', { exact: true })
+      .waitFor()
+    expect(await page.locator('.fb-string-name').count()).toBe(5)
+    await screenshot(page, 'first-run-session-phone')
+    await context.close()
+  })
+})
+
+describe('the neck on a 390 px phone', () => {
+  it('Neck Recall keeps the asked cell in view question after question', async () => {
+    const { page, context } = await studentOn(browser, PHONE, '/practice/recall')
+    await page.getByTestId('start-session').click()
+    for (let n = 0; n < 4; n++) {
+      const asked = page.locator('[data-asked="true"]')
+      await asked.waitFor()
+      await expect.poll(() => inView(page, '[data-asked="true"]')).toBe(true)
+      if (n === 0) await screenshot(page, 'neck-recall-asked-phone')
+      const { index, pitch } = await readQuestion(page)
+      await page.getByTestId('typed-answer').locator('input').fill(pitchClassName(pitch, 'flat'))
+      await page.keyboard.press('Enter')
+      await page.waitForFunction(
+        (i) =>
+          document.querySelector('[data-testid="question"]')?.getAttribute('data-index') !==
+          String(i),
+        index,
+      )
+    }
+    await context.close()
+  })
+
+  it('Range Runs shows the asked note and its whole position', async () => {
+    const { page, context } = await studentOn(browser, PHONE, '/practice/runs')
+    await page.getByTestId('start-session').click()
+    await page.locator('[data-asked="true"]').waitFor()
+    await expect.poll(() => inView(page, '[data-asked="true"]')).toBe(true)
+    await screenshot(page, 'range-runs-asked-phone')
+    await context.close()
+  })
+})
