@@ -38,6 +38,11 @@ export interface Fixture {
   token: string
   instrumentId: string
   mailId: number
+  lessonId: string
+  lessonToDeleteId: string
+  lessonNoteId: string
+  shareToken: string
+  shareToRevokeToken: string
 }
 
 export const BASS = {
@@ -46,6 +51,23 @@ export const BASS = {
   tuning: [28, 33, 38, 43], // E1 A1 D2 G2
   frets: 20,
   scaleLengthMm: 864,
+}
+
+/** A one-off lesson with the fixture's student, a week ahead in the teacher's zone. */
+export const LESSON_BODY = (f: Pick<Fixture, 'users'>) => ({
+  studentId: f.users.student.id,
+  date: '2030-01-07',
+  time: '17:30',
+  timeZone: 'Europe/Tallinn',
+  durationMinutes: 45,
+  weeks: 1,
+})
+
+// common practice: a 4-string bass is tuned E1 A1 D2 G2 = MIDI 28 33 38 43
+export const SHARE_BODY = {
+  preset: { drill: 'scatter', settings: { tonic: 'A', scale: 'minor', seed: 4711 } },
+  title: 'Matrix scatter',
+  instrument: { name: 'Matrix bass', tuning: [28, 33, 38, 43], frets: 20 },
 }
 
 async function upload(student: Agent, assignmentId: string, itemId: string) {
@@ -90,6 +112,23 @@ async function studios(api: TestApi, people: Awaited<ReturnType<typeof cast>>) {
   return { empty, leavable, removable: removable.user.id, extra: extra.user.id }
 }
 
+/** Two lessons of the teacher with the student (one to delete), a note on the first, two share links. */
+async function lessonsAndShares(people: Awaited<ReturnType<typeof cast>>, f: Fixture) {
+  const { teacher, student } = people
+  const schedule = async () =>
+    (await teacher.agent.post('/api/lessons').send(LESSON_BODY(f))).body.lessons[0].id as string
+  const [lessonId, lessonToDeleteId] = [await schedule(), await schedule()]
+  const noted = await teacher.agent
+    .post(`/api/lessons/${lessonId}/notes`)
+    .send({ body: 'Kept note', shared: false })
+  const share = async () =>
+    (await student.agent.post('/api/shares').send(SHARE_BODY)).body.share.token as string
+  return {
+    ...{ lessonId, lessonToDeleteId, lessonNoteId: noted.body.lesson.notes[0].id as string },
+    ...{ shareToken: await share(), shareToRevokeToken: await share() },
+  }
+}
+
 /** Builds the whole fixture through the API (and the database where no API exists). */
 export async function buildFixture(api: TestApi) {
   const people = await cast(api)
@@ -112,7 +151,7 @@ export async function buildFixture(api: TestApi) {
   const users = Object.fromEntries(
     Object.entries(people).map(([role, agent]) => [role, agent.user]),
   ) as unknown as Fixture['users']
-  const fixture: Fixture = {
+  const fixture = {
     users,
     studioId: teacher.studioId,
     emptyStudioId: rooms.empty,
@@ -132,8 +171,8 @@ export async function buildFixture(api: TestApi) {
     token: previewed.token, // resending rotates kept's token
     instrumentId: instrument.body.instrument.id,
     mailId: kept.mailId,
-  }
-  return fixture
+  } as Fixture
+  return { ...fixture, ...(await lessonsAndShares(people, fixture)) }
 }
 
 /** A fresh session cookie for the role's user (every call gets its own, so sign-outs harm nothing). */

@@ -1,39 +1,22 @@
 // The rows of the route × role matrix: for each route, what one call sends (ids from the fixture)
 // and the status each of the seven callers must get. The fuzz test reuses the paths and bodies.
-import type { Test } from 'supertest'
 import { TEST_PASSWORD, uniqueEmail } from './api'
 import { attemptInput } from './attempt-input'
-import { BASS, freshId, ROLES, type Fixture, type Role } from './matrix-fixture'
+import { BASS, freshId, type Fixture } from './matrix-fixture'
+import { LESSON_ROWS, SHARE_ROWS } from './route-rows-lessons'
+import {
+  all,
+  get,
+  only,
+  send,
+  signedIn,
+  studentData,
+  students,
+  teachers,
+  type Row,
+} from './route-row-kit'
 import { planBody, RECALL_ITEM, wavFile } from './studio'
 
-export type Expected = Record<Role, number>
-/** What one call sends: the path with ids filled in, a JSON body or a multipart form. */
-export interface Send {
-  path: string
-  body?: object
-  form?: (t: Test) => Test
-}
-export type Row = [(f: Fixture) => Send, Expected]
-
-const all = (status: number): Expected =>
-  Object.fromEntries(ROLES.map((r) => [r, status])) as Expected
-const signedIn = (status: number) => ({ ...all(status), anonymous: 401 })
-/** 401 for anonymous, `denied` for everyone else but the ones named. */
-const only = (ok: Partial<Expected>, denied = 403): Expected => ({
-  ...all(denied),
-  anonymous: 401,
-  ...ok,
-})
-const teachers = (ok: number, otherTeacher = 403) => only({ teacher: ok, otherTeacher })
-const students = (ok: number) => only({ student: ok, classmate: ok, outsider: ok })
-/** A student's own data, read by a teacher of theirs or an admin; refused to everyone else. */
-const studentData = only({ student: 200, teacher: 200, admin: 200 })
-
-const get = (p: (f: Fixture) => string) => (f: Fixture) => ({ path: p(f) })
-const send = (p: (f: Fixture) => string, body: (f: Fixture) => object) => (f: Fixture) => ({
-  path: p(f),
-  body: body(f),
-})
 const progress = (what: string, query = '') =>
   get((f) => `/api/progress/${what}?student=${f.users.student.id}${query}`)
 const plan = (f: Fixture) => `/api/plans/${f.planId}`
@@ -41,6 +24,8 @@ const assignment = (f: Fixture) => `/api/assignments/${f.assignmentId}`
 
 // Rows run in this order; within a row the callers who succeed go last, so a delete is refused to
 // everyone else before it succeeds.
+export type { Expected, Row, Send } from './route-row-kit'
+
 export const ROWS: Record<string, Row> = {
   'GET /api/health': [get(() => '/api/health'), all(200)],
   'POST /api/auth/register': [
@@ -137,6 +122,12 @@ export const ROWS: Record<string, Row> = {
   'GET /api/worksheets/cycle.pdf': [get(() => '/api/worksheets/cycle.pdf'), signedIn(200)],
   'GET /api/worksheets/scatter.pdf': [get(() => '/api/worksheets/scatter.pdf'), signedIn(200)],
   'GET /api/worksheets/runs.pdf': [get(() => '/api/worksheets/runs.pdf'), signedIn(200)],
+  'GET /api/worksheets/chords.pdf': [get(() => '/api/worksheets/chords.pdf'), signedIn(200)],
+  'GET /api/progress/chords': [progress('chords'), studentData],
+  'GET /api/progress/tempos': [progress('tempos'), studentData],
+  'GET /api/progress/cycle-position': [progress('cycle-position', '&scale=major'), studentData],
+  ...SHARE_ROWS,
+  ...LESSON_ROWS,
   'GET /api/studio/studios': [get(() => '/api/studio/studios'), teachers(200, 200)],
   'POST /api/studio/studios': [
     send(
