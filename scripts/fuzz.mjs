@@ -1,6 +1,6 @@
 #!/usr/bin/env node
 // npm run test:fuzz: the full hostile-body run (10,000 bodies over every JSON route, or FUZZ_BODIES)
-// against PostgreSQL; npm test runs the same test with 500 so the suite stays a few minutes long.
+// against PostgreSQL; npm test runs the same test with 300 so the suite stays a few minutes long.
 import { run } from './lib/proc.mjs'
 import { ensureDependencies } from './lib/setup.mjs'
 

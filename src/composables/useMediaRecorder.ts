@@ -18,16 +18,21 @@ export async function withDuration(audio: Blob, durationMs: number): Promise<Blo
   }
 }
 
+const recorderSupported = () =>
+  typeof window !== 'undefined' &&
+  'MediaRecorder' in window &&
+  Boolean(navigator.mediaDevices?.getUserMedia)
+
+const extensionOf = (type: string) =>
+  type.includes('mp4') ? 'm4a' : type.includes('ogg') ? 'ogg' : 'webm'
+
 export function useMediaRecorder(
   onRecorded: (audio: Blob, extension: string, durationMs: number) => void,
 ) {
   const isRecording = ref(false)
   const seconds = ref(0)
   const error = ref('')
-  const supported =
-    typeof window !== 'undefined' &&
-    'MediaRecorder' in window &&
-    Boolean(navigator.mediaDevices?.getUserMedia)
+  const supported = recorderSupported()
   let recorder: MediaRecorder | null = null
   let stream: MediaStream | null = null
   let timer: ReturnType<typeof setInterval> | undefined
@@ -59,11 +64,7 @@ export function useMediaRecorder(
       const durationMs = Math.max(1, Math.round(performance.now() - startedAt))
       release()
       const audio = await withDuration(new Blob(chunks, { type }), durationMs)
-      onRecorded(
-        audio,
-        type.includes('mp4') ? 'm4a' : type.includes('ogg') ? 'ogg' : 'webm',
-        durationMs,
-      )
+      onRecorded(audio, extensionOf(type), durationMs)
     }
     recorder.start(1000)
     seconds.value = 0

@@ -7,6 +7,8 @@ import * as plansApi from '../api/plans'
 import { useLoadState } from './load-state'
 
 type Threads = Record<string, assignmentsApi.PlanComment[]>
+/** A take to upload: the audio, its file name, and its length when recorded in the browser. */
+type Take = [audio: Blob, fileName: string, durationMs?: number]
 
 /** The thread as loaded, keeping comments posted while it loaded (the load may answer last). */
 function withPostedMeanwhile(
@@ -60,20 +62,8 @@ export const useAssignmentsStore = defineStore('assignments', () => {
       await assignmentsApi.deleteComment(id, commentId)
       setThread(id, (thread) => thread.filter((c) => c.id !== commentId))
     },
-    async addRecording(
-      id: string,
-      itemId: string,
-      audio: Blob,
-      fileName: string,
-      durationMs?: number,
-    ) {
-      const { recording } = await assignmentsApi.uploadRecording(
-        id,
-        itemId,
-        audio,
-        fileName,
-        durationMs,
-      )
+    async addRecording(id: string, itemId: string, ...take: Take) {
+      const { recording } = await assignmentsApi.uploadRecording(id, itemId, ...take)
       updateItem(itemId, (item) => ({ ...item, recordings: [recording, ...item.recordings] }))
     },
     async deleteRecording(id: string, itemId: string, recordingId: string) {

@@ -108,7 +108,7 @@ describe('instruments', () => {
     await page.getByText('SVG drawing').click()
     const svgText = readFileSync((await (await svgDownload).path())!, 'utf8')
     expect(svgText).toMatch(
-      /@font-face\{font-family:Roboto;[^}]*font-weight:700;src:url\(data:font\/woff2;base64,d09GMg/,
+      /@font-face\{font-family:'Roboto';[^}]*font-weight:700;src:url\(data:font\/woff2;base64,d09GMg/,
     )
 
     await page.getByRole('button', { name: `Use ${created.name} for practice` }).click()

@@ -47,7 +47,9 @@ describe('progress page', () => {
     )
     const firstLabel = await heatCells(page).first().getAttribute('aria-label')
     expect(firstLabel).toMatch(/string, fret \d+, \d+%/)
-    expect(await page.getByTestId('stat-streak').textContent()).toMatch(/Streak\s*\d+ days?/)
+    expect(await page.getByTestId('stat-streak').textContent()).toMatch(
+      /Practice days in a row\s*\d+ days?/,
+    )
     expect(await page.getByTestId('stat-answers').textContent()).toMatch(/Answers\s*[1-9]\d*/)
     expect(await page.getByTestId('note-bars').locator('li').count()).toBe(12)
     expect(await page.getByTestId('weakest-places').locator('li').count()).toBeGreaterThan(0)

@@ -12,12 +12,28 @@ import { cycleGrader, questionKeyed } from './cycle-grader'
 import { cycleOptions, cycleSession, positionAfter, type CycleQuestion } from './cycle-generator'
 import { useCycleStop } from './useCycleStop'
 import { cycleDrill } from './definition'
+import type { PlayRules } from '../engine/played-grade'
 import { useCycleWindow } from './useCycleWindow'
 import { useWindowPicker } from './useWindowPicker'
 
+/** Played: each key's pitch classes in order, in any octave inside the window. */
+function playRules(window: () => { low: number; high: number }): PlayRules<CycleQuestion> {
+  const inWindow = (pitch: number) => pitch >= window().low && pitch <= window().high
+  const samePitchClass = (question: CycleQuestion, pitch: number) =>
+    pitch % 12 === question.expectedPitch % 12
+  return {
+    passOf: (question: CycleQuestion) => String(question.keyIndex),
+    matches: (question: CycleQuestion, heard: { pitch: number }): boolean =>
+      samePitchClass(question, heard.pitch) && inWindow(heard.pitch),
+    wrongWhy: (question: CycleQuestion, heard: { pitch: number }) =>
+      samePitchClass(question, heard.pitch)
+        ? `${toUnicode(pitchName(heard.pitch))} is outside the window; stay between its ends.`
+        : null,
+  }
+}
+
 export function useWindowCycle() {
-  const inWindow = (pitch: number): boolean =>
-    pitch >= drill.settings.value.low && pitch <= drill.settings.value.high
+  const windowOf = (): { low: number; high: number } => drill.settings.value
   const drill = useDrill<'cycle', CycleQuestion, PickedCell>(cycleDrill, {
     ...LOCATE_ANSWERS,
     grader: ({ neck }) => cycleGrader(neck),
@@ -34,16 +50,7 @@ export function useWindowCycle() {
       if (settings.click) drill.sound.startClick(settings.tempo)
     },
     autoAdvanceMs: 400,
-    play: {
-      passOf: (question) => String(question.keyIndex),
-      // played: the key's pitch class in order, in any octave inside the window
-      matches: (question, heard): boolean =>
-        heard.pitch % 12 === question.expectedPitch % 12 && inWindow(heard.pitch),
-      wrongWhy: (question, heard) =>
-        heard.pitch % 12 === question.expectedPitch % 12
-          ? `${toUnicode(pitchName(heard.pitch))} is outside the window; stay between its ends.`
-          : null,
-    },
+    play: playRules(windowOf),
   })
 
   const { neck, settings, session, sound } = drill
