@@ -79,6 +79,8 @@ export function withAccidentalFont(style: string): string {
 }
 
 async function dataUrl(url: string): Promise<string> {
+  // Small fonts arrive inlined by the build; fetching a data: URL is refused by our CSP (connect-src)
+  if (url.startsWith('data:')) return url.replace(/^data:[^;,]*;/, 'data:font/woff2;')
   const blob = await (await fetch(url)).blob()
   return new Promise((resolve, reject) => {
     const reader = new FileReader()
@@ -97,7 +99,8 @@ const faceRule = async (face: EmbeddedFace) =>
 export function embeddedFontCss(): Promise<string> {
   fontCss ??= Promise.all(FONT_FACES.map(faceRule))
     .then((rules) => rules.join('') + `text{font-family:Roboto,"${ACCIDENTAL_FAMILY}",sans-serif}`)
-    .catch(() => {
+    .catch((error: unknown) => {
+      console.warn('Board export: fonts could not be embedded, a system font will show.', error)
       fontCss = null
       return ''
     })
