@@ -6,6 +6,7 @@ import path from 'node:path'
 import helmet from 'helmet'
 import { pinoHttp } from 'pino-http'
 import { randomUUID } from 'node:crypto'
+import { accountRoutes } from './account/account-routes'
 import { adminRoutes } from './admin/admin-routes'
 import { authRoutes } from './auth/auth-routes'
 import type { AppContext } from './context'
@@ -44,6 +45,7 @@ function apiRouter(ctx: AppContext) {
   api.use(rejectNulText)
   api.use('/health', healthRoutes(ctx))
   api.use('/auth', authRoutes(ctx))
+  api.use('/account', accountRoutes(ctx))
   mountDigests(api, ctx) // under /admin/digests: before the admin router's own guard
   api.use('/admin', adminRoutes(ctx))
   mountInvitations(api, ctx) // its invite route lies under a studio's path

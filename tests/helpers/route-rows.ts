@@ -71,6 +71,21 @@ export const ROWS: Record<string, Row> = {
     ),
     all(400),
   ],
+  'GET /api/account/time-zone': [get(() => '/api/account/time-zone'), signedIn(200)],
+  'PUT /api/account/time-zone': [
+    send(
+      () => '/api/account/time-zone',
+      () => ({ timeZone: 'Europe/Tallinn', followsBrowser: true }),
+    ),
+    signedIn(200),
+  ],
+  'POST /api/account/time-zone/browser': [
+    send(
+      () => '/api/account/time-zone/browser',
+      () => ({ timeZone: 'Europe/Tallinn' }),
+    ),
+    signedIn(200),
+  ],
   'GET /api/admin/users': [get(() => '/api/admin/users'), only({ admin: 200 })],
   'PATCH /api/admin/users/:id': [
     send(
