@@ -25,6 +25,7 @@ import { planRoutes } from './plans/plans-routes'
 import { mountRoster } from './roster/roster-routes'
 import { mountStudios } from './studios/studios-routes'
 import { lessonRoutes } from './lessons/lessons-routes'
+import { messageRoutes } from './messages/messages-routes'
 import { worksheetRoutes } from './worksheets/worksheets-routes'
 import { shareRoutes } from './shares/shares-routes'
 
@@ -53,6 +54,7 @@ function apiRouter(ctx: AppContext) {
   mountRoster(api, ctx)
   api.use('/plans', planRoutes(ctx))
   api.use('/lessons', lessonRoutes(ctx))
+  api.use('/messages', messageRoutes(ctx))
   mountAssignments(api, ctx)
   api.use('/instruments', instrumentsRoutes(ctx))
   api.use('/attempts', attemptsRoutes(ctx))
