@@ -12,6 +12,7 @@ import { toPublicUser } from '../users/users-repository'
 import {
   acceptInvitation,
   invite,
+  inviteMany,
   listInvitations,
   previewInvitation,
   resendInvitation,
@@ -19,6 +20,7 @@ import {
 } from './invitations-service'
 import {
   AcceptInvitationSchema,
+  InvitationBatchSchema,
   InvitationIdParamsSchema,
   InvitationInputSchema,
   InvitationListQuerySchema,
@@ -82,8 +84,22 @@ export function mountInvitations(api: Router, ctx: AppContext) {
         params: StudioIdParamsSchema,
         body: InvitationInputSchema,
       })
-      const result = await invite(ctx, req.user!.id, params.id, body.email)
+      const result = await invite(ctx, req.user!.id, params.id, body.email, body.message)
       res.status(result.resent ? 200 : 201).json(result)
+    },
+  )
+  api.post(
+    '/studio/studios/:id/invitations/batch',
+    requireAuth(ctx),
+    requireRole('teacher'),
+    inviteLimit,
+    async (req, res) => {
+      const { params, body } = parseRequest(req, {
+        params: StudioIdParamsSchema,
+        body: InvitationBatchSchema,
+      })
+      const results = await inviteMany(ctx, req.user!.id, params.id, body.emails, body.message)
+      res.json({ results })
     },
   )
   api.use('/studio/invitations', teacherRoutes(ctx, inviteLimit))

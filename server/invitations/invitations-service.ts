@@ -19,7 +19,7 @@ import {
   type InvitationRecord,
 } from './invitations-repository'
 import { invitationMail } from './invitations-mail'
-import type { InvitationPreview } from '../../src/contract/studios'
+import type { InvitationBatchResult, InvitationPreview } from '../../src/contract/studios'
 import { joinStudio, ownStudio, studioHasEmail } from '../studios/studios-service'
 import type { AcceptInvitationInput } from './invitations-schema'
 
@@ -52,7 +52,13 @@ async function reload(ctx: AppContext, id: string) {
 }
 
 /** Invites an address to a studio; an address already invited gets a fresh link instead. */
-export async function invite(ctx: AppContext, teacherId: string, studioId: string, email: string) {
+export async function invite(
+  ctx: AppContext,
+  teacherId: string,
+  studioId: string,
+  email: string,
+  message?: string,
+) {
   await ownStudio(ctx, teacherId, studioId)
   if (await studioHasEmail(ctx, studioId, email)) {
     throw conflict('This student is already in the studio.', {
@@ -62,11 +68,13 @@ export async function invite(ctx: AppContext, teacherId: string, studioId: strin
   // Any address gets the same answer (no hint that it is a teacher's or admin's): a non-student
   // account is refused when the invitation is accepted.
   const open = await findOpenInvitation(ctx.db, studioId, email)
-  if (open) return { invitation: await resendInvitation(ctx, teacherId, open.id), resent: true }
+  if (open)
+    return { invitation: await resendInvitation(ctx, teacherId, open.id, message), resent: true }
   const { token, tokenHash, expiresAt } = newToken()
   const id = await insertInvitation(ctx.db, {
     studioId,
     email,
+    message: message ?? null,
     tokenHash,
     invitedBy: teacherId,
     expiresAt,
@@ -83,15 +91,42 @@ async function ownInvitation(ctx: AppContext, teacherId: string, id: string) {
   return invitation
 }
 
-/** A new link and a new week to accept it; the previous link stops working. */
-export async function resendInvitation(ctx: AppContext, teacherId: string, id: string) {
+/** A new link and a new week to accept it (a new note replaces the old); the old link stops working. */
+export async function resendInvitation(
+  ctx: AppContext,
+  teacherId: string,
+  id: string,
+  message?: string,
+) {
   const invitation = await ownInvitation(ctx, teacherId, id)
   const { token, tokenHash, expiresAt } = newToken()
-  if (!(await renewInvitation(ctx.db, id, tokenHash, expiresAt))) {
+  if (!(await renewInvitation(ctx.db, id, tokenHash, expiresAt, message))) {
     throw conflict(`This invitation was already ${invitation.status}; send a new one instead.`)
   }
-  await mailInvitation(ctx, invitation, token, expiresAt)
-  return toInvitation(await reload(ctx, id))
+  const renewed = await reload(ctx, id)
+  await mailInvitation(ctx, renewed, token, expiresAt)
+  return toInvitation(renewed)
+}
+
+/** Invites each address once (in order); members already in the studio are reported, not refused. */
+export async function inviteMany(
+  ctx: AppContext,
+  teacherId: string,
+  studioId: string,
+  emails: string[],
+  message?: string,
+): Promise<InvitationBatchResult[]> {
+  await ownStudio(ctx, teacherId, studioId)
+  const results: InvitationBatchResult[] = []
+  for (const email of new Set(emails)) {
+    if (await studioHasEmail(ctx, studioId, email)) {
+      results.push({ email, outcome: 'member', invitation: null })
+      continue
+    }
+    const { invitation, resent } = await invite(ctx, teacherId, studioId, email, message)
+    results.push({ email, outcome: resent ? 'resent' : 'sent', invitation })
+  }
+  return results
 }
 
 export async function revokeInvitation(ctx: AppContext, teacherId: string, id: string) {

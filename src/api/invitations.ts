@@ -1,15 +1,21 @@
 // Invitations: a teacher's (/api/studio/…/invitations) and the public link (/api/invitations).
-import type { Invitation, InvitationPreview } from '../contract/studios'
+import type { Invitation, InvitationBatchResult, InvitationPreview } from '../contract/studios'
 import type { PublicUser } from '../contract/users'
 import { http } from './http'
 
 export type { Invitation, InvitationPreview }
 
-export const invite = (studioId: string, email: string) =>
+export const invite = (studioId: string, email: string, message?: string) =>
   http.post<{ invitation: Invitation; resent: boolean }>(
     `/studio/studios/${studioId}/invitations`,
-    { email },
+    { email, ...(message ? { message } : {}) },
   )
+/** Several addresses at once, one note for all. */
+export const inviteMany = (studioId: string, emails: string[], message?: string) =>
+  http.post<{ results: InvitationBatchResult[] }>(`/studio/studios/${studioId}/invitations/batch`, {
+    emails,
+    ...(message ? { message } : {}),
+  })
 export const listInvitations = () => http.get<{ invitations: Invitation[] }>('/studio/invitations')
 export const resendInvitation = (id: string) =>
   http.post<{ invitation: Invitation }>(`/studio/invitations/${id}/resend`)

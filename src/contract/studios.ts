@@ -24,12 +24,24 @@ export interface Invitation {
   studioId: string
   studioName: string
   email: string
+  /** The teacher's personal note in the e-mail, if any. */
+  message: string | null
   status: InvitationStatus
   expiresAt: string
   sentAt: string
   sendCount: number
   acceptedAt: string | null
   createdAt: string
+}
+
+export const INVITE_MESSAGE_MAX = 1000
+export const INVITE_BATCH_MAX = 20
+
+/** What became of each address of a batch: invited, sent a new link, or already a member. */
+export interface InvitationBatchResult {
+  email: string
+  outcome: 'sent' | 'resent' | 'member'
+  invitation: Invitation | null
 }
 
 /** What the acceptance page shows before the student decides. */

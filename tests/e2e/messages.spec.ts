@@ -46,7 +46,7 @@ describe('messages', () => {
     const composer = teacher.getByTestId('message-composer')
     await composer.getByLabel('To').click()
     await teacher.getByRole('option', { name: 'Noor Halvorsen' }).click()
-    await composer.getByLabel('Subject').click() // closes the list
+    await teacher.keyboard.press('Escape') // closes the list of students
     await composer.getByLabel('Subject').fill(SUBJECT)
     await composer.getByLabel('Message').fill('Play the E minor run slowly, then shift up.')
     await composer.getByRole('button', { name: 'Send' }).click()

@@ -165,6 +165,13 @@ export const ROWS: Record<string, Row> = {
     ),
     teachers(201),
   ],
+  'POST /api/studio/studios/:id/invitations/batch': [
+    send(
+      (f) => `/api/studio/studios/${f.studioId}/invitations/batch`,
+      () => ({ emails: [uniqueEmail('matrix-a'), uniqueEmail('matrix-b')], message: 'Welcome!' }),
+    ),
+    teachers(200),
+  ],
   'GET /api/studio/invitations': [get(() => '/api/studio/invitations'), teachers(200, 200)],
   'POST /api/studio/invitations/:id/resend': [
     get((f) => `/api/studio/invitations/${f.invitationId}/resend`),
