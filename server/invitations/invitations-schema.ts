@@ -32,6 +32,8 @@ export const InvitationTokenQuerySchema = z.object({ token: TokenSchema })
 /** Accepting: signed in already, or new account fields (the e-mail is the invited one). */
 export const AcceptInvitationSchema = z.object({
   token: TokenSchema,
+  /** Only for an open link's new account (an e-mail invitation uses the invited address). */
+  email: EmailSchema.optional(),
   name: NameSchema.optional(),
   password: PasswordSchema.optional(),
 })

@@ -1,9 +1,8 @@
 // Invitation use cases: invite (or re-invite), resend, revoke, preview and accept.
 import { createHash, randomBytes } from 'node:crypto'
-import { hashPassword } from '../auth/password'
 import { publicUrl } from '../config'
 import type { AppContext } from '../context'
-import { AppError, badRequest, conflict, forbidden, notFound } from '../lib/errors'
+import { AppError, conflict, forbidden, notFound } from '../lib/errors'
 import { findUserByEmail, insertUser, timeZoneOf, type UserRecord } from '../users/users-repository'
 import type { PublicUser } from '../users/users-schema'
 import {
@@ -19,6 +18,13 @@ import {
   type InvitationRecord,
 } from './invitations-repository'
 import { invitationMail } from './invitations-mail'
+import {
+  duplicateEmail,
+  newStudentAccount,
+  refuseNonStudent,
+  type AcceptResult,
+} from './invitation-accounts'
+import { acceptLink, previewLink } from './invite-links-service'
 import type { InvitationBatchResult, InvitationPreview } from '../../src/contract/studios'
 import { joinStudio, ownStudio, studioHasEmail } from '../studios/studios-service'
 import type { AcceptInvitationInput } from './invitations-schema'
@@ -168,6 +174,8 @@ export async function previewInvitation(
   ctx: AppContext,
   token: string,
 ): Promise<InvitationPreview> {
+  const viaLink = await previewLink(ctx, sha256(token))
+  if (viaLink) return viaLink
   const invitation = await usableInvitation(ctx, token)
   const { studioName, teacherName, email, expiresAt } = invitation
   return {
@@ -179,46 +187,9 @@ export async function previewInvitation(
   }
 }
 
-async function newStudentAccount(
-  ctx: AppContext,
-  invitation: InvitationRecord,
-  input: AcceptInvitationInput,
-) {
-  if (!input.name || !input.password) {
-    throw badRequest('Sign in, or choose your name and a password to create your account.', {
-      ...(input.name ? {} : { name: ['Enter your name.'] }),
-      ...(input.password ? {} : { password: ['Choose a password.'] }),
-    })
-  }
-  if (await findUserByEmail(ctx.db, invitation.email)) {
-    throw conflict('An account with this e-mail already exists. Sign in to accept.', {
-      email: ['Sign in instead.'],
-    })
-  }
-  return {
-    email: invitation.email,
-    name: input.name,
-    role: 'student' as const,
-    passwordHash: await hashPassword(input.password, ctx.config.bcryptCost),
-  }
-}
-
-function duplicateEmail(error: unknown): never {
-  if ((error as { code?: string }).code === '23505') {
-    throw conflict('An account with this e-mail already exists. Sign in to accept.', {
-      email: ['Sign in instead.'],
-    })
-  }
-  throw error
-}
-
 /** Only the invited address may accept, and only as a student (a link forwarded is worth nothing). */
 function refuseOtherAccount(invitation: InvitationRecord, current: PublicUser) {
-  if (current.role !== 'student') {
-    throw forbidden(
-      'Invitations are for student accounts. Sign out and accept with your student account.',
-    )
-  }
+  refuseNonStudent(current)
   if (current.email.toLowerCase() !== invitation.email.toLowerCase()) {
     throw new AppError(
       'invitation_for_other_address',
@@ -236,10 +207,12 @@ export async function acceptInvitation(
   ctx: AppContext,
   input: AcceptInvitationInput,
   current: PublicUser | null,
-) {
+): Promise<AcceptResult> {
+  const viaLink = await acceptLink(ctx, sha256(input.token), input, current)
+  if (viaLink) return viaLink
   const invitation = await usableInvitation(ctx, input.token)
   if (current) refuseOtherAccount(invitation, current)
-  const account = current ? null : await newStudentAccount(ctx, invitation, input)
+  const account = current ? null : await newStudentAccount(ctx, invitation.email, input)
   return ctx.db.transaction(async (trx) => {
     const created: UserRecord | null = account
       ? await insertUser(trx, account).catch(duplicateEmail)

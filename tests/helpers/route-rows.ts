@@ -172,6 +172,14 @@ export const ROWS: Record<string, Row> = {
     ),
     teachers(200),
   ],
+  'POST /api/studio/studios/:id/invite-links': [
+    send(
+      (f) => `/api/studio/studios/${f.studioId}/invite-links`,
+      () => ({ maxUses: 5, days: 3 }),
+    ),
+    teachers(201),
+  ],
+  'GET /api/studio/invite-links': [get(() => '/api/studio/invite-links'), teachers(200, 200)],
   'GET /api/studio/invitations': [get(() => '/api/studio/invitations'), teachers(200, 200)],
   'POST /api/studio/invitations/:id/resend': [
     get((f) => `/api/studio/invitations/${f.invitationId}/resend`),
@@ -269,6 +277,10 @@ export const ROWS: Record<string, Row> = {
     teachers(200),
   ],
   'DELETE /api/plans/:id': [get((f) => `/api/plans/${f.planToDeleteId}`), teachers(204)],
+  'DELETE /api/studio/invite-links/:id': [
+    get((f) => `/api/studio/invite-links/${f.inviteLinkId}`),
+    teachers(200),
+  ],
   'DELETE /api/studio/invitations/:id': [
     get((f) => `/api/studio/invitations/${f.invitationToRevokeId}`),
     teachers(200),
