@@ -1,7 +1,8 @@
-// Messages and the account time zone in the browser (issue 16): the teacher writes to a student and
-// sees the seeded studio message's read state; the student opens it (unread count in the
-// navigation, New chip) and the teacher then sees it read, and the message is mailed; a student
-// keeps a time zone in Account.
+// Reaching students in the browser (issue 16): the teacher writes to a student and sees the seeded
+// studio message's read state; the student opens it (unread count in the navigation, New chip) and
+// the teacher then sees it read, and the message is mailed; a student keeps a time zone in Account;
+// the teacher invites several addresses with a note, then makes an open link for a chat, with which
+// a newcomer gives their own address and joins.
 import knex, { type Knex } from 'knex'
 import type { Browser, Page } from 'playwright-core'
 import { afterAll, beforeAll, describe, expect, inject, it } from 'vitest'
@@ -17,7 +18,9 @@ import {
 let browser: Browser
 let db: Knex
 let teacher: Page
-const SUBJECT = `Shifts on the D string ${Date.now()}`
+const stamp = Date.now()
+const SUBJECT = `Shifts on the D string ${stamp}`
+const ADDRESSES = [`ash-${stamp}@example.test`, `bay-${stamp}@example.test`]
 
 beforeAll(async () => {
   browser = await launchBrowser()
@@ -121,6 +124,60 @@ describe('the account time zone', () => {
       .first('z.time_zone', 'z.chosen_at')
     expect(row.time_zone).toBe('Asia/Tokyo')
     expect(row.chosen_at).not.toBeNull()
+    await page.context().close()
+  })
+})
+
+describe('inviting several and by link', () => {
+  it('the teacher invites two addresses at once with a note, which the e-mails carry', async () => {
+    await teacher.getByTestId('invite-open').click()
+    await teacher.getByLabel("Students' e-mails").fill(ADDRESSES.join(', '))
+    await teacher.getByLabel('Personal note (optional)').fill('See you on Tuesday at 17:00!')
+    await teacher.getByRole('button', { name: 'Send invitation' }).click()
+    await expect
+      .poll(() => teacher.getByTestId('invite-sent').textContent())
+      .toContain('Invitations sent to 2 addresses.')
+    for (const address of ADDRESSES) {
+      await expect
+        .poll(async () => {
+          const row = await db('captured_mail').whereRaw('? = any(recipients)', [address]).first()
+          return row?.text_body ?? ''
+        })
+        .toContain('> See you on Tuesday at 17:00!')
+    }
+  })
+
+  let link = ''
+  it('the teacher makes a link for three uses and sees it listed', async () => {
+    const panel = teacher.getByTestId('invite-link-panel')
+    await panel.getByLabel('Uses').fill('3')
+    await panel.getByRole('button', { name: 'Create link' }).click()
+    const field = panel.getByTestId('invite-link-url').locator('input')
+    await expect.poll(() => field.inputValue()).toContain('/invitations/accept?token=')
+    link = await field.inputValue()
+    expect(await panel.getByTestId('invite-link-item').first().textContent()).toContain(
+      '0 of 3 uses',
+    )
+    await screenshot(teacher, 'invite-dialog-link-laptop')
+  })
+
+  it('a newcomer opens the link, gives their own address and joins', async () => {
+    const { page } = await newPage(browser, PHONE)
+    await page.goto(new URL(link).pathname + new URL(link).search)
+    await expect
+      .poll(() => page.getByTestId('invitation-accept').textContent())
+      .toContain('An invitation link')
+    await page.getByLabel('Your name').fill('Cedar Newcomer')
+    await page.getByLabel('E-mail').fill(`newcomer-${stamp}@example.test`)
+    await page.getByLabel('Choose a password').fill('a long password here')
+    await screenshot(page, 'invite-link-accept-phone')
+    await page.getByRole('button', { name: 'Create my account and join' }).click()
+    await page.waitForURL('**/plans?joined=*')
+    await expect
+      .poll(() => page.getByTestId('joined').textContent())
+      .toContain('Welcome to Cedar Hollow Music Collective')
+    const row = await db('studio_invite_links').orderBy('created_at', 'desc').first('uses')
+    expect(row.uses).toBe(1)
     await page.context().close()
   })
 })
