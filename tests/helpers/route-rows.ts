@@ -4,6 +4,7 @@ import { TEST_PASSWORD, uniqueEmail } from './api'
 import { attemptInput } from './attempt-input'
 import { BASS, freshId, type Fixture } from './matrix-fixture'
 import { LESSON_ROWS, SHARE_ROWS } from './route-rows-lessons'
+import { ACCOUNT_ROWS, INVITE_ROWS, MESSAGE_ROWS } from './route-rows-reach'
 import {
   all,
   get,
@@ -71,21 +72,6 @@ export const ROWS: Record<string, Row> = {
     ),
     all(400),
   ],
-  'GET /api/account/time-zone': [get(() => '/api/account/time-zone'), signedIn(200)],
-  'PUT /api/account/time-zone': [
-    send(
-      () => '/api/account/time-zone',
-      () => ({ timeZone: 'Europe/Tallinn', followsBrowser: true }),
-    ),
-    signedIn(200),
-  ],
-  'POST /api/account/time-zone/browser': [
-    send(
-      () => '/api/account/time-zone/browser',
-      () => ({ timeZone: 'Europe/Tallinn' }),
-    ),
-    signedIn(200),
-  ],
   'GET /api/admin/users': [get(() => '/api/admin/users'), only({ admin: 200 })],
   'PATCH /api/admin/users/:id': [
     send(
@@ -143,6 +129,9 @@ export const ROWS: Record<string, Row> = {
   'GET /api/progress/cycle-position': [progress('cycle-position', '&scale=major'), studentData],
   ...SHARE_ROWS,
   ...LESSON_ROWS,
+  ...ACCOUNT_ROWS,
+  ...MESSAGE_ROWS,
+  ...INVITE_ROWS,
   'GET /api/studio/studios': [get(() => '/api/studio/studios'), teachers(200, 200)],
   'POST /api/studio/studios': [
     send(
@@ -165,21 +154,6 @@ export const ROWS: Record<string, Row> = {
     ),
     teachers(201),
   ],
-  'POST /api/studio/studios/:id/invitations/batch': [
-    send(
-      (f) => `/api/studio/studios/${f.studioId}/invitations/batch`,
-      () => ({ emails: [uniqueEmail('matrix-a'), uniqueEmail('matrix-b')], message: 'Welcome!' }),
-    ),
-    teachers(200),
-  ],
-  'POST /api/studio/studios/:id/invite-links': [
-    send(
-      (f) => `/api/studio/studios/${f.studioId}/invite-links`,
-      () => ({ maxUses: 5, days: 3 }),
-    ),
-    teachers(201),
-  ],
-  'GET /api/studio/invite-links': [get(() => '/api/studio/invite-links'), teachers(200, 200)],
   'GET /api/studio/invitations': [get(() => '/api/studio/invitations'), teachers(200, 200)],
   'POST /api/studio/invitations/:id/resend': [
     get((f) => `/api/studio/invitations/${f.invitationId}/resend`),
@@ -277,10 +251,6 @@ export const ROWS: Record<string, Row> = {
     teachers(200),
   ],
   'DELETE /api/plans/:id': [get((f) => `/api/plans/${f.planToDeleteId}`), teachers(204)],
-  'DELETE /api/studio/invite-links/:id': [
-    get((f) => `/api/studio/invite-links/${f.inviteLinkId}`),
-    teachers(200),
-  ],
   'DELETE /api/studio/invitations/:id': [
     get((f) => `/api/studio/invitations/${f.invitationToRevokeId}`),
     teachers(200),
