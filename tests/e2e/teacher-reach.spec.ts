@@ -130,6 +130,7 @@ describe('the account time zone', () => {
 
 describe('inviting several and by link', () => {
   it('the teacher invites two addresses at once with a note, which the e-mails carry', async () => {
+    await teacher.goto('/studio')
     await teacher.getByTestId('invite-open').click()
     await teacher.getByLabel("Students' e-mails").fill(ADDRESSES.join(', '))
     await teacher.getByLabel('Personal note (optional)').fill('See you on Tuesday at 17:00!')
