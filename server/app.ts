@@ -6,6 +6,7 @@ import path from 'node:path'
 import helmet from 'helmet'
 import { pinoHttp } from 'pino-http'
 import { randomUUID } from 'node:crypto'
+import { accountRoutes } from './account/account-routes'
 import { adminRoutes } from './admin/admin-routes'
 import { authRoutes } from './auth/auth-routes'
 import type { AppContext } from './context'
@@ -24,6 +25,7 @@ import { planRoutes } from './plans/plans-routes'
 import { mountRoster } from './roster/roster-routes'
 import { mountStudios } from './studios/studios-routes'
 import { lessonRoutes } from './lessons/lessons-routes'
+import { messageRoutes } from './messages/messages-routes'
 import { worksheetRoutes } from './worksheets/worksheets-routes'
 import { shareRoutes } from './shares/shares-routes'
 
@@ -44,6 +46,7 @@ function apiRouter(ctx: AppContext) {
   api.use(rejectNulText)
   api.use('/health', healthRoutes(ctx))
   api.use('/auth', authRoutes(ctx))
+  api.use('/account', accountRoutes(ctx))
   mountDigests(api, ctx) // under /admin/digests: before the admin router's own guard
   api.use('/admin', adminRoutes(ctx))
   mountInvitations(api, ctx) // its invite route lies under a studio's path
@@ -51,6 +54,7 @@ function apiRouter(ctx: AppContext) {
   mountRoster(api, ctx)
   api.use('/plans', planRoutes(ctx))
   api.use('/lessons', lessonRoutes(ctx))
+  api.use('/messages', messageRoutes(ctx))
   mountAssignments(api, ctx)
   api.use('/instruments', instrumentsRoutes(ctx))
   api.use('/attempts', attemptsRoutes(ctx))

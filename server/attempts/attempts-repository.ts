@@ -98,18 +98,3 @@ export async function insertNewAttempts(db: Db, userId: string, attempts: Attemp
   )
   return rows
 }
-
-/** Whether PostgreSQL knows a time zone name (its list can differ slightly from the JS runtime's). */
-export async function isKnownTimeZone(db: Db, zone: string) {
-  const row = await db('pg_timezone_names').where('name', zone).first('name')
-  return row !== undefined
-}
-
-/** Remembers the player's time zone; later answers count for days in that zone. */
-export async function saveTimeZone(db: Db, userId: string, zone: string) {
-  await db('user_time_zones')
-    .insert({ user_id: userId, time_zone: zone, updated_at: db.fn.now() })
-    .onConflict('user_id')
-    .merge(['time_zone', 'updated_at'])
-    .whereRaw('user_time_zones.time_zone is distinct from excluded.time_zone')
-}

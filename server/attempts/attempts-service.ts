@@ -4,6 +4,7 @@ import type { AppContext } from '../context'
 import { badRequest, type FieldErrors } from '../lib/errors'
 import type { PublicUser } from '../users/users-schema'
 import type { AttemptBatch, AttemptBatchResult } from '../../src/contract/attempts'
+import { isKnownTimeZone, reportBrowserTimeZone } from '../users/users-repository'
 import * as repo from './attempts-repository'
 
 // PostgreSQL's list of zones is fixed for the life of the process; zones already saved per player
@@ -17,7 +18,7 @@ const OWNED_LIMIT = 50_000
 
 async function usableTimeZone(ctx: AppContext, zone: string | undefined) {
   if (!zone) return null
-  if (!knownZones.has(zone)) knownZones.set(zone, await repo.isKnownTimeZone(ctx.db, zone))
+  if (!knownZones.has(zone)) knownZones.set(zone, await isKnownTimeZone(ctx.db, zone))
   return knownZones.get(zone) ? zone : null
 }
 
@@ -86,7 +87,7 @@ export async function recordAttempts(
   assertOwnInstruments(batch, await ownInstruments(ctx, user.id, instrumentIds))
   const zone = await usableTimeZone(ctx, batch.timeZone)
   if (zone && savedZones.get(user.id) !== zone) {
-    await repo.saveTimeZone(ctx.db, user.id, zone)
+    await reportBrowserTimeZone(ctx.db, user.id, zone)
     savedZones.set(user.id, zone)
   }
   const rows = await repo.insertNewAttempts(ctx.db, user.id, batch.attempts).catch((e: unknown) => {

@@ -11,6 +11,8 @@ export function invitationMail(
     expiresAt: Date
     /** The invitee's zone when they have an account, else the teacher's. */
     timeZone: string
+    /** The teacher's personal note. */
+    message: string | null
   },
 ): OutgoingMail {
   return {
@@ -22,6 +24,9 @@ export function invitationMail(
       `${invite.teacherName} invites you to join "${invite.studioName}" on Ambitus, where your teacher`,
       'assigns fretboard practice and follows how it goes between lessons.',
       '',
+      ...(invite.message
+        ? [`${invite.teacherName} writes:`, ...invite.message.split('\n').map((l) => `> ${l}`), '']
+        : []),
       'Open this link to accept (you can create an account or sign in to an existing one):',
       invite.link,
       '',

@@ -10,6 +10,7 @@ interface InvitationRow {
   teacher_id: string
   teacher_name: string
   email: string
+  message: string | null
   expires_at: Date
   sent_at: Date
   send_count: number
@@ -36,6 +37,7 @@ const toRecord = (row: InvitationRow, now = new Date()): InvitationRecord => ({
   teacherId: row.teacher_id,
   teacherName: row.teacher_name,
   email: row.email,
+  message: row.message,
   status: statusOf(row, now),
   expiresAt: row.expires_at.toISOString(),
   sentAt: row.sent_at.toISOString(),
@@ -59,12 +61,20 @@ function invitationQuery(db: Db | Knex.Transaction) {
 
 export async function insertInvitation(
   db: Db,
-  input: { studioId: string; email: string; tokenHash: string; invitedBy: string; expiresAt: Date },
+  input: {
+    studioId: string
+    email: string
+    message: string | null
+    tokenHash: string
+    invitedBy: string
+    expiresAt: Date
+  },
 ): Promise<string> {
   const [row] = await db('studio_invitations')
     .insert({
       studio_id: input.studioId,
       email: input.email,
+      message: input.message,
       token_hash: input.tokenHash,
       invited_by: input.invitedBy,
       expires_at: input.expiresAt,
@@ -116,12 +126,13 @@ export async function listInvitations(
   return rows.map((row) => toInvitation(toRecord(row)))
 }
 
-/** A new token and expiry for an open invitation (the old link stops working). */
+/** A new token and expiry (and a new note, when given) for an open invitation (the old link stops working). */
 export async function renewInvitation(
   db: Db,
   id: string,
   tokenHash: string,
   expiresAt: Date,
+  message?: string,
 ): Promise<boolean> {
   const changed = await db('studio_invitations')
     .where({ id })
@@ -132,6 +143,7 @@ export async function renewInvitation(
       expires_at: expiresAt,
       sent_at: db.fn.now(),
       send_count: db.raw('send_count + 1'),
+      ...(message ? { message } : {}),
     })
   return changed > 0
 }

@@ -12,6 +12,7 @@ import { toPublicUser } from '../users/users-repository'
 import {
   acceptInvitation,
   invite,
+  inviteMany,
   listInvitations,
   previewInvitation,
   resendInvitation,
@@ -19,11 +20,14 @@ import {
 } from './invitations-service'
 import {
   AcceptInvitationSchema,
+  InvitationBatchSchema,
   InvitationIdParamsSchema,
   InvitationInputSchema,
   InvitationListQuerySchema,
   InvitationTokenQuerySchema,
 } from './invitations-schema'
+import * as links from './invite-links-service'
+import { InviteLinkCreateSchema } from '../../src/contract/studios'
 
 function publicRoutes(ctx: AppContext): Router {
   const router = Router()
@@ -69,6 +73,19 @@ function teacherRoutes(ctx: AppContext, inviteLimit: ReturnType<typeof mailLimit
   return router
 }
 
+function linkRoutes(ctx: AppContext): Router {
+  const router = Router()
+  router.use(requireAuth(ctx), requireRole('teacher'))
+  router.get('/', async (req, res) => {
+    res.json({ links: await links.listLinks(ctx, req.user!.id) })
+  })
+  router.delete('/:id', async (req, res) => {
+    const { id } = parse(InvitationIdParamsSchema, req, 'params')
+    res.json({ link: await links.revokeLink(ctx, req.user!.id, id) })
+  })
+  return router
+}
+
 /** Mount before the studios: the invite route lives under a studio's path. */
 export function mountInvitations(api: Router, ctx: AppContext) {
   const inviteLimit = mailLimit(ctx, 'invitation')
@@ -82,10 +99,37 @@ export function mountInvitations(api: Router, ctx: AppContext) {
         params: StudioIdParamsSchema,
         body: InvitationInputSchema,
       })
-      const result = await invite(ctx, req.user!.id, params.id, body.email)
+      const result = await invite(ctx, req.user!.id, params.id, body.email, body.message)
       res.status(result.resent ? 200 : 201).json(result)
     },
   )
+  api.post(
+    '/studio/studios/:id/invitations/batch',
+    requireAuth(ctx),
+    requireRole('teacher'),
+    inviteLimit,
+    async (req, res) => {
+      const { params, body } = parseRequest(req, {
+        params: StudioIdParamsSchema,
+        body: InvitationBatchSchema,
+      })
+      const results = await inviteMany(ctx, req.user!.id, params.id, body.emails, body.message)
+      res.json({ results })
+    },
+  )
+  api.post(
+    '/studio/studios/:id/invite-links',
+    requireAuth(ctx),
+    requireRole('teacher'),
+    async (req, res) => {
+      const { params, body } = parseRequest(req, {
+        params: StudioIdParamsSchema,
+        body: InviteLinkCreateSchema,
+      })
+      res.status(201).json(await links.createLink(ctx, req.user!.id, params.id, body))
+    },
+  )
+  api.use('/studio/invite-links', linkRoutes(ctx))
   api.use('/studio/invitations', teacherRoutes(ctx, inviteLimit))
   api.use('/invitations', publicRoutes(ctx))
 }

@@ -1,9 +1,8 @@
 // Invitation use cases: invite (or re-invite), resend, revoke, preview and accept.
 import { createHash, randomBytes } from 'node:crypto'
-import { hashPassword } from '../auth/password'
 import { publicUrl } from '../config'
 import type { AppContext } from '../context'
-import { AppError, badRequest, conflict, forbidden, notFound } from '../lib/errors'
+import { AppError, conflict, forbidden, notFound } from '../lib/errors'
 import { findUserByEmail, insertUser, timeZoneOf, type UserRecord } from '../users/users-repository'
 import type { PublicUser } from '../users/users-schema'
 import {
@@ -19,7 +18,14 @@ import {
   type InvitationRecord,
 } from './invitations-repository'
 import { invitationMail } from './invitations-mail'
-import type { InvitationPreview } from '../../src/contract/studios'
+import {
+  duplicateEmail,
+  newStudentAccount,
+  refuseNonStudent,
+  type AcceptResult,
+} from './invitation-accounts'
+import { acceptLink, previewLink } from './invite-links-service'
+import type { InvitationBatchResult, InvitationPreview } from '../../src/contract/studios'
 import { joinStudio, ownStudio, studioHasEmail } from '../studios/studios-service'
 import type { AcceptInvitationInput } from './invitations-schema'
 
@@ -52,7 +58,13 @@ async function reload(ctx: AppContext, id: string) {
 }
 
 /** Invites an address to a studio; an address already invited gets a fresh link instead. */
-export async function invite(ctx: AppContext, teacherId: string, studioId: string, email: string) {
+export async function invite(
+  ctx: AppContext,
+  teacherId: string,
+  studioId: string,
+  email: string,
+  message?: string,
+) {
   await ownStudio(ctx, teacherId, studioId)
   if (await studioHasEmail(ctx, studioId, email)) {
     throw conflict('This student is already in the studio.', {
@@ -62,11 +74,13 @@ export async function invite(ctx: AppContext, teacherId: string, studioId: strin
   // Any address gets the same answer (no hint that it is a teacher's or admin's): a non-student
   // account is refused when the invitation is accepted.
   const open = await findOpenInvitation(ctx.db, studioId, email)
-  if (open) return { invitation: await resendInvitation(ctx, teacherId, open.id), resent: true }
+  if (open)
+    return { invitation: await resendInvitation(ctx, teacherId, open.id, message), resent: true }
   const { token, tokenHash, expiresAt } = newToken()
   const id = await insertInvitation(ctx.db, {
     studioId,
     email,
+    message: message ?? null,
     tokenHash,
     invitedBy: teacherId,
     expiresAt,
@@ -83,15 +97,42 @@ async function ownInvitation(ctx: AppContext, teacherId: string, id: string) {
   return invitation
 }
 
-/** A new link and a new week to accept it; the previous link stops working. */
-export async function resendInvitation(ctx: AppContext, teacherId: string, id: string) {
+/** A new link and a new week to accept it (a new note replaces the old); the old link stops working. */
+export async function resendInvitation(
+  ctx: AppContext,
+  teacherId: string,
+  id: string,
+  message?: string,
+) {
   const invitation = await ownInvitation(ctx, teacherId, id)
   const { token, tokenHash, expiresAt } = newToken()
-  if (!(await renewInvitation(ctx.db, id, tokenHash, expiresAt))) {
+  if (!(await renewInvitation(ctx.db, id, tokenHash, expiresAt, message))) {
     throw conflict(`This invitation was already ${invitation.status}; send a new one instead.`)
   }
-  await mailInvitation(ctx, invitation, token, expiresAt)
-  return toInvitation(await reload(ctx, id))
+  const renewed = await reload(ctx, id)
+  await mailInvitation(ctx, renewed, token, expiresAt)
+  return toInvitation(renewed)
+}
+
+/** Invites each address once (in order); members already in the studio are reported, not refused. */
+export async function inviteMany(
+  ctx: AppContext,
+  teacherId: string,
+  studioId: string,
+  emails: string[],
+  message?: string,
+): Promise<InvitationBatchResult[]> {
+  await ownStudio(ctx, teacherId, studioId)
+  const results: InvitationBatchResult[] = []
+  for (const email of new Set(emails)) {
+    if (await studioHasEmail(ctx, studioId, email)) {
+      results.push({ email, outcome: 'member', invitation: null })
+      continue
+    }
+    const { invitation, resent } = await invite(ctx, teacherId, studioId, email, message)
+    results.push({ email, outcome: resent ? 'resent' : 'sent', invitation })
+  }
+  return results
 }
 
 export async function revokeInvitation(ctx: AppContext, teacherId: string, id: string) {
@@ -133,6 +174,8 @@ export async function previewInvitation(
   ctx: AppContext,
   token: string,
 ): Promise<InvitationPreview> {
+  const viaLink = await previewLink(ctx, sha256(token))
+  if (viaLink) return viaLink
   const invitation = await usableInvitation(ctx, token)
   const { studioName, teacherName, email, expiresAt } = invitation
   return {
@@ -144,46 +187,9 @@ export async function previewInvitation(
   }
 }
 
-async function newStudentAccount(
-  ctx: AppContext,
-  invitation: InvitationRecord,
-  input: AcceptInvitationInput,
-) {
-  if (!input.name || !input.password) {
-    throw badRequest('Sign in, or choose your name and a password to create your account.', {
-      ...(input.name ? {} : { name: ['Enter your name.'] }),
-      ...(input.password ? {} : { password: ['Choose a password.'] }),
-    })
-  }
-  if (await findUserByEmail(ctx.db, invitation.email)) {
-    throw conflict('An account with this e-mail already exists. Sign in to accept.', {
-      email: ['Sign in instead.'],
-    })
-  }
-  return {
-    email: invitation.email,
-    name: input.name,
-    role: 'student' as const,
-    passwordHash: await hashPassword(input.password, ctx.config.bcryptCost),
-  }
-}
-
-function duplicateEmail(error: unknown): never {
-  if ((error as { code?: string }).code === '23505') {
-    throw conflict('An account with this e-mail already exists. Sign in to accept.', {
-      email: ['Sign in instead.'],
-    })
-  }
-  throw error
-}
-
 /** Only the invited address may accept, and only as a student (a link forwarded is worth nothing). */
 function refuseOtherAccount(invitation: InvitationRecord, current: PublicUser) {
-  if (current.role !== 'student') {
-    throw forbidden(
-      'Invitations are for student accounts. Sign out and accept with your student account.',
-    )
-  }
+  refuseNonStudent(current)
   if (current.email.toLowerCase() !== invitation.email.toLowerCase()) {
     throw new AppError(
       'invitation_for_other_address',
@@ -201,10 +207,12 @@ export async function acceptInvitation(
   ctx: AppContext,
   input: AcceptInvitationInput,
   current: PublicUser | null,
-) {
+): Promise<AcceptResult> {
+  const viaLink = await acceptLink(ctx, sha256(input.token), input, current)
+  if (viaLink) return viaLink
   const invitation = await usableInvitation(ctx, input.token)
   if (current) refuseOtherAccount(invitation, current)
-  const account = current ? null : await newStudentAccount(ctx, invitation, input)
+  const account = current ? null : await newStudentAccount(ctx, invitation.email, input)
   return ctx.db.transaction(async (trx) => {
     const created: UserRecord | null = account
       ? await insertUser(trx, account).catch(duplicateEmail)

@@ -1,5 +1,6 @@
 // Users table access: the only place that knows its columns.
 import type { Db } from '../lib/db'
+import type { TimeZoneSetting } from '../../src/contract/account'
 import type { AdminUser, PublicUser, Role, UserListQuery } from './users-schema'
 
 export interface UserRecord extends PublicUser {
@@ -134,3 +135,45 @@ export async function timeZonesOf(db: Db, userIds: string[]): Promise<Map<string
 /** One user's time zone (see timeZonesOf). */
 export const timeZoneOf = async (db: Db, userId: string) =>
   (await timeZonesOf(db, [userId])).get(userId) ?? 'UTC'
+
+/** The user's zone and whether it follows the browser (a user with none yet follows it, in UTC). */
+export async function timeZoneSetting(db: Db, userId: string): Promise<TimeZoneSetting> {
+  const row = (await db('user_time_zones').where('user_id', userId).first()) as
+    { time_zone: string; chosen_at: Date | null } | undefined
+  return { timeZone: row?.time_zone ?? 'UTC', followsBrowser: !row?.chosen_at }
+}
+
+/** Saves the zone the user chose in Account (or follows the browser again with its zone). */
+export async function chooseTimeZone(
+  db: Db,
+  userId: string,
+  zone: string,
+  followsBrowser: boolean,
+) {
+  await db('user_time_zones')
+    .insert({
+      user_id: userId,
+      time_zone: zone,
+      chosen_at: followsBrowser ? null : db.fn.now(),
+      updated_at: db.fn.now(),
+    })
+    .onConflict('user_id')
+    .merge(['time_zone', 'chosen_at', 'updated_at'])
+}
+
+/** Saves the browser's zone unless the user chose one (the practice batches report it too). */
+export async function reportBrowserTimeZone(db: Db, userId: string, zone: string) {
+  await db('user_time_zones')
+    .insert({ user_id: userId, time_zone: zone, updated_at: db.fn.now() })
+    .onConflict('user_id')
+    .merge(['time_zone', 'updated_at'])
+    .whereRaw(
+      'user_time_zones.chosen_at is null and user_time_zones.time_zone is distinct from excluded.time_zone',
+    )
+}
+
+/** Whether PostgreSQL knows a time zone name (its list can differ slightly from the JS runtime's). */
+export async function isKnownTimeZone(db: Db, zone: string) {
+  const row = await db('pg_timezone_names').where('name', zone).first('name')
+  return row !== undefined
+}

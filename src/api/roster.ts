@@ -29,9 +29,8 @@ export const fetchStudentAssignments = (id: string) =>
   http.get<{ assignments: Assignment[] }>(`/studio/students/${id}/assignments`)
 
 /** Download links (plain same-origin links carry the session cookie). */
-// with the browser's time zone, so the sheet's date-times are the viewer's local ones
-const timeZone = () => Intl.DateTimeFormat().resolvedOptions().timeZone
-export const rosterCsvUrl = (filters: RosterFilters) =>
-  `/api${withQuery('/studio/roster.csv', { ...filters, timeZone: timeZone() })}`
-export const resultsCsvUrl = (studentId: string) =>
-  `/api${withQuery(`/studio/students/${studentId}/results.csv`, { timeZone: timeZone() })}`
+// with the viewer's time zone, so the sheet's date-times are their local ones
+export const rosterCsvUrl = (filters: RosterFilters, timeZone: string) =>
+  `/api${withQuery('/studio/roster.csv', { ...filters, timeZone })}`
+export const resultsCsvUrl = (studentId: string, timeZone: string) =>
+  `/api${withQuery(`/studio/students/${studentId}/results.csv`, { timeZone })}`

@@ -1,4 +1,5 @@
 // A teacher's studios, a student's memberships, and the invitations that bring students in.
+import { z } from 'zod'
 
 export interface Studio {
   id: string
@@ -24,6 +25,8 @@ export interface Invitation {
   studioId: string
   studioName: string
   email: string
+  /** The teacher's personal note in the e-mail, if any. */
+  message: string | null
   status: InvitationStatus
   expiresAt: string
   sentAt: string
@@ -32,11 +35,50 @@ export interface Invitation {
   createdAt: string
 }
 
+export const INVITE_MESSAGE_MAX = 1000
+export const INVITE_BATCH_MAX = 20
+
+/** What became of each address of a batch: invited, sent a new link, or already a member. */
+export interface InvitationBatchResult {
+  email: string
+  outcome: 'sent' | 'resent' | 'member'
+  invitation: Invitation | null
+}
+
+/** An open link for a studio: anyone with it may join, up to `maxUses` times until `expiresAt`. */
+export interface InviteLink {
+  id: string
+  studioId: string
+  studioName: string
+  maxUses: number
+  uses: number
+  status: 'open' | 'used-up' | 'expired' | 'revoked'
+  expiresAt: string
+  createdAt: string
+}
+
+export const InviteLinkCreateSchema = z.object({
+  maxUses: z
+    .number('Give a number of uses.')
+    .int('Give a whole number.')
+    .min(1, 'At least one use.')
+    .max(500, 'At most 500 uses.')
+    .default(30),
+  days: z
+    .number('Give a number of days.')
+    .int('Give whole days.')
+    .min(1, 'At least one day.')
+    .max(30, 'At most 30 days.')
+    .default(14),
+})
+export type InviteLinkCreateInput = z.input<typeof InviteLinkCreateSchema>
+
 /** What the acceptance page shows before the student decides. */
 export interface InvitationPreview {
   studioName: string
   teacherName: string
-  email: string
+  /** The invited address; null for an open link (any student may join with it). */
+  email: string | null
   expiresAt: string
   accountExists: boolean
 }

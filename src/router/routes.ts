@@ -76,6 +76,10 @@ export const routes: RouteRecordRaw[] = [
     'Student',
     ['teacher'],
   ),
+  signedIn('/messages', 'messages', () => import('../views/MessagesView.vue'), 'Messages', [
+    'teacher',
+    'student',
+  ]),
   signedIn('/plans', 'my-plans', () => import('../views/MyPlansView.vue'), 'My plans', ['student']),
   open(
     '/invitations/accept',

@@ -35,11 +35,17 @@ export const useStudioStore = defineStore('studio', () => {
       await studiosApi.deleteStudio(id)
       studios.value = studios.value.filter((s) => s.id !== id)
     },
-    async inviteStudent(studioId: string, email: string) {
-      const result = await invitationsApi.invite(studioId, email)
+    async inviteStudent(studioId: string, email: string, message?: string) {
+      const result = await invitationsApi.invite(studioId, email, message)
       keepInvitation(result.invitation)
       void loadStudios()
       return result
+    },
+    async inviteStudents(studioId: string, emails: string[], message?: string) {
+      const { results } = await invitationsApi.inviteMany(studioId, emails, message)
+      for (const r of results) if (r.invitation) keepInvitation(r.invitation)
+      void loadStudios()
+      return results
     },
     async resendInvitation(id: string) {
       const { invitation } = await invitationsApi.resendInvitation(id)

@@ -95,7 +95,7 @@ describe('teacher studio', () => {
     await teacher.waitForURL('**/studio')
     await expect.poll(() => teacher.getByTestId('roster').textContent()).toContain('Noor Halvorsen')
     await teacher.getByTestId('invite-open').click()
-    await teacher.getByLabel("Student's e-mail").fill(NEW_STUDENT.email)
+    await teacher.getByLabel("Students' e-mails").fill(NEW_STUDENT.email)
     await teacher.getByRole('button', { name: 'Send invitation' }).click()
     await expect
       .poll(() => teacher.getByTestId('invite-sent').textContent())

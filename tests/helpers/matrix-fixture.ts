@@ -43,6 +43,9 @@ export interface Fixture {
   lessonNoteId: string
   shareToken: string
   shareToRevokeToken: string
+  messageId: string
+  messageToDeleteId: string
+  inviteLinkId: string
 }
 
 export const BASS = {
@@ -129,6 +132,24 @@ async function lessonsAndShares(people: Awaited<ReturnType<typeof cast>>, f: Fix
   }
 }
 
+/** Two messages of the teacher to the student (one to delete) and an open invitation link. */
+async function messagesAndLink(people: Awaited<ReturnType<typeof cast>>) {
+  const { teacher, student } = people
+  const write = async (subject: string) =>
+    (
+      await teacher.agent
+        .post('/api/messages')
+        .send({ to: { kind: 'students', studentIds: [student.user.id] }, subject, body: 'Hi' })
+    ).body.message.id as string
+  const link = await teacher.agent
+    .post(`/api/studio/studios/${teacher.studioId}/invite-links`)
+    .send({})
+  return {
+    ...{ messageId: await write('Kept'), messageToDeleteId: await write('Removable') },
+    inviteLinkId: link.body.link.id as string,
+  }
+}
+
 /** Builds the whole fixture through the API (and the database where no API exists). */
 export async function buildFixture(api: TestApi) {
   const people = await cast(api)
@@ -172,7 +193,11 @@ export async function buildFixture(api: TestApi) {
     instrumentId: instrument.body.instrument.id,
     mailId: kept.mailId,
   } as Fixture
-  return { ...fixture, ...(await lessonsAndShares(people, fixture)) }
+  return {
+    ...fixture,
+    ...(await lessonsAndShares(people, fixture)),
+    ...(await messagesAndLink(people)),
+  }
 }
 
 /** A fresh session cookie for the role's user (every call gets its own, so sign-outs harm nothing). */

@@ -4,6 +4,7 @@ import { TEST_PASSWORD, uniqueEmail } from './api'
 import { attemptInput } from './attempt-input'
 import { BASS, freshId, type Fixture } from './matrix-fixture'
 import { LESSON_ROWS, SHARE_ROWS } from './route-rows-lessons'
+import { ACCOUNT_ROWS, INVITE_ROWS, MESSAGE_ROWS } from './route-rows-reach'
 import {
   all,
   get,
@@ -128,6 +129,9 @@ export const ROWS: Record<string, Row> = {
   'GET /api/progress/cycle-position': [progress('cycle-position', '&scale=major'), studentData],
   ...SHARE_ROWS,
   ...LESSON_ROWS,
+  ...ACCOUNT_ROWS,
+  ...MESSAGE_ROWS,
+  ...INVITE_ROWS,
   'GET /api/studio/studios': [get(() => '/api/studio/studios'), teachers(200, 200)],
   'POST /api/studio/studios': [
     send(

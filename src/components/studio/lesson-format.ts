@@ -1,6 +1,7 @@
 // How lessons read: "Tue 8 Dec, 16:30" in the viewer's time zone, status words, "since" figures.
 import type { Lesson, SinceLastLesson } from '@/api/lessons'
 import type { LessonStatus } from '@/contract/lessons'
+import { dateTimeText } from '@/composables/local-dates'
 
 export const LESSON_STATUS: Record<LessonStatus, { text: string; color?: string }> = {
   scheduled: { text: 'Scheduled' },
@@ -9,7 +10,7 @@ export const LESSON_STATUS: Record<LessonStatus, { text: string; color?: string 
 }
 
 export const lessonWhen = (lesson: Lesson) =>
-  new Date(lesson.startsAt).toLocaleString(undefined, {
+  dateTimeText(lesson.startsAt, {
     weekday: 'short',
     day: 'numeric',
     month: 'short',

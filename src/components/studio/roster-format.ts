@@ -3,6 +3,7 @@ import type { RosterRow, RosterStatus } from '@/api/roster'
 import { toUnicode } from '@/theory'
 import { calendarDaysBetween } from '@/contract/local-time'
 import { ROSTER_STATUS_TEXT } from '@/contract/roster'
+import { dateText, shownZone } from '@/composables/local-dates'
 
 export const STATUS_LABEL: Record<RosterStatus, { text: string; color: string }> = {
   behind: { text: ROSTER_STATUS_TEXT.behind, color: 'error' },
@@ -12,8 +13,8 @@ export const STATUS_LABEL: Record<RosterStatus, { text: string; color: string }>
 
 export const percent = (v: number | null) => (v === null ? '–' : `${Math.round(v * 100)} %`)
 
-/** The viewer's IANA time zone (the browser's). */
-export const viewerTimeZone = () => Intl.DateTimeFormat().resolvedOptions().timeZone
+/** The viewer's IANA time zone (their account's). */
+export const viewerTimeZone = shownZone
 
 /** "today", "yesterday", "3 days ago": calendar days in the viewer's time zone, not 24-hour blocks. */
 export function lastPractice(
@@ -26,7 +27,7 @@ export function lastPractice(
   if (days <= 0) return 'today'
   if (days === 1) return 'yesterday'
   if (days < 14) return `${days} days ago`
-  return new Date(iso).toLocaleDateString()
+  return dateText(iso, {})
 }
 
 /** "12 % faster (1.4 s)", "steady (1.9 s)", or "–" without two weeks of figures. */
