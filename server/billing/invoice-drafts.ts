@@ -7,6 +7,7 @@ import type { InvoiceCreateInput, InvoiceLine } from '../../src/contract/billing
 import { ownStudio } from './billing-service'
 import * as invoices from './invoices-repository'
 import * as prices from './prices-repository'
+import { formatMoney, perLesson } from '../../src/contract/money'
 
 type Lesson = Awaited<ReturnType<typeof invoices.lessonsToBill>>[number]
 
@@ -31,7 +32,7 @@ async function packageDraft(ctx: AppContext, teacher: PublicUser, input: Invoice
   const studio = await ownStudio(ctx, teacher, found.studioId)
   await studentInStudio(ctx, studio.studioId, input.studentId)
   const line: InvoiceLine = {
-    description: `${found.name}: ${found.lessons} lessons, valid ${found.validWeeks} weeks from payment`,
+    description: `${found.name}: ${found.lessons} lessons (${formatMoney(perLesson(found.amountMinor, found.lessons), studio.currency)} each), valid ${found.validWeeks} weeks from payment`,
     amountMinor: found.amountMinor,
     lessonId: null,
   }

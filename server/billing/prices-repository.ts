@@ -47,13 +47,11 @@ export async function saveSettings(
   input: { currency: CurrencyCode; paymentDays: number; prices: LessonPrice[] },
 ) {
   await db.transaction(async (trx) => {
-    await trx('studio_billing')
-      .where({ studio_id: studioId })
-      .update({
-        currency: input.currency,
-        payment_days: input.paymentDays,
-        updated_at: trx.fn.now(),
-      })
+    await trx('studio_billing').where({ studio_id: studioId }).update({
+      currency: input.currency,
+      payment_days: input.paymentDays,
+      updated_at: trx.fn.now(),
+    })
     await trx('lesson_prices').where({ studio_id: studioId }).delete()
     if (input.prices.length)
       await trx('lesson_prices').insert(
