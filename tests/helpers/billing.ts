@@ -58,3 +58,22 @@ export function postEvent(api: TestApi, event: { payload: string; header: string
     .set('Stripe-Signature', event.header)
     .send(event.payload)
 }
+
+/** What the route matrix bills: a package to retire, drafts to issue and delete, open invoices. */
+export async function billingFixture(teacher: Agent & { studioId: string }, studentId: string) {
+  const { packageId } = await priceStudio(teacher)
+  const spare = await teacher.agent
+    .post(`/api/billing/studios/${teacher.studioId}/packages`)
+    .send({ name: 'Spare', lessons: 4, validWeeks: 6, amountMinor: 18000 })
+  const draft = async () =>
+    (await teacher.agent.post('/api/billing/invoices').send({ studentId, packageId })).body.invoice
+      .id as string
+  return {
+    packageId,
+    packageToRetireId: spare.body.package.id as string,
+    draftInvoiceId: await draft(),
+    draftToDeleteId: await draft(),
+    openInvoiceId: (await issuedPackageInvoice(teacher, studentId, packageId)).id,
+    invoiceToVoidId: (await issuedPackageInvoice(teacher, studentId, packageId)).id,
+  }
+}
