@@ -38,7 +38,13 @@ export const invoiceIdOfPayment = async (db: Db | Knex.Transaction, paymentInten
     string | undefined
 
 /** Open invoices whose reminder of this kind is due and not yet sent. */
-export async function remindersDue(db: Db, kind: 'before_due' | 'overdue', daysBefore = 3) {
+export async function remindersDue(
+  db: Db,
+  kind: 'before_due' | 'overdue',
+  today: string,
+  limit: number,
+  daysBefore = 3,
+) {
   return db('invoices as i')
     .join('users as u', 'u.id', 'i.student_id')
     .join('studios as s', 's.id', 'i.studio_id')
@@ -48,10 +54,11 @@ export async function remindersDue(db: Db, kind: 'before_due' | 'overdue', daysB
     )
     .modify((q) => {
       if (kind === 'before_due')
-        q.whereRaw('i.due_on between current_date and current_date + ?::int', [daysBefore])
-      else q.whereRaw('i.due_on < current_date')
+        q.whereRaw('i.due_on between ?::date and ?::date + ?::int', [today, today, daysBefore])
+      else q.whereRaw('i.due_on < ?::date', [today])
     })
-    .limit(200)
+    .orderBy('i.due_on')
+    .limit(limit)
     .select('i.id', 'i.number', 'i.total_minor', 'i.currency', db.raw('i.due_on::text as due_on'))
     .select('u.email', 'u.name as student_name', 's.name as studio_name') as Promise<
     {

@@ -4,6 +4,7 @@ import { afterAll, beforeAll, describe, expect, it } from 'vitest'
 import { signedInAdmin, startTestApi, waitForMail, type TestApi } from '../helpers/api'
 import { issuedPackageInvoice, lessonsWith, priceStudio } from '../helpers/billing'
 import { studentIn, teacherWithStudio, type Agent } from '../helpers/studio'
+import { sendInvoiceReminders } from '../../server/billing/reminders-service'
 import { binary, embeddedFonts, readPdf } from '../helpers/pdf-reader'
 
 let api: TestApi
@@ -23,13 +24,11 @@ afterAll(() => api.close())
 describe('prices', () => {
   it('when a teacher sets prices in KWD, then they come back in minor units with the currency', async () => {
     const own = await teacherWithStudio(api.app, 'Dinar Teacher')
-    const res = await own.agent
-      .put(`/api/billing/studios/${own.studioId}`)
-      .send({
-        currency: 'KWD',
-        paymentDays: 7,
-        prices: [{ durationMinutes: 60, amountMinor: 12500 }],
-      })
+    const res = await own.agent.put(`/api/billing/studios/${own.studioId}`).send({
+      currency: 'KWD',
+      paymentDays: 7,
+      prices: [{ durationMinutes: 60, amountMinor: 12500 }],
+    })
     expect(res.status).toBe(200)
     expect(res.body.settings).toMatchObject({
       currency: 'KWD',
@@ -165,5 +164,36 @@ describe('ledger and totals', () => {
     expect(eur.totalMinor).toBeGreaterThan(0)
     expect(JSON.stringify(totals.body)).not.toContain('Billing Student')
     expect((await admin.agent.get('/api/billing/invoices')).status).toBe(403)
+  })
+})
+
+describe('reminders', () => {
+  const remindersTo = async (email: string) =>
+    (
+      await api.ctx
+        .db('captured_mail')
+        .whereRaw('? = any(recipients)', [email])
+        .where('subject', 'like', 'Reminder:%')
+        .orderBy('id')
+        .select('subject')
+    ).map((m) => m.subject as string)
+
+  it('when an open invoice nears and passes its due date, then one reminder each, however often the job runs', async () => {
+    const pupil = await studentIn(api.app, api.ctx, teacher.studioId, 'Late Student')
+    const invoice = await issuedPackageInvoice(teacher, pupil.user.id, packageId)
+    const now = new Date('2030-05-10T09:00:00Z')
+    await api.ctx.db('invoices').where({ id: invoice.id }).update({ due_on: '2030-05-12' })
+    await sendInvoiceReminders(api.ctx, now)
+    await sendInvoiceReminders(api.ctx, now)
+    await api.ctx.db('invoices').where({ id: invoice.id }).update({ due_on: '2030-05-09' })
+    await sendInvoiceReminders(api.ctx, now)
+    await sendInvoiceReminders(api.ctx, now)
+    for (let i = 0; i < 50 && (await remindersTo(pupil.email)).length < 2; i++)
+      await new Promise((r) => setTimeout(r, 100))
+    await new Promise((r) => setTimeout(r, 300)) // a third, wrongly sent one would be in by now
+    expect(await remindersTo(pupil.email)).toEqual([
+      `Reminder: invoice ${invoice.number} from Studio of Billing Teacher is due on 2030-05-12`,
+      `Reminder: invoice ${invoice.number} from Studio of Billing Teacher was due on 2030-05-09`,
+    ])
   })
 })
