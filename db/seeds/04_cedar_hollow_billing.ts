@@ -8,8 +8,8 @@ const daysAgo = (days: number) => new Date(Date.now() - days * DAY_MS)
 const dateIn = (days: number) => new Date(Date.now() + days * DAY_MS).toISOString().slice(0, 10)
 
 const PACKAGES = [
-  { name: 'Four lessons', lessons: 4, valid_weeks: 6, amount_minor: 15000 },
-  { name: 'Ten lessons', lessons: 10, valid_weeks: 16, amount_minor: 36000 },
+  { name: 'Four lessons', lessons: 4, valid_weeks: 6, amount_minor: 15000, each: '€37.50' },
+  { name: 'Ten lessons', lessons: 10, valid_weeks: 16, amount_minor: 36000, each: '€36.00' },
 ]
 
 async function people(knex: Knex) {
@@ -24,7 +24,9 @@ async function people(knex: Knex) {
   }
 }
 
-function packageInvoice(pkg: { id: string } & (typeof PACKAGES)[number], at: number) {
+type Package = { id: string } & (typeof PACKAGES)[number]
+
+function packageInvoice(pkg: Package, at: number) {
   return {
     currency: 'EUR',
     total_minor: pkg.amount_minor,
@@ -33,7 +35,44 @@ function packageInvoice(pkg: { id: string } & (typeof PACKAGES)[number], at: num
     package_weeks: pkg.valid_weeks,
     issued_at: daysAgo(at),
     due_on: dateIn(14 - at),
-    line: `${pkg.name}: ${pkg.lessons} lessons, valid ${pkg.valid_weeks} weeks from payment`,
+    line: `${pkg.name}: ${pkg.lessons} lessons (${pkg.each} each), valid ${pkg.valid_weeks} weeks from payment`,
+  }
+}
+
+/** Prices per lesson length and the two packages; answers the packages with their ids. */
+async function insertPrices(trx: Knex.Transaction, studio: string) {
+  await trx('studio_billing').insert({ studio_id: studio, currency: 'EUR', next_number: 5 })
+  await trx('lesson_prices').insert(
+    [
+      [30, 2800],
+      [45, 4000],
+      [60, 5200],
+    ].map(([minutes, amount]) => ({
+      studio_id: studio,
+      duration_minutes: minutes,
+      amount_minor: amount,
+    })),
+  )
+  const rows = await trx('lesson_packages')
+    .insert(PACKAGES.map(({ each: _, ...p }) => ({ ...p, studio_id: studio })))
+    .returning('id')
+  return PACKAGES.map((p, i) => ({ ...p, id: rows[i].id as string }))
+}
+
+type SeedInvoice = Record<string, unknown> & { line: string; lesson_id?: string | null }
+
+async function insertInvoices(trx: Knex.Transaction, studio: string, invoices: SeedInvoice[]) {
+  for (const { line, lesson_id, ...invoice } of invoices) {
+    const [row] = await trx('invoices')
+      .insert({ studio_id: studio, ...invoice })
+      .returning('id')
+    await trx('invoice_lines').insert({
+      invoice_id: row.id,
+      lesson_id: lesson_id ?? null,
+      description: line,
+      position: 0,
+      amount_minor: invoice.total_minor,
+    })
   }
 }
 
@@ -42,23 +81,9 @@ export async function seed(knex: Knex): Promise<void> {
   if (!studio || !noor || !rafe || !tobiah) return
   if (await knex('studio_billing').where({ studio_id: studio }).first('studio_id')) return
   await knex.transaction(async (trx) => {
-    await trx('studio_billing').insert({ studio_id: studio, currency: 'EUR', next_number: 5 })
-    await trx('lesson_prices').insert(
-      [
-        [30, 2800],
-        [45, 4000],
-        [60, 5200],
-      ].map(([minutes, amount]) => ({
-        studio_id: studio,
-        duration_minutes: minutes,
-        amount_minor: amount,
-      })),
-    )
-    const [four, ten] = await trx('lesson_packages')
-      .insert(PACKAGES.map((p) => ({ ...p, studio_id: studio })))
-      .returning('*')
+    const [four, ten] = (await insertPrices(trx, studio)) as [Package, Package]
     const rafeLesson = await trx('lessons').where({ student_id: rafe }).first('id')
-    const invoices = [
+    await insertInvoices(trx, studio, [
       {
         student_id: rafe,
         number: 1,
@@ -80,18 +105,6 @@ export async function seed(knex: Knex): Promise<void> {
       },
       { student_id: tobiah, number: 3, status: 'open', ...packageInvoice(four, 3) },
       { student_id: noor, number: 4, status: 'open', ...packageInvoice(ten, 1) },
-    ]
-    for (const { line, lesson_id, ...invoice } of invoices) {
-      const [row] = await trx('invoices')
-        .insert({ studio_id: studio, ...invoice })
-        .returning('id')
-      await trx('invoice_lines').insert({
-        invoice_id: row.id,
-        lesson_id: lesson_id ?? null,
-        description: line,
-        position: 0,
-        amount_minor: invoice.total_minor,
-      })
-    }
+    ])
   })
 }
