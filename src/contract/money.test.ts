@@ -1,5 +1,5 @@
 // Money in minor units: exponents and rounding per currency. Source of the exponents: ISO 4217
-// (table A.1, column "Minor unit"): EUR 2, USD 2, JPY 0, KWD 3, BHD 3, ISK 0.
+// (table A.1, column "Minor unit"): EUR 2, USD 2, JPY 0, KRW 0, KWD 3, BHD 3.
 import { describe, expect, it } from 'vitest'
 import {
   allocate,
@@ -17,7 +17,7 @@ describe('minor-unit exponents (ISO 4217)', () => {
     ['JPY', 0], // ISO 4217: yen, 0
     ['KWD', 3], // ISO 4217: Kuwaiti dinar, 3
     ['BHD', 3], // ISO 4217: Bahraini dinar, 3
-    ['ISK', 0], // ISO 4217: Icelandic króna, 0
+    ['KRW', 0], // ISO 4217: South Korean won, 0
   ])('%s has %i decimal places', (code, exponent) => {
     expect(minorExponent(code)).toBe(exponent)
   })

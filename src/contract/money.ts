@@ -4,7 +4,8 @@
 
 /**
  * Currencies a studio may bill in, with their minor-unit exponent as ISO 4217 lists it
- * (ISO 4217:2015, table A.1 "Current currency & funds code list", column "Minor unit").
+ * (ISO 4217:2015, table A.1 "Current currency & funds code list", column "Minor unit"). Left out:
+ * currencies whose minor unit the payment service counts differently from ISO 4217 (ISK).
  */
 export const CURRENCY_EXPONENTS = {
   AUD: 2,
@@ -16,7 +17,6 @@ export const CURRENCY_EXPONENTS = {
   EUR: 2,
   GBP: 2,
   HUF: 2,
-  ISK: 0,
   JOD: 3,
   JPY: 0,
   KRW: 0,
