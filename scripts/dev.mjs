@@ -4,6 +4,7 @@
 import { ensureDependencies, prepareDatabase } from './lib/setup.mjs'
 import { log, startService, stopService } from './lib/proc.mjs'
 import { APP_DATABASE, DATA_DIR, databaseUrl, localSecret } from './lib/paths.mjs'
+import { startLocalPayments } from './fakes/payments-fake.mjs'
 
 const API_PORT = Number(process.env.API_PORT ?? 3000)
 const VITE_PORT = Number(process.env.VITE_PORT ?? 5173)
@@ -13,8 +14,10 @@ const db = await import('./db.mjs')
 const startedDb = await db.startCluster()
 await prepareDatabase(APP_DATABASE)
 
+const payments = await startLocalPayments(`http://127.0.0.1:${API_PORT}`)
 const env = {
   ...process.env,
+  ...payments.env,
   DATABASE_URL: databaseUrl(APP_DATABASE),
   JWT_SECRET: process.env.JWT_SECRET ?? localSecret('jwt'),
   AMBITUS_DATA_DIR: DATA_DIR,

@@ -4,6 +4,7 @@
 import { ensureClientBuild, ensureDependencies, prepareDatabase } from './lib/setup.mjs'
 import { log, startService, stopService } from './lib/proc.mjs'
 import { APP_DATABASE, DATA_DIR, databaseUrl, localSecret } from './lib/paths.mjs'
+import { startLocalPayments } from './fakes/payments-fake.mjs'
 
 const PORT = Number(process.env.PORT ?? 3000)
 const SMTP_PORT = Number(process.env.SMTP_PORT ?? 2525)
@@ -33,8 +34,11 @@ try {
   await stopAll(1)
 }
 
+// The payment-service fake (keys made up now) unless STRIPE_SECRET_KEY names a real account.
+const payments = await startLocalPayments(`http://127.0.0.1:${PORT}`)
 const env = {
   ...process.env,
+  ...payments.env,
   DATABASE_URL: databaseUrl(APP_DATABASE),
   JWT_SECRET: process.env.JWT_SECRET ?? localSecret('jwt'),
   AMBITUS_DATA_DIR: DATA_DIR,

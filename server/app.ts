@@ -28,6 +28,7 @@ import { lessonRoutes } from './lessons/lessons-routes'
 import { messageRoutes } from './messages/messages-routes'
 import { worksheetRoutes } from './worksheets/worksheets-routes'
 import { shareRoutes } from './shares/shares-routes'
+import { billingRoutes, mountBillingWebhook } from './billing/billing-routes'
 
 // Same-origin only; blob: for recorded audio, audio worklets and exported board images.
 const CSP_DIRECTIVES = {
@@ -41,6 +42,7 @@ const CSP_DIRECTIVES = {
 
 function apiRouter(ctx: AppContext) {
   const api = express.Router()
+  mountBillingWebhook(api, ctx) // signed raw body: before the CSRF check and the JSON parser
   api.use(requireCsrfHeader)
   api.use(express.json({ limit: '256kb' }))
   api.use(rejectNulText)
@@ -62,6 +64,7 @@ function apiRouter(ctx: AppContext) {
   api.use('/focus', focusRoutes(ctx))
   api.use('/worksheets', worksheetRoutes(ctx))
   api.use('/shares', shareRoutes(ctx))
+  api.use('/billing', billingRoutes(ctx))
   api.use(apiNotFound)
   return api
 }

@@ -50,6 +50,10 @@ const ConfigSchema = z.object({
   uploadsPerUser: z.coerce.number().int().min(1).default(2), // recordings one account sends at once
   // Test files share one database; each app instance may keep its counters apart with a scope.
   rateLimitScope: z.string().default(''),
+  // The payment service (Stripe's API, or the local fake our scripts start): keys only from here.
+  stripeSecretKey: z.string().min(1).optional(),
+  stripeWebhookSecret: z.string().min(1).optional(),
+  stripeApiUrl: z.url().optional(),
 })
 
 export type Config = z.infer<typeof ConfigSchema>
@@ -81,6 +85,9 @@ export function loadConfig(
     signupsPerHour: env.SIGNUP_RATE_LIMIT,
     mailSendsPerHour: env.MAIL_RATE_LIMIT,
     uploadsPerUser: env.UPLOADS_PER_USER,
+    stripeSecretKey: env.STRIPE_SECRET_KEY || undefined,
+    stripeWebhookSecret: env.STRIPE_WEBHOOK_SECRET || undefined,
+    stripeApiUrl: env.STRIPE_API_URL || undefined,
     ...overrides,
   })
   if (!parsed.success) {

@@ -2,6 +2,7 @@
 // the teachers' digests. What was sent is in notification_log, so restarts never resend.
 import type { AppContext } from '../context'
 import { digestDue, sendDueSoonReminders, sendWeeklyDigests } from './digest-service'
+import { sendInvoiceReminders } from '../billing/reminders-service'
 
 const DEFAULT_INTERVAL_MS = 10 * 60 * 1000
 const FIRST_RUN_MS = 60 * 1000
@@ -9,7 +10,8 @@ const FIRST_RUN_MS = 60 * 1000
 export async function runScheduledJobs(ctx: AppContext, now = new Date()) {
   const reminders = await sendDueSoonReminders(ctx, now)
   const digests = digestDue(now) ? await sendWeeklyDigests(ctx, now) : { sent: 0 }
-  return { reminders: reminders.sent, digests: digests.sent }
+  const invoices = await sendInvoiceReminders(ctx, now)
+  return { reminders: reminders.sent, digests: digests.sent, invoiceReminders: invoices.sent }
 }
 
 export function startScheduler(ctx: AppContext, intervalMs = DEFAULT_INTERVAL_MS) {
@@ -19,7 +21,8 @@ export function startScheduler(ctx: AppContext, intervalMs = DEFAULT_INTERVAL_MS
     running = true
     try {
       const result = await runScheduledJobs(ctx)
-      if (result.reminders || result.digests) ctx.logger.info(result, 'scheduled mail sent')
+      if (result.reminders || result.digests || result.invoiceReminders)
+        ctx.logger.info(result, 'scheduled mail sent')
     } catch (err) {
       ctx.logger.error({ err }, 'scheduled mail failed')
     } finally {

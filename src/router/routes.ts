@@ -100,6 +100,7 @@ export const routes: RouteRecordRaw[] = [
     () => import('../views/InstrumentsView.vue'),
     'Instruments',
   ),
+  signedIn('/billing', 'billing', () => import('../views/BillingView.vue'), 'Billing'),
   signedIn('/account', 'account', () => import('../views/AccountView.vue'), 'Account'),
   open('/:pathMatch(.*)*', 'not-found', () => import('../views/NotFoundView.vue'), 'Not found'),
 ]

@@ -18,6 +18,7 @@ import { issueSessionToken } from '../../server/auth/sessions'
 import { CSRF_HEADER, CSRF_VALUE } from '../../server/lib/csrf'
 import { insertUser, toPublicUser } from '../../server/users/users-repository'
 import { createStatistics } from '../../server/statistics/statistics-queue'
+import { startPaymentsFake, type PaymentsFake } from '../../scripts/fakes/payments-fake.mjs'
 
 export const TEST_PASSWORD = 'correct horse battery'
 // One session key per test process (the app under test signs and checks cookies with it).
@@ -30,6 +31,8 @@ export interface TestApi {
   bareApp: Express
   ctx: AppContext
   sink: MailSink
+  /** The local payment-service fake this app's Stripe SDK talks to (webhooks: setWebhookUrl). */
+  payments: PaymentsFake
   close(): Promise<void>
 }
 
@@ -49,7 +52,14 @@ export async function startTestApi(
   })
   const db = createDb(base.databaseUrl)
   const sink = await startMailSink(db, 0)
-  const config = { ...base, smtpPort: sink.port }
+  const payments = await startPaymentsFake()
+  const config = {
+    ...base,
+    smtpPort: sink.port,
+    stripeSecretKey: payments.secretKey,
+    stripeWebhookSecret: payments.webhookSecret,
+    stripeApiUrl: payments.url,
+  }
   const mailer = createMailer(config)
   const logger = logLines
     ? createLogger('info', { write: (line: string) => void logLines.push(line) })
@@ -65,8 +75,10 @@ export async function startTestApi(
     bareApp,
     ctx,
     sink,
+    payments,
     async close() {
       mailer.close()
+      await payments.close()
       await sink.close()
       await db.destroy()
     },

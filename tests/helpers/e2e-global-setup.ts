@@ -8,6 +8,7 @@ import { createDatabase, dropDatabase, startCluster } from '../../scripts/db.mjs
 import { databaseUrl, TEST_E2E_DATABASE, TEST_OUTPUT_DIR } from '../../scripts/lib/paths.mjs'
 import { freePort, startService, stopService } from '../../scripts/lib/proc.mjs'
 import { ensureClientBuild, prepareDatabase } from '../../scripts/lib/setup.mjs'
+import { startLocalPayments } from '../../scripts/fakes/payments-fake.mjs'
 
 declare module 'vitest' {
   export interface ProvidedContext {
@@ -38,8 +39,10 @@ export default async function setup(project: TestProject) {
   await ensureClientBuild(DIST)
 
   const [port, smtpPort] = [await freePort(), await freePort()]
+  const payments = await startLocalPayments(`http://127.0.0.1:${port}`, {})
   const env = {
     ...process.env,
+    ...payments.env,
     DATABASE_URL: databaseUrl(TEST_E2E_DATABASE),
     PORT: String(port),
     SMTP_PORT: String(smtpPort),
@@ -63,5 +66,6 @@ export default async function setup(project: TestProject) {
 
   return async () => {
     await Promise.all(children.map((child) => stopService(child)))
+    await payments.close()
   }
 }

@@ -5,6 +5,7 @@ import { randomUUID } from 'node:crypto'
 import { issueSessionToken } from '../../server/auth/sessions'
 import { sessionCookieName } from '../../server/auth/session-token'
 import { signedInAdmin, signedInAgent, uniqueEmail, waitForMail, type TestApi } from './api'
+import { billingFixture } from './billing'
 import { createPlan, joinStudio, studentIn, teacherWithStudio, wavFile, type Agent } from './studio'
 
 export const ROLES = [
@@ -46,6 +47,7 @@ export interface Fixture {
   messageId: string
   messageToDeleteId: string
   inviteLinkId: string
+  billing: Awaited<ReturnType<typeof billingFixture>>
 }
 
 export const BASS = {
@@ -192,6 +194,7 @@ export async function buildFixture(api: TestApi) {
     token: previewed.token, // resending rotates kept's token
     instrumentId: instrument.body.instrument.id,
     mailId: kept.mailId,
+    billing: await billingFixture(teacher, student.user.id),
   } as Fixture
   return {
     ...fixture,

@@ -21,6 +21,78 @@ import { planBody, RECALL_ITEM, wavFile } from './studio'
 const progress = (what: string, query = '') =>
   get((f) => `/api/progress/${what}?student=${f.users.student.id}${query}`)
 const plan = (f: Fixture) => `/api/plans/${f.planId}`
+const prices = (f: Fixture) => `/api/billing/studios/${f.studioId}`
+const invoice = (id: (b: Fixture['billing']) => string) => (f: Fixture) =>
+  `/api/billing/invoices/${id(f.billing)}`
+
+// Billing: a studio's money is its teacher's; a student reads and pays only their own invoices;
+// admins get totals only. The webhook answers everyone without a valid signature with 400.
+const BILLING_ROWS: Record<string, Row> = {
+  'POST /api/billing/webhook': [
+    send(
+      () => '/api/billing/webhook',
+      () => ({ id: 'evt_x' }),
+    ),
+    all(400),
+  ],
+  'GET /api/billing/studios/:studioId': [get(prices), teachers(200)],
+  'PUT /api/billing/studios/:studioId': [
+    send(prices, () => ({
+      currency: 'EUR',
+      paymentDays: 14,
+      prices: [{ durationMinutes: 45, amountMinor: 4500 }],
+    })),
+    teachers(200),
+  ],
+  'POST /api/billing/studios/:studioId/packages': [
+    send(
+      (f) => `${prices(f)}/packages`,
+      () => ({ name: 'Four', lessons: 4, validWeeks: 6, amountMinor: 18000 }),
+    ),
+    teachers(201),
+  ],
+  'DELETE /api/billing/packages/:id': [
+    get((f) => `/api/billing/packages/${f.billing.packageToRetireId}`),
+    teachers(204),
+  ],
+  'GET /api/billing/invoices': [
+    get(() => '/api/billing/invoices'),
+    { ...signedIn(200), admin: 403 },
+  ],
+  'POST /api/billing/invoices': [
+    send(
+      () => '/api/billing/invoices',
+      (f) => ({ studentId: f.users.student.id, packageId: f.billing.packageId }),
+    ),
+    teachers(201),
+  ],
+  'POST /api/billing/invoices/:id/issue': [
+    get((f) => `${invoice((b) => b.draftInvoiceId)(f)}/issue`),
+    teachers(200),
+  ],
+  'POST /api/billing/invoices/:id/void': [
+    get((f) => `${invoice((b) => b.invoiceToVoidId)(f)}/void`),
+    teachers(200),
+  ],
+  'POST /api/billing/invoices/:id/refund': [
+    get((f) => `${invoice((b) => b.openInvoiceId)(f)}/refund`),
+    teachers(409), // open, not paid: nothing to refund
+  ],
+  'GET /api/billing/invoices/:id/pdf': [
+    get((f) => `${invoice((b) => b.openInvoiceId)(f)}/pdf`),
+    only({ student: 200, teacher: 200 }),
+  ],
+  'POST /api/billing/invoices/:id/checkout': [
+    get((f) => `${invoice((b) => b.openInvoiceId)(f)}/checkout`),
+    only({ student: 200 }),
+  ],
+  'DELETE /api/billing/invoices/:id': [get(invoice((b) => b.draftToDeleteId)), teachers(204)],
+  'GET /api/billing/ledger': [
+    get((f) => `/api/billing/ledger?student=${f.users.student.id}`),
+    only({ student: 200, teacher: 200 }),
+  ],
+  'GET /api/billing/totals': [get(() => '/api/billing/totals'), only({ admin: 200 })],
+}
 const assignment = (f: Fixture) => `/api/assignments/${f.assignmentId}`
 
 // Rows run in this order; within a row the callers who succeed go last, so a delete is refused to
@@ -132,6 +204,7 @@ export const ROWS: Record<string, Row> = {
   ...ACCOUNT_ROWS,
   ...MESSAGE_ROWS,
   ...INVITE_ROWS,
+  ...BILLING_ROWS,
   'GET /api/studio/studios': [get(() => '/api/studio/studios'), teachers(200, 200)],
   'POST /api/studio/studios': [
     send(
