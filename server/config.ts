@@ -50,9 +50,35 @@ const ConfigSchema = z.object({
   uploadsPerUser: z.coerce.number().int().min(1).default(2), // recordings one account sends at once
   // Test files share one database; each app instance may keep its counters apart with a scope.
   rateLimitScope: z.string().default(''),
+  // Object storage for recordings: a bucket when S3_BUCKET is set (npm start starts a local one).
+  s3: z
+    .object({
+      endpoint: z.url().optional(),
+      bucket: z.string().min(3),
+      region: z.string().min(1).default('us-east-1'),
+      forcePathStyle: z.boolean(),
+      accessKeyId: z.string().min(1, 'AWS_ACCESS_KEY_ID is required with S3_BUCKET'),
+      secretAccessKey: z.string().min(1, 'AWS_SECRET_ACCESS_KEY is required with S3_BUCKET'),
+      sessionToken: z.string().optional(),
+    })
+    .optional(),
 })
 
 export type Config = z.infer<typeof ConfigSchema>
+
+/** The bucket settings from S3_* and AWS_* variables, or undefined (recordings on local disk). */
+function bucketOf(env: NodeJS.ProcessEnv) {
+  if (!env.S3_BUCKET) return undefined
+  return {
+    endpoint: env.S3_ENDPOINT || undefined,
+    bucket: env.S3_BUCKET,
+    region: env.S3_REGION || undefined,
+    forcePathStyle: flag(env.S3_FORCE_PATH_STYLE) ?? Boolean(env.S3_ENDPOINT),
+    accessKeyId: env.AWS_ACCESS_KEY_ID ?? '',
+    secretAccessKey: env.AWS_SECRET_ACCESS_KEY ?? '',
+    sessionToken: env.AWS_SESSION_TOKEN || undefined,
+  }
+}
 
 /** Builds the configuration from environment variables, with local defaults for development. */
 export function loadConfig(
@@ -81,6 +107,7 @@ export function loadConfig(
     signupsPerHour: env.SIGNUP_RATE_LIMIT,
     mailSendsPerHour: env.MAIL_RATE_LIMIT,
     uploadsPerUser: env.UPLOADS_PER_USER,
+    s3: bucketOf(env),
     ...overrides,
   })
   if (!parsed.success) {
