@@ -50,6 +50,13 @@ const ConfigSchema = z.object({
   uploadsPerUser: z.coerce.number().int().min(1).default(2), // recordings one account sends at once
   // Test files share one database; each app instance may keep its counters apart with a scope.
   rateLimitScope: z.string().default(''),
+  // The scheduler of each process (due-soon reminders, digests): first tick, then every interval.
+  schedulerFirstRunMs: z.coerce.number().int().min(0).default(60_000),
+  schedulerIntervalMs: z.coerce
+    .number()
+    .int()
+    .min(100)
+    .default(10 * 60_000),
   // Object storage for recordings: a bucket when S3_BUCKET is set (npm start starts a local one).
   s3: z
     .object({
@@ -107,6 +114,8 @@ export function loadConfig(
     signupsPerHour: env.SIGNUP_RATE_LIMIT,
     mailSendsPerHour: env.MAIL_RATE_LIMIT,
     uploadsPerUser: env.UPLOADS_PER_USER,
+    schedulerFirstRunMs: env.SCHEDULER_FIRST_RUN_MS,
+    schedulerIntervalMs: env.SCHEDULER_INTERVAL_MS,
     s3: bucketOf(env),
     ...overrides,
   })

@@ -1,10 +1,12 @@
-// A small in-process scheduler: every few minutes it sends due-soon reminders and, once per week,
-// the teachers' digests. What was sent is in notification_log, so restarts never resend.
+// A small scheduler in every app process: each tick sends due-soon reminders and, once per week, the
+// teachers' digests. One process at a time runs the job (advisory lock); what was sent is in
+// notification_log, so neither a restart nor a second process ever resends.
 import type { AppContext } from '../context'
+import { runAlone } from '../lib/job-lock'
 import { digestDue, sendDueSoonReminders, sendWeeklyDigests } from './digest-service'
 
-const DEFAULT_INTERVAL_MS = 10 * 60 * 1000
-const FIRST_RUN_MS = 60 * 1000
+/** The lock and scheduled_runs name of the mail job. */
+export const MAIL_JOB = 'scheduled-mail'
 
 export async function runScheduledJobs(ctx: AppContext, now = new Date()) {
   const reminders = await sendDueSoonReminders(ctx, now)
@@ -12,22 +14,29 @@ export async function runScheduledJobs(ctx: AppContext, now = new Date()) {
   return { reminders: reminders.sent, digests: digests.sent }
 }
 
-export function startScheduler(ctx: AppContext, intervalMs = DEFAULT_INTERVAL_MS) {
+/** One tick: the mail job unless another process runs it right now. */
+export async function scheduledTick(ctx: AppContext, now = new Date()) {
+  const run = await runAlone(ctx.db, MAIL_JOB, () => runScheduledJobs(ctx, now))
+  return run.ran ? run.result : null
+}
+
+export function startScheduler(ctx: AppContext) {
   let running = false
   const tick = async () => {
     if (running) return
     running = true
     try {
-      const result = await runScheduledJobs(ctx)
-      if (result.reminders || result.digests) ctx.logger.info(result, 'scheduled mail sent')
+      const result = await scheduledTick(ctx)
+      if (result?.reminders || result?.digests) ctx.logger.info(result, 'scheduled mail sent')
     } catch (err) {
       ctx.logger.error({ err }, 'scheduled mail failed')
     } finally {
       running = false
     }
   }
-  const first = setTimeout(tick, FIRST_RUN_MS).unref()
-  const timer = setInterval(tick, intervalMs).unref()
+  const { schedulerFirstRunMs, schedulerIntervalMs } = ctx.config
+  const first = setTimeout(tick, schedulerFirstRunMs).unref()
+  const timer = setInterval(tick, schedulerIntervalMs).unref()
   return {
     stop() {
       clearTimeout(first)

@@ -7,6 +7,7 @@ import type { TestProject } from 'vitest/node'
 import { createDatabase, dropDatabase, startCluster } from '../../scripts/db.mjs'
 import { databaseUrl, TEST_E2E_DATABASE, TEST_OUTPUT_DIR } from '../../scripts/lib/paths.mjs'
 import { freePort, startService, stopService } from '../../scripts/lib/proc.mjs'
+import { ensureObjectStore } from '../../scripts/fakes/s3.mjs'
 import { ensureClientBuild, prepareDatabase } from '../../scripts/lib/setup.mjs'
 
 declare module 'vitest' {
@@ -38,8 +39,9 @@ export default async function setup(project: TestProject) {
   await ensureClientBuild(DIST)
 
   const [port, smtpPort] = [await freePort(), await freePort()]
+  const objectStore = await ensureObjectStore(path.join(TEST_OUTPUT_DIR, 'data'))
   const env = {
-    ...process.env,
+    ...objectStore.env,
     DATABASE_URL: databaseUrl(TEST_E2E_DATABASE),
     PORT: String(port),
     SMTP_PORT: String(smtpPort),
@@ -63,5 +65,6 @@ export default async function setup(project: TestProject) {
 
   return async () => {
     await Promise.all(children.map((child) => stopService(child)))
+    await objectStore.close()
   }
 }
