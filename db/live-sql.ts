@@ -26,6 +26,7 @@ const QUEUE_STORED_ATTEMPTS = `insert into rollup_queue (attempt_id, user_id)
 
 export const LIVE_SQL: readonly LiveObject[] = [
   { file: 'progress_tail.sql', functions: ['progress_tail'] },
+  { file: 'attempt_partitions.sql', functions: ['ensure_attempt_partitions'] },
   { file: 'progress_rollup.sql', functions: ['progress_rollup'] },
   { file: 'progress_runs_rollup.sql', functions: ['progress_runs_rollup'] },
   {

@@ -1,12 +1,14 @@
-// A small scheduler in every app process: each tick sends due-soon reminders and, once per week, the
-// teachers' digests. One process at a time runs the job (advisory lock); what was sent is in
-// notification_log, so neither a restart nor a second process ever resends.
+// A small scheduler in every app process: each tick creates the coming months' answer partitions,
+// sends due-soon reminders and, once per week, the teachers' digests. One process at a time runs a
+// job (advisory lock); what was sent is in notification_log, so no restart or process resends.
+import { ensureMonthPartitions } from '../attempts/attempts-repository'
 import type { AppContext } from '../context'
 import { runAlone } from '../lib/job-lock'
 import { digestDue, sendDueSoonReminders, sendWeeklyDigests } from './digest-service'
 
 /** The lock and scheduled_runs name of the mail job. */
 export const MAIL_JOB = 'scheduled-mail'
+export const PARTITIONS_JOB = 'attempt-partitions'
 
 export async function runScheduledJobs(ctx: AppContext, now = new Date()) {
   const reminders = await sendDueSoonReminders(ctx, now)
@@ -14,8 +16,9 @@ export async function runScheduledJobs(ctx: AppContext, now = new Date()) {
   return { reminders: reminders.sent, digests: digests.sent }
 }
 
-/** One tick: the mail job unless another process runs it right now. */
+/** One tick: each job unless another process runs it right now; the mail job's result or null. */
 export async function scheduledTick(ctx: AppContext, now = new Date()) {
+  await runAlone(ctx.db, PARTITIONS_JOB, () => ensureMonthPartitions(ctx.db))
   const run = await runAlone(ctx.db, MAIL_JOB, () => runScheduledJobs(ctx, now))
   return run.ran ? run.result : null
 }
