@@ -30,6 +30,13 @@ begin
 end
 $do$`
 
+// The secondary indexes the table had before.
+const INDEXES = [
+  'attempts_user_time on attempts (user_id, created_at)',
+  'attempts_user_session on attempts (user_id, session_id)',
+  'attempts_plan_item on attempts (plan_item_id) where plan_item_id is not null',
+]
+
 export async function up(knex: Knex): Promise<void> {
   await knex.raw('alter table attempts rename to attempts_unpartitioned')
   await knex.raw(
@@ -45,11 +52,7 @@ export async function up(knex: Knex): Promise<void> {
   await knex.raw('alter table attempts rename constraint attempts_pkey2 to attempts_pkey')
   // The statistics drain finds queued answers by id alone; the rest as before.
   await knex.raw('create index attempts_id on attempts (id)')
-  await knex.raw('create index attempts_user_time on attempts (user_id, created_at)')
-  await knex.raw('create index attempts_user_session on attempts (user_id, session_id)')
-  await knex.raw(
-    'create index attempts_plan_item on attempts (plan_item_id) where plan_item_id is not null',
-  )
+  for (const index of INDEXES) await knex.raw(`create index ${index}`)
 }
 
 export async function down(knex: Knex): Promise<void> {
@@ -60,9 +63,5 @@ export async function down(knex: Knex): Promise<void> {
     add foreign key (instrument_id) references instruments(id) on delete set null`)
   await knex.raw('insert into attempts select * from attempts_partitioned')
   await knex.raw('drop table attempts_partitioned')
-  await knex.raw('create index attempts_user_time on attempts (user_id, created_at)')
-  await knex.raw('create index attempts_user_session on attempts (user_id, session_id)')
-  await knex.raw(
-    'create index attempts_plan_item on attempts (plan_item_id) where plan_item_id is not null',
-  )
+  for (const index of INDEXES) await knex.raw(`create index ${index}`)
 }

@@ -34,6 +34,7 @@ const BY_STUDENT = new Set([
   'plan_assignments',
   'sessions',
   'users',
+  'studio_members',
 ])
 const LEARNERS = [10_000, 100_000, 1_000_000]
 
