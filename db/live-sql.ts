@@ -26,6 +26,7 @@ const QUEUE_STORED_ATTEMPTS = `insert into rollup_queue (attempt_id, user_id)
 
 export const LIVE_SQL: readonly LiveObject[] = [
   { file: 'progress_tail.sql', functions: ['progress_tail'] },
+  { file: 'attempt_partitions.sql', functions: ['ensure_attempt_partitions'] },
   { file: 'progress_rollup.sql', functions: ['progress_rollup'] },
   { file: 'progress_runs_rollup.sql', functions: ['progress_runs_rollup'] },
   {
@@ -60,5 +61,6 @@ export async function installLiveSql(db: Knex): Promise<void> {
 export async function migrateToLatest(db: Knex): Promise<string[]> {
   const [, applied] = (await db.migrate.latest()) as [number, string[]]
   await installLiveSql(db)
+  await db.raw('select ensure_attempt_partitions(3)') // a server stopped for months finds them too
   return applied
 }

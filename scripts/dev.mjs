@@ -3,6 +3,7 @@
 // the API in watch mode on :${API_PORT:-3000}; Vite proxies /api to it.
 import { ensureDependencies, prepareDatabase } from './lib/setup.mjs'
 import { log, startService, stopService } from './lib/proc.mjs'
+import { ensureObjectStore } from './fakes/s3.mjs'
 import { APP_DATABASE, DATA_DIR, databaseUrl, localSecret } from './lib/paths.mjs'
 import { startLocalPayments } from './fakes/payments-fake.mjs'
 
@@ -13,10 +14,11 @@ await ensureDependencies()
 const db = await import('./db.mjs')
 const startedDb = await db.startCluster()
 await prepareDatabase(APP_DATABASE)
+const objectStore = await ensureObjectStore(DATA_DIR)
 
 const payments = await startLocalPayments(`http://127.0.0.1:${API_PORT}`)
 const env = {
-  ...process.env,
+  ...objectStore.env,
   ...payments.env,
   DATABASE_URL: databaseUrl(APP_DATABASE),
   JWT_SECRET: process.env.JWT_SECRET ?? localSecret('jwt'),
@@ -45,6 +47,7 @@ log('dev', `open http://127.0.0.1:${VITE_PORT} (API on :${API_PORT}); Ctrl-C sto
 
 async function stopAll() {
   await Promise.all(children.map((child) => stopService(child)))
+  await objectStore.close()
   if (startedDb) db.stopCluster()
   process.exit(0)
 }

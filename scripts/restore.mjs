@@ -2,7 +2,7 @@
 // npm run db:restore -- <file|latest> [--yes]: replaces the app database with a db:backup archive.
 // Locally the archive is restored into a new database first and swapped in only when that worked;
 // the data it replaces is saved as a before-restore-… backup. Without --yes it asks on a terminal.
-import { existsSync } from 'node:fs'
+import { existsSync, rmSync } from 'node:fs'
 import path from 'node:path'
 import { createInterface } from 'node:readline/promises'
 import { pathToFileURL } from 'node:url'
@@ -63,10 +63,23 @@ async function restoreLocal(database, file) {
   } else await db.renameDatabase(staging, database)
 }
 
-/** Another server (DATABASE_URL): objects are dropped and recreated in one transaction. */
+/**
+ * Another server (DATABASE_URL): the public schema is emptied and the archive restored in one
+ * transaction (psql). pg_restore --clean cannot drop the keys of partitioned tables (attempts).
+ */
 async function restoreExternal(url, file) {
   await keepCurrent(url)
-  await pgRestore(url, file, ['--clean', '--if-exists'])
+  const script = `${file}.restore.sql`
+  try {
+    await backups.runTool('pg_restore', url, ['--no-owner', '--no-acl', `--file=${script}`, file], {
+      withDatabase: false,
+    })
+    const psql = ['-X', '-q', '--single-transaction', '-v', 'ON_ERROR_STOP=1']
+    const empty = 'drop schema public cascade; create schema public;'
+    await backups.runTool('psql', url, [...psql, '-c', empty, '-f', script])
+  } finally {
+    rmSync(script, { force: true })
+  }
 }
 
 async function keepCurrent(url) {

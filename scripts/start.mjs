@@ -1,8 +1,10 @@
 #!/usr/bin/env node
-// npm start: all set-up (dependencies, PostgreSQL, migrations, demo data, client build), then the
-// SMTP sink and the app on http://127.0.0.1:${PORT:-3000}. Ctrl-C stops everything cleanly.
+// npm start: all set-up (dependencies, PostgreSQL, migrations, demo data, client build, the local
+// object store unless S3_ENDPOINT is set), then the SMTP sink and WEB_CONCURRENCY app processes on
+// http://127.0.0.1:${PORT:-3000}. Ctrl-C stops everything cleanly.
 import { ensureClientBuild, ensureDependencies, prepareDatabase } from './lib/setup.mjs'
-import { log, startService, stopService } from './lib/proc.mjs'
+import { log, runOrThrow, startService, stopService } from './lib/proc.mjs'
+import { ensureObjectStore } from './fakes/s3.mjs'
 import { APP_DATABASE, DATA_DIR, databaseUrl, localSecret } from './lib/paths.mjs'
 import { startLocalPayments } from './fakes/payments-fake.mjs'
 
@@ -14,12 +16,14 @@ const db = await import('./db.mjs')
 const startedDb = await db.startCluster()
 const children = []
 let stopping = false
+let objectStore
 
 async function stopAll(code = 0) {
   if (stopping) return
   stopping = true
   log('start', 'stopping…')
   await Promise.all(children.map((child) => stopService(child)))
+  await objectStore?.close()
   if (startedDb) db.stopCluster()
   process.exit(code)
 }
@@ -29,6 +33,7 @@ process.on('SIGTERM', () => stopAll(0))
 try {
   await prepareDatabase(APP_DATABASE)
   await ensureClientBuild()
+  objectStore = await ensureObjectStore(DATA_DIR)
 } catch (error) {
   console.error(error.message)
   await stopAll(1)
@@ -37,7 +42,7 @@ try {
 // The payment-service fake (keys made up now) unless STRIPE_SECRET_KEY names a real account.
 const payments = await startLocalPayments(`http://127.0.0.1:${PORT}`)
 const env = {
-  ...process.env,
+  ...objectStore.env,
   ...payments.env,
   DATABASE_URL: databaseUrl(APP_DATABASE),
   JWT_SECRET: process.env.JWT_SECRET ?? localSecret('jwt'),
@@ -49,7 +54,8 @@ const tsx = ['--import', 'tsx']
 children.push(
   startService('mail', process.execPath, [...tsx, 'server/mail-sink/index.ts'], { env }),
 )
-const api = startService('api', process.execPath, [...tsx, 'server/index.ts'], { env })
+await runOrThrow(process.execPath, [...tsx, 'scripts/recordings-to-bucket.ts'], { env })
+const api = startService('api', process.execPath, [...tsx, 'server/cluster.ts'], { env })
 children.push(api)
 for (const child of children) child.on('exit', (code) => !stopping && stopAll(code ?? 1))
 

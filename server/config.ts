@@ -54,9 +54,42 @@ const ConfigSchema = z.object({
   stripeSecretKey: z.string().min(1).optional(),
   stripeWebhookSecret: z.string().min(1).optional(),
   stripeApiUrl: z.url().optional(),
+  // The scheduler of each process (due-soon reminders, digests): first tick, then every interval.
+  schedulerFirstRunMs: z.coerce.number().int().min(0).default(60_000),
+  schedulerIntervalMs: z.coerce
+    .number()
+    .int()
+    .min(100)
+    .default(10 * 60_000),
+  // Object storage for recordings: a bucket when S3_BUCKET is set (npm start starts a local one).
+  s3: z
+    .object({
+      endpoint: z.url().optional(),
+      bucket: z.string().min(3),
+      region: z.string().min(1).default('us-east-1'),
+      forcePathStyle: z.boolean(),
+      accessKeyId: z.string().min(1, 'AWS_ACCESS_KEY_ID is required with S3_BUCKET'),
+      secretAccessKey: z.string().min(1, 'AWS_SECRET_ACCESS_KEY is required with S3_BUCKET'),
+      sessionToken: z.string().optional(),
+    })
+    .optional(),
 })
 
 export type Config = z.infer<typeof ConfigSchema>
+
+/** The bucket settings from S3_* and AWS_* variables, or undefined (recordings on local disk). */
+function bucketOf(env: NodeJS.ProcessEnv) {
+  if (!env.S3_BUCKET) return undefined
+  return {
+    endpoint: env.S3_ENDPOINT || undefined,
+    bucket: env.S3_BUCKET,
+    region: env.S3_REGION || undefined,
+    forcePathStyle: flag(env.S3_FORCE_PATH_STYLE) ?? Boolean(env.S3_ENDPOINT),
+    accessKeyId: env.AWS_ACCESS_KEY_ID ?? '',
+    secretAccessKey: env.AWS_SECRET_ACCESS_KEY ?? '',
+    sessionToken: env.AWS_SESSION_TOKEN || undefined,
+  }
+}
 
 /** Builds the configuration from environment variables, with local defaults for development. */
 export function loadConfig(
@@ -88,6 +121,9 @@ export function loadConfig(
     stripeSecretKey: env.STRIPE_SECRET_KEY || undefined,
     stripeWebhookSecret: env.STRIPE_WEBHOOK_SECRET || undefined,
     stripeApiUrl: env.STRIPE_API_URL || undefined,
+    schedulerFirstRunMs: env.SCHEDULER_FIRST_RUN_MS,
+    schedulerIntervalMs: env.SCHEDULER_INTERVAL_MS,
+    s3: bucketOf(env),
     ...overrides,
   })
   if (!parsed.success) {

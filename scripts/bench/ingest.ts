@@ -2,7 +2,8 @@
 // of attempts as 20-row INSERTs (the raw baseline of this run), then autocannon posts batches of 20
 // attempts to POST /api/attempts for signed-in students (the API as its own process, on loopback, for
 // a bounded time), saturated and paced at half its capacity, while the statistics queue's depth and
-// lag are sampled. Prints requests/s, rows/s, p99, the ratio and the queue figures.
+// lag are sampled; then saturated again on 1 and on 2 app processes (WEB_CONCURRENCY). Prints
+// requests/s, rows/s, p99, the ratios and the queue figures.
 import { availableParallelism, loadavg } from 'node:os'
 import { randomUUID } from 'node:crypto'
 import autocannon from 'autocannon'
@@ -160,6 +161,35 @@ async function sampledQueue<T>(url: string, work: Promise<T>) {
   return { result, maxDepth, maxLagMs, drainMs }
 }
 
+/** Waits until the API on the port answers (bounded: a dead server fails the runs instead). */
+async function healthy(port: number) {
+  for (let i = 0; i < 200; i++) {
+    const ok = await fetch(`http://127.0.0.1:${port}/api/health`).then(
+      (r) => r.ok,
+      () => false,
+    )
+    if (ok) return
+    await new Promise((r) => setTimeout(r, 150))
+  }
+}
+
+/** The saturated API run against WEB_CONCURRENCY app processes (node:cluster) sharing one port. */
+async function processesRun(env: NodeJS.ProcessEnv, processes: number) {
+  const port = await freePort()
+  const cluster = startService(
+    `bench-api×${processes}`,
+    process.execPath,
+    ['--import', 'tsx', 'server/cluster.ts'],
+    { env: { ...env, PORT: String(port), WEB_CONCURRENCY: String(processes) } },
+  )
+  try {
+    await healthy(port)
+    return await apiRun(`http://127.0.0.1:${port}`, players)
+  } finally {
+    await stopService(cluster)
+  }
+}
+
 const url = await freshBenchDatabase(`${BENCH_DATABASE}_ingest`)
 const config = loadConfig({ ...process.env, DATABASE_URL: url, JWT_SECRET: localSecret('jwt') })
 const db = knex(knexConfig(url))
@@ -198,16 +228,7 @@ const server = startService(
   },
 )
 try {
-  for (let i = 0; i < 100; i++) {
-    if (
-      await fetch(`http://127.0.0.1:${port}/api/health`).then(
-        (r) => r.ok,
-        () => false,
-      )
-    )
-      break
-    await new Promise((r) => setTimeout(r, 150))
-  }
+  await healthy(port)
   console.log(
     `machine load: ${loadavg()[0]!.toFixed(1)} (1-min average) on ${availableParallelism()} cores`,
   )
@@ -261,3 +282,10 @@ try {
 } finally {
   await stopService(server)
 }
+// Scale-out: the same saturated load on 1 and on 2 app processes (one port, node:cluster). On a
+// machine of 2 shared cores PostgreSQL and autocannon compete with the second process.
+const one = await processesRun(env, 1)
+const two = await processesRun(env, 2)
+console.log(
+  `ingest processes: 1 process ${one.rps.toFixed(0)} req/s (p99 ${one.p99} ms), 2 processes ${two.rps.toFixed(0)} req/s (p99 ${two.p99} ms), ratio 2/1 = ${(two.rps / one.rps).toFixed(2)}; ${one.failed + two.failed} failed`,
+)

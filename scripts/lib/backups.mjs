@@ -57,14 +57,18 @@ export function rotate(database, keep, prefix = '') {
   return old
 }
 
-/** Runs a PostgreSQL client tool on a database URL; the password travels in PGPASSWORD. */
-export function runTool(tool, url, args) {
+/**
+ * Runs a PostgreSQL client tool on a database URL; the password travels in PGPASSWORD.
+ * `withDatabase: false` leaves the URL out (pg_restore writing a script to a file).
+ */
+export function runTool(tool, url, args, { withDatabase = true } = {}) {
   const target = new URL(url)
   const env = { ...process.env, PGPASSWORD: decodeURIComponent(target.password) }
   target.password = ''
   const file = path.join(ensureInstalled(), tool)
   return new Promise((resolve, reject) => {
-    execFile(file, [...args, `--dbname=${target.href}`], { env }, (error, stdout, stderr) => {
+    const database = withDatabase ? [`--dbname=${target.href}`] : []
+    execFile(file, [...args, ...database], { env }, (error, stdout, stderr) => {
       if (error) reject(toolFailure(`${tool} failed`, { stderr, message: error.message }))
       else resolve(stdout)
     })

@@ -76,13 +76,13 @@ export function recordingRoutes(ctx: AppContext, router: Router) {
   router.post('/:id/recordings', requireRole('student'), async (req, res) => {
     const { id } = parse(AssignmentIdParamsSchema, req, 'params')
     await checkUploader(ctx, req.user!, id)
-    const release = takeUploadSlot(ctx, req.user!.id)
+    const release = await takeUploadSlot(ctx, req.user!.id)
     try {
       const upload = await receiveRecording(ctx, req, res)
       const recording = await fileUpload(ctx, req, { assignmentId: id, upload })
       res.status(201).json({ recording })
     } finally {
-      release()
+      await release()
     }
   })
   router.get('/:id/recordings/:recordingId/audio', async (req, res) => {

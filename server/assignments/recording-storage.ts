@@ -1,5 +1,5 @@
-// Where recording bytes live: a small interface (put / size / get with a byte range / delete) with a
-// local-disk implementation under `${dataDir}/recordings`, so a hosted object store can replace it.
+// Where recording bytes live: a small interface (put / size / get with a byte range / delete), kept in
+// a bucket when S3_BUCKET is set (recording-storage-s3.ts), else on local disk under the data folder.
 import { randomBytes } from 'node:crypto'
 import { createReadStream, createWriteStream } from 'node:fs'
 import { mkdir, rename, rm, stat } from 'node:fs/promises'
@@ -7,6 +7,7 @@ import path from 'node:path'
 import type { Readable } from 'node:stream'
 import { pipeline } from 'node:stream/promises'
 import type { AppContext } from '../context'
+import { bucketRecordingStorage } from './recording-storage-s3'
 
 /** Inclusive byte offsets, as in an HTTP Range header. */
 export interface ByteRange {
@@ -61,13 +62,17 @@ export function localRecordingStorage(root: string): RecordingStorage {
   }
 }
 
+/** Where the disk store keeps takes (and where the move into a bucket finds older ones). */
+export const diskRecordingsDir = (dataDir: string) => path.join(dataDir, 'recordings')
+
 const storages = new WeakMap<AppContext, RecordingStorage>()
 
 /** The storage for this app instance (one per context, so tests can point dataDir elsewhere). */
 export function recordingStorage(ctx: AppContext): RecordingStorage {
   let storage = storages.get(ctx)
   if (!storage) {
-    storage = localRecordingStorage(path.join(ctx.config.dataDir, 'recordings'))
+    const { s3, dataDir } = ctx.config
+    storage = s3 ? bucketRecordingStorage(s3) : localRecordingStorage(diskRecordingsDir(dataDir))
     storages.set(ctx, storage)
   }
   return storage

@@ -1,9 +1,11 @@
 // Receiving a take: multer streams the file part straight into recording storage (never a 20 MB
-// buffer), size-capped; and a per-account cap on uploads in flight (429 beyond UPLOADS_PER_USER).
+// buffer), size-capped; and a per-account cap on uploads in flight across all app processes (429
+// beyond UPLOADS_PER_USER).
 import type { Request, Response } from 'express'
 import multer, { type StorageEngine } from 'multer'
 import type { AppContext } from '../context'
 import { AppError, badRequest } from '../lib/errors'
+import { peek, take, undo } from '../lib/rate-counters'
 import { MAX_RECORDING_BYTES } from './assignments-schema'
 import { newStorageKey, recordingStorage, type RecordingStorage } from './recording-storage'
 
@@ -69,31 +71,37 @@ export function receiveRecording(
   })
 }
 
-const inFlight = new WeakMap<AppContext, Map<string, number>>()
+// Slots in flight are a counter in rate_limits, so every app process sees the same count; a process
+// that dies mid-upload cannot free its slot, so the count also ends with its window.
+const SLOT_WINDOW_MS = 15 * 60 * 1000
+const slotKey = (ctx: AppContext, userId: string) => `${ctx.config.rateLimitScope}uploads:${userId}`
 
 /** Takes one of the account's upload slots (429 when all are busy); call the result to free it. */
-export function takeUploadSlot(ctx: AppContext, userId: string): () => void {
-  let counts = inFlight.get(ctx)
-  if (!counts) inFlight.set(ctx, (counts = new Map()))
-  const busy = counts.get(userId) ?? 0
-  if (busy >= ctx.config.uploadsPerUser) {
+export async function takeUploadSlot(
+  ctx: AppContext,
+  userId: string,
+): Promise<() => Promise<void>> {
+  const key = slotKey(ctx, userId)
+  const slot = await take(ctx.db, key, {
+    limit: ctx.config.uploadsPerUser,
+    windowMs: SLOT_WINDOW_MS,
+  })
+  if (!slot.allowed) {
     throw new AppError(
       'too_many_uploads',
       'Another recording of yours is still uploading; wait for it to finish, then try again.',
       429,
     )
   }
-  counts.set(userId, busy + 1)
   let freed = false
-  return () => {
+  return async () => {
     if (freed) return
     freed = true
-    const left = (counts.get(userId) ?? 1) - 1
-    if (left > 0) counts.set(userId, left)
-    else counts.delete(userId)
+    await undo(ctx.db, key)
   }
 }
 
-/** How many uploads of the account are in flight now (for tests and diagnostics). */
-export const uploadsInFlight = (ctx: AppContext, userId: string) =>
-  inFlight.get(ctx)?.get(userId) ?? 0
+/** How many uploads of the account are in flight now, across processes (tests, diagnostics). */
+export async function uploadsInFlight(ctx: AppContext, userId: string) {
+  return (await peek(ctx.db, slotKey(ctx, userId)))?.hits ?? 0
+}

@@ -85,16 +85,26 @@ export async function assignedPlanItemIds(db: Db, userId: string, ids: string[])
 const INSERTED_COLUMNS = Object.keys(attemptRow('', {} as AttemptInput)).join(', ')
 
 /**
- * Inserts the attempts whose ids are new; ids already stored (by anyone) are left untouched. The
- * batch travels as one JSON parameter (not one binding per field), which keeps a 200-answer batch a
- * single small statement for PostgreSQL to plan and the API to build.
+ * Inserts the attempts whose ids are new; ids already stored (by anyone) are left untouched: the
+ * id index spans the monthly partitions, the key (player, id, time) catches a resend in flight. The batch travels as one JSON parameter (not one binding per field), which
+ * keeps a 200-answer batch a single small statement for PostgreSQL to plan and the API to build.
  */
 export async function insertNewAttempts(db: Db, userId: string, attempts: AttemptInput[]) {
   const { rows } = await db.raw<{ rows: AttemptRow[] }>(
     `insert into attempts (${INSERTED_COLUMNS})
-     select ${INSERTED_COLUMNS} from json_populate_recordset(null::attempts, ?::json)
-     on conflict (id) do nothing returning *`,
+     select ${INSERTED_COLUMNS} from json_populate_recordset(null::attempts, ?::json) r
+     where not exists (select 1 from attempts a where a.id = r.id)
+     on conflict (user_id, id, created_at) do nothing returning *`,
     [JSON.stringify(attempts.map((a) => attemptRow(userId, a)))],
   )
   return rows
+}
+
+/** Creates the monthly partitions of attempts up to `monthsAhead` months on; resolves to how many. */
+export async function ensureMonthPartitions(db: Db, monthsAhead = 3): Promise<number> {
+  const { rows } = await db.raw<{ rows: { created: number }[] }>(
+    'select ensure_attempt_partitions(?::int) as created',
+    [monthsAhead],
+  )
+  return rows[0]!.created
 }

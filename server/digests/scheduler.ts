@@ -1,11 +1,15 @@
-// A small in-process scheduler: every few minutes it sends due-soon reminders and, once per week,
-// the teachers' digests. What was sent is in notification_log, so restarts never resend.
+// A small scheduler in every app process: each tick creates the coming months' answer partitions,
+// sends due-soon reminders and, once per week, the teachers' digests. One process at a time runs a
+// job (advisory lock); what was sent is in notification_log, so no restart or process resends.
+import { ensureMonthPartitions } from '../attempts/attempts-repository'
 import type { AppContext } from '../context'
+import { runAlone } from '../lib/job-lock'
 import { digestDue, sendDueSoonReminders, sendWeeklyDigests } from './digest-service'
 import { sendInvoiceReminders } from '../billing/reminders-service'
 
-const DEFAULT_INTERVAL_MS = 10 * 60 * 1000
-const FIRST_RUN_MS = 60 * 1000
+/** The lock and scheduled_runs name of the mail job. */
+export const MAIL_JOB = 'scheduled-mail'
+export const PARTITIONS_JOB = 'attempt-partitions'
 
 export async function runScheduledJobs(ctx: AppContext, now = new Date()) {
   const reminders = await sendDueSoonReminders(ctx, now)
@@ -14,14 +18,21 @@ export async function runScheduledJobs(ctx: AppContext, now = new Date()) {
   return { reminders: reminders.sent, digests: digests.sent, invoiceReminders: invoices.sent }
 }
 
-export function startScheduler(ctx: AppContext, intervalMs = DEFAULT_INTERVAL_MS) {
+/** One tick: each job unless another process runs it right now; the mail job's result or null. */
+export async function scheduledTick(ctx: AppContext, now = new Date()) {
+  await runAlone(ctx.db, PARTITIONS_JOB, () => ensureMonthPartitions(ctx.db))
+  const run = await runAlone(ctx.db, MAIL_JOB, () => runScheduledJobs(ctx, now))
+  return run.ran ? run.result : null
+}
+
+export function startScheduler(ctx: AppContext) {
   let running = false
   const tick = async () => {
     if (running) return
     running = true
     try {
-      const result = await runScheduledJobs(ctx)
-      if (result.reminders || result.digests || result.invoiceReminders)
+      const result = await scheduledTick(ctx)
+      if (result?.reminders || result?.digests || result?.invoiceReminders)
         ctx.logger.info(result, 'scheduled mail sent')
     } catch (err) {
       ctx.logger.error({ err }, 'scheduled mail failed')
@@ -29,8 +40,9 @@ export function startScheduler(ctx: AppContext, intervalMs = DEFAULT_INTERVAL_MS
       running = false
     }
   }
-  const first = setTimeout(tick, FIRST_RUN_MS).unref()
-  const timer = setInterval(tick, intervalMs).unref()
+  const { schedulerFirstRunMs, schedulerIntervalMs } = ctx.config
+  const first = setTimeout(tick, schedulerFirstRunMs).unref()
+  const timer = setInterval(tick, schedulerIntervalMs).unref()
   return {
     stop() {
       clearTimeout(first)

@@ -28,7 +28,11 @@ async function answersHealth(url: string) {
 }
 
 /** An API process on `databaseUrl` with the given session key (cookies signed with it work). */
-export async function apiProcess(databaseUrl: string, jwtSecret: string): Promise<ApiProcess> {
+export async function apiProcess(
+  databaseUrl: string,
+  jwtSecret: string,
+  moreEnv: Record<string, string> = {},
+): Promise<ApiProcess> {
   const port = await freePort()
   const url = `http://127.0.0.1:${port}`
   const env = {
@@ -40,6 +44,7 @@ export async function apiProcess(databaseUrl: string, jwtSecret: string): Promis
     LOG_LEVEL: 'silent',
     CLIENT_DIST: '/nonexistent',
     SMTP_PORT: String(await freePort()),
+    ...moreEnv,
   }
   let child: ChildProcess | undefined
   return {

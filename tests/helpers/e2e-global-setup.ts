@@ -7,6 +7,7 @@ import type { TestProject } from 'vitest/node'
 import { createDatabase, dropDatabase, startCluster } from '../../scripts/db.mjs'
 import { databaseUrl, TEST_E2E_DATABASE, TEST_OUTPUT_DIR } from '../../scripts/lib/paths.mjs'
 import { freePort, startService, stopService } from '../../scripts/lib/proc.mjs'
+import { ensureObjectStore } from '../../scripts/fakes/s3.mjs'
 import { ensureClientBuild, prepareDatabase } from '../../scripts/lib/setup.mjs'
 import { startLocalPayments } from '../../scripts/fakes/payments-fake.mjs'
 
@@ -40,8 +41,9 @@ export default async function setup(project: TestProject) {
 
   const [port, smtpPort] = [await freePort(), await freePort()]
   const payments = await startLocalPayments(`http://127.0.0.1:${port}`, {})
+  const objectStore = await ensureObjectStore(path.join(TEST_OUTPUT_DIR, 'data'))
   const env = {
-    ...process.env,
+    ...objectStore.env,
     ...payments.env,
     DATABASE_URL: databaseUrl(TEST_E2E_DATABASE),
     PORT: String(port),
@@ -67,5 +69,6 @@ export default async function setup(project: TestProject) {
   return async () => {
     await Promise.all(children.map((child) => stopService(child)))
     await payments.close()
+    await objectStore.close()
   }
 }
