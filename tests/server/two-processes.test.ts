@@ -137,6 +137,6 @@ describe('two app processes', () => {
       await trx.raw('select pg_advisory_xact_lock(?::int, hashtext(?))', [0x416d4a62, MAIL_JOB])
       expect(await scheduledTick(api.ctx)).toBeNull()
     })
-    expect(await scheduledTick(api.ctx)).toEqual({ reminders: 0, digests: 0 })
+    expect(await scheduledTick(api.ctx)).toEqual({ reminders: 0, digests: 0, invoiceReminders: 0 })
   })
 })
