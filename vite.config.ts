@@ -103,7 +103,8 @@ export default defineConfig({
           include: ['tests/e2e/**/*.spec.ts'],
           globalSetup: ['tests/helpers/e2e-global-setup.ts'],
           // Spec files run side by side; each works with its own demo people (see DEVELOPERS.md).
-          testTimeout: 90_000,
+          // The longest walks (a played take, a shared exercise) need minutes on a loaded machine.
+          testTimeout: 180_000,
           hookTimeout: 180_000,
           // The browser waits on a server that shares two cores with other spec files.
           expect: { poll: { timeout: 15_000, interval: 100 } },
