@@ -2,11 +2,11 @@
 // Project-local PostgreSQL: installs Debian's server when missing, keeps this checkout's own cluster
 // (see lib/cluster-home.mjs for where), listens on 127.0.0.1 only.
 // Usage: node scripts/db.mjs start|stop|status|create <db>|drop <db>|url [db]|destroy
-import { chownSync, existsSync, readFileSync, rmSync, writeFileSync } from 'node:fs'
+import { chownSync, existsSync, readFileSync, renameSync, rmSync, writeFileSync } from 'node:fs'
 import net from 'node:net'
 import path from 'node:path'
 import { pathToFileURL } from 'node:url'
-import { PG_HOST, PG_PORT, PG_USER, databaseUrl, localSecret } from './lib/paths.mjs'
+import { DATA_DIR, PG_HOST, PG_PORT, PG_USER, databaseUrl, localSecret } from './lib/paths.mjs'
 import { log } from './lib/proc.mjs'
 import {
   IS_ROOT,
@@ -42,6 +42,21 @@ function initCluster(bin) {
   } finally {
     rmSync(pwFile, { force: true })
   }
+}
+
+/**
+ * A shared-home cluster left by an earlier checkout at this path (deleted, then cloned again): its
+ * password went with that checkout's data folder, so it is moved aside (kept, never deleted) and a
+ * new one is made.
+ */
+function setAsideOrphan() {
+  const { cluster, shared } = clusterLocation()
+  if (!shared || !existsSync(path.join(cluster, 'PG_VERSION'))) return
+  if (existsSync(path.join(DATA_DIR, 'postgres.secret'))) return
+  if (runningPort() !== null) stopCluster()
+  const aside = `${cluster}.orphaned-${Date.now()}`
+  renameSync(cluster, aside)
+  log('db', `an earlier checkout's cluster (password unknown here) moved aside to ${aside}`)
 }
 
 /** The port the running cluster listens on, or null when it is not running. */
@@ -92,6 +107,7 @@ export async function startCluster() {
   if (process.env.DATABASE_URL) return false
   const bin = ensureInstalled()
   const { cluster, logFile } = clusterLocation()
+  setAsideOrphan()
   if (!existsSync(path.join(cluster, 'PG_VERSION'))) initCluster(bin)
   const port = runningPort()
   if (port === PG_PORT) return false
