@@ -4,7 +4,12 @@ import { z } from 'zod'
 import { DrillPresetSchema, type DrillId, type DrillPreset } from './drills'
 
 /** The drills whose exercises can be shared (the chord-tones drill joins when it lands). */
-export const SHAREABLE_DRILLS = ['runs', 'scatter', 'cycle'] as const satisfies readonly DrillId[]
+export const SHAREABLE_DRILLS = [
+  'runs',
+  'scatter',
+  'cycle',
+  'chords',
+] as const satisfies readonly DrillId[]
 /** Links one account may keep open at once (a guard against runaway clients). */
 export const MAX_OPEN_SHARES = 200
 /** A share token: 22 characters of URL-safe base64 (128 random bits). */

@@ -1,8 +1,18 @@
 // Each drill on paper: the exercise of its questions, the settings a share link keeps making the
 // same notes, and worksheet requests the server's query schemas accept.
 import { describe, expect, it } from 'vitest'
-import { CycleSettingsSchema, RunsSettingsSchema, ScatterSettingsSchema } from '../contract/drills'
-import { CycleQuerySchema, RunsQuerySchema, ScatterQuerySchema } from '../contract/worksheets'
+import {
+  ChordsSettingsSchema,
+  CycleSettingsSchema,
+  RunsSettingsSchema,
+  ScatterSettingsSchema,
+} from '../contract/drills'
+import {
+  ChordsQuerySchema,
+  CycleQuerySchema,
+  RunsQuerySchema,
+  ScatterQuerySchema,
+} from '../contract/worksheets'
 import { assertExercise } from '../exchange'
 import { fingeringsOf, instrumentRange, octaveScatter, rangeRun } from '../theory'
 import { drillPaper } from './drill-paper'
@@ -13,7 +23,7 @@ import { sharedExercise } from './shared-exercise'
 const BASS = { tuning: [28, 33, 38, 43], frets: 20 }
 const SHARE_BASE = { token: 'x'.repeat(22), title: 't', sharedBy: 'Rowan', createdAt: '' }
 
-const paperOf = (drill: 'scatter' | 'runs' | 'cycle') => drillPaper(drill)!
+const paperOf = (drill: 'scatter' | 'runs' | 'cycle' | 'chords') => drillPaper(drill)!
 
 describe('Octave Scatter on paper', () => {
   const settings = ScatterSettingsSchema.parse({ tonic: 'A', scale: 'minor', questionCount: 20 })
@@ -145,5 +155,34 @@ describe('Window Cycle on paper', () => {
     expect(() => paper.questions(narrow as never, BASS, { fingering: null, seed: 0 })).toThrow(
       RangeError,
     )
+  })
+})
+
+describe('Chord Tones on paper', () => {
+  const settings = ChordsSettingsSchema.parse({ progression: 'two-five-one', startKey: 'C' })
+  const paper = paperOf('chords')
+  const questions = paper.questions(settings as never, BASS, { fingering: null, seed: 0 })
+
+  it('writes each chord tone the drill asks, in the progression key, and plays one chord at a time', () => {
+    const exercise = exerciseFromQuestions(questions, BASS, paper, 'chords')
+    expect(exercise.notes.map((note) => note.pitch)).toEqual(questions.map((q) => q.expectedPitch))
+    // ii–V–I in C: Dm7 G7 Cmaj7, no sharps or flats in C major (common practice, no source)
+    expect(exercise.keyFifths).toBe(0)
+    expect(() => assertExercise(exercise)).not.toThrow()
+    const first = paper.segment(questions, 0)
+    expect(first.length).toBeGreaterThan(2)
+    expect(new Set(first.map((q) => (q as unknown as { chord: string }).chord))).toEqual(
+      new Set(['Dm7']),
+    )
+  })
+
+  it('asks for the chord-tone sheet of the same progression and position', () => {
+    const query = ChordsQuerySchema.parse(paper.sheet(settings as never, BASS, questions).params)
+    expect(query).toMatchObject({
+      progression: 'two-five-one',
+      start: 'C',
+      lowFret: 2,
+      highFret: 6,
+    })
   })
 })

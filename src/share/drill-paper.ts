@@ -1,6 +1,6 @@
 // What each drill puts on paper: its questions for given settings (the shared page, the setup
 // preview), the part of a session shown while playing, the settings that make it again, and its PDF.
-// A drill joins by adding its entry here (the chord-tones drill: questions, key, segment, sheet).
+// A drill joins by adding its entry here (and its id to SHAREABLE_DRILLS for share links).
 import type { WorksheetKind, WorksheetParams } from '../api/worksheets'
 import type { DrillId, DrillSettings } from '../contract/drills'
 import { scaleLabel } from '../contract/drills/fields'
@@ -10,6 +10,7 @@ import {
   planCycle,
   type CycleQuestion,
 } from '../drills/cycle/cycle-generator'
+import { chordsSession, type ChordsQuestion } from '../drills/chords/chords-generator'
 import type { DrillQuestion } from '../drills/engine/types'
 import {
   fingeringId,
@@ -172,6 +173,36 @@ const cyclePaper: DrillPaper<'cycle', CycleQuestion> = {
   }),
 }
 
+const PROGRESSION_TITLES = { 'two-five-one': 'ii–V–I', blues: '12-bar blues', custom: 'own chords' }
+
+const chordsPaper: DrillPaper<'chords', ChordsQuestion> = {
+  // The progression's key sets the signature; an own list of chords is written without one.
+  key: (question) => question.keyRef ?? { tonic: 'C', scale: 'major' },
+  name: (question) => question.name,
+  questions: (settings, neck) => chordsSession(settings, neck.tuning).questions,
+  // While playing: the arpeggio of the current chord.
+  segment: (questions, index) =>
+    questions.filter((question) => question.chordIndex === questions[index]?.chordIndex),
+  tabWhilePlaying: () => false,
+  share: (settings) => ({ settings, fingering: null }),
+  title: (settings) =>
+    settings.progression === 'custom'
+      ? `Chord Tones, ${settings.customChords}`
+      : `Chord Tones, ${PROGRESSION_TITLES[settings.progression]} from ${settings.startKey} ${settings.quality}`,
+  sheet: (settings, neck) => ({
+    kind: 'chords',
+    params: {
+      ...instrument(neck),
+      ...{ progression: settings.progression, quality: settings.quality, cycle: settings.cycle },
+      ...{ start: settings.startKey, chords: settings.customChords, size: settings.size },
+      inversion: settings.inversion,
+      lowFret: settings.lowFret,
+      highFret: Math.min(settings.highFret, neck.frets),
+      answers: '1',
+    },
+  }),
+}
+
 type PaperOf = { [D in DrillId]?: DrillPaper<D, never> }
 
 /** The drills with notation, exports and share links, by id. */
@@ -179,6 +210,7 @@ export const DRILL_PAPER: PaperOf = {
   scatter: scatterPaper as unknown as DrillPaper<'scatter', never>,
   runs: runsPaper as unknown as DrillPaper<'runs', never>,
   cycle: cyclePaper as unknown as DrillPaper<'cycle', never>,
+  chords: chordsPaper as unknown as DrillPaper<'chords', never>,
 }
 
 /** The paper entry of a drill, loosely typed for pages that hold any drill's questions. */
