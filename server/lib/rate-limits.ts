@@ -1,5 +1,6 @@
 // Request rate limits (express-rate-limit) whose counters live in PostgreSQL, keyed per client
 // address or per signed-in account: sign-up and every route that sends e-mail use them.
+import { createHash } from 'node:crypto'
 import type { Request, RequestHandler } from 'express'
 import { ipKeyGenerator, rateLimit, type Options, type Store } from 'express-rate-limit'
 import type { AppContext } from '../context'
@@ -36,8 +37,13 @@ class PgStore implements Store {
 export const clientAddress = (req: Request) => ipKeyGenerator(req.ip ?? 'unknown')
 
 /** The e-mail a body names (lower-cased), for limits per target address. */
-export const bodyEmail = (req: Request) =>
-  typeof req.body?.email === 'string' ? req.body.email.trim().toLowerCase() : undefined
+export const bodyEmail = (req: Request) => {
+  if (typeof req.body?.email !== 'string') return undefined
+  const email = req.body.email.trim().toLowerCase()
+  // No address is longer than 254 characters (RFC 5321); a longer body still counts, by its hash,
+  // so the counter's key stays within the index's row size.
+  return email.length > 254 ? `sha256:${createHash('sha256').update(email).digest('hex')}` : email
+}
 
 type KeyOf = (req: Request) => string | undefined
 export const BY_ADDRESS: KeyOf = clientAddress

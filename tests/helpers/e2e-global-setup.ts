@@ -54,8 +54,10 @@ export default async function setup(project: TestProject) {
     JWT_SECRET: randomBytes(32).toString('hex'),
     LOG_LEVEL: 'warn',
     APP_URL: `http://127.0.0.1:${port}`,
-    // Every e2e browser signs up from 127.0.0.1; the per-address limit has its own server test.
+    // Every e2e browser signs up and signs in from 127.0.0.1; the per-address limits have their own
+    // server tests (security-signup, security-sign-in).
     SIGNUP_RATE_LIMIT: '10000',
+    LOGIN_RATE_LIMIT: '10000',
   }
   const tsx = ['--import', 'tsx']
   const children: ChildProcess[] = [

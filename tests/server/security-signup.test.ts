@@ -1,7 +1,7 @@
 // Finding 1 as the attack: a burst of sign-ups must neither stall the API (bcrypt runs in worker
 // threads) nor create more accounts than the limiter allows.
 import request from 'supertest'
-import { randomUUID } from 'node:crypto'
+import { randomBytes, randomUUID } from 'node:crypto'
 import { afterAll, beforeAll, expect, it } from 'vitest'
 import { passwordTasksInFlight, verifyPassword } from '../../server/auth/password'
 import { startTestApi, type TestApi } from '../helpers/api'
@@ -88,6 +88,24 @@ it('when one address registers the same e-mail again and again, then the per-e-m
     for (let i = 0; i < 4; i++)
       statuses.push((await request(own.app).post('/api/auth/register').send(body)).status)
     expect(statuses).toEqual([201, 409, 409, 429])
+  } finally {
+    await own.close()
+  }
+})
+
+it('when the e-mail is thousands of random characters long, then the sign-up is a 400, not a 500 (its rate-limit key stays indexable)', async () => {
+  const own = await startTestApi({ signupsPerHour: 100 })
+  try {
+    const res = await request(own.app)
+      .post('/api/auth/register')
+      .send({
+        email: randomBytes(3_000).toString('base64'),
+        password: 'a long password',
+        name: 'Long',
+        role: 'student',
+      })
+    expect(res.status).toBe(400)
+    expect(res.body.error.fields).toHaveProperty('email')
   } finally {
     await own.close()
   }
