@@ -1,6 +1,7 @@
 // CSV of the roster (with the table's filters and sort), as the table reads: status words, local
 // date-times, seconds (results-export.ts has one student's answers).
 import { localDay, sheetDateTime } from '../../src/contract/local-time'
+import { drillName } from '../../src/contract/drills'
 import { ROSTER_STATUS_TEXT, type RosterRow } from '../../src/contract/roster'
 import type { AppContext } from '../context'
 import { timeZoneOf } from '../users/users-repository'
@@ -27,6 +28,8 @@ const rosterHeader = (timeZone: string) => [
   'Targets met',
   'Targets total',
   'Weak spots',
+  'Fastest clean tempo (BPM, 7 days)',
+  'Fastest clean tempo drill',
 ]
 
 const pct = (v: number | null) => (v === null ? null : Math.round(v * 1000) / 10)
@@ -57,6 +60,8 @@ const rosterLine = (r: RosterRow, timeZone: string) => [
   r.plans.targetsMet,
   r.plans.targetsTotal,
   r.weakSpots.map((w) => `${w.label} ${Math.round(w.accuracy * 100)} %`).join('; '),
+  r.fastestTempo?.bpm ?? null,
+  r.fastestTempo ? drillName(r.fastestTempo.drill) : null,
 ]
 
 export async function rosterCsv(ctx: AppContext, teacherId: string, filter: RosterFilter) {

@@ -16,6 +16,7 @@ const SORT_VALUE: Record<RosterSortKey, (row: RosterRow) => string | number | nu
   recallTrend: (r) => r.recall.change,
   planCompletion: (r) => r.planCompletion,
   status: (r) => STATUS_ORDER[r.status],
+  fastestTempo: (r) => r.fastestTempo?.bpm ?? null,
 }
 
 export function filterRoster(

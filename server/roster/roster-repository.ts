@@ -93,6 +93,35 @@ export async function weakestPlaces(
   return rows
 }
 
+export interface FastestTempoRow {
+  user_id: string
+  drill: string
+  bpm: number
+  settings: string | null
+}
+
+/**
+ * Per student, the fastest clean tempo of a played take in the last 7 local days (any drill),
+ * with its drill and settings; the later take wins a tie. Students without one have no row.
+ */
+export async function fastestTempos(db: Db, studentIds: string[]): Promise<FastestTempoRow[]> {
+  const { rows } = await db.raw(
+    `with st as (
+       select u.id as user_id, coalesce(z.time_zone, 'UTC') as tz,
+         (now() at time zone coalesce(z.time_zone, 'UTC'))::date as today
+       from unnest(?::uuid[]) as u(id) left join user_time_zones z on z.user_id = u.id
+     )
+     select distinct on (a.user_id) a.user_id, a.drill, (a.detail->>'cleanTempo')::int as bpm,
+       a.detail->>'playedSettings' as settings
+     from attempts a join st on st.user_id = a.user_id
+     where a.detail->>'cleanTempo' is not null and a.created_at > now() - interval '8 days'
+       and (a.created_at at time zone st.tz)::date > st.today - 7
+     order by a.user_id, bpm desc, a.created_at desc`,
+    [studentIds],
+  )
+  return rows
+}
+
 export interface ActiveInstrumentRow {
   user_id: string
   name: string

@@ -105,6 +105,7 @@ function toRosterRow(student: RosterStudent, assignments: Assignment[], at: RowC
     status: rosterStatus(lastPracticeAt, assignments, now),
     attention: attentionOf(student, assignments, at),
     instrument: student.instrument,
+    fastestTempo: student.fastestTempo,
   }
 }
 

@@ -16,6 +16,7 @@
 //     weakestPositions: [{ instrumentId, string, stringName, pitchName, fret, pitch, answers, accuracy,
 //                          medianMs }] // ≤ 3, by src/contract/weak-places.ts: places with a recent miss,
 //                                        // worst first (latest 50 answers per place)
+//     fastestTempo: { bpm, drill, settings } | null, // fastest clean played take, last 7 days
 //   }
 import { pitchClassName, pitchName, stringNames } from '../../src/theory'
 import { compareWeakPlaces } from '../../src/contract/weak-places'
@@ -23,12 +24,14 @@ import { teacherStudents } from '../access/access-repository'
 import type { AppContext } from '../context'
 import {
   activeInstruments,
+  fastestTempos,
   weakestPlaces,
   weekFigures,
+  type FastestTempoRow,
   type WeakRow,
   type WeekRow,
 } from './roster-repository'
-import type { RosterInstrument } from '../../src/contract/roster'
+import type { FastestTempo, RosterInstrument } from '../../src/contract/roster'
 import { instrumentOf } from './roster-instrument'
 
 /** One student of a teacher's roster (the meaning of each field is above). */
@@ -44,6 +47,7 @@ export interface RosterStudent {
   attemptsPrev7d: number
   accuracyPrev7d: number | null
   instrument: RosterInstrument | null
+  fastestTempo: FastestTempo | null
   medianRecallMs7d: number | null
   medianRecallMsPrev7d: number | null
   recallTrend: { change: number | null; direction: 'faster' | 'slower' | 'steady' | null }
@@ -120,6 +124,9 @@ const toWeak = (r: WeakRow) => ({
   medianMs: r.recent_median_ms,
 })
 
+const tempoPart = (t: FastestTempoRow | undefined): FastestTempo | null =>
+  t ? { bpm: Number(t.bpm), drill: t.drill, settings: t.settings } : null
+
 /** Every student of the teacher's studios with their week in figures (see the shape above). */
 export async function rosterSummary(
   ctx: AppContext,
@@ -129,11 +136,13 @@ export async function rosterSummary(
   if (!members.length) return { students: [] }
   const ids = members.map((m) => m.id)
   await ctx.statistics.settle(ids) // answers still queued count in the figures read next
-  const [weeks, weak, instruments] = await Promise.all([
+  const [weeks, weak, instruments, tempos] = await Promise.all([
     weekFigures(ctx.db, ids),
     weakestPlaces(ctx.db, ids, WEAKEST_COUNT),
     activeInstruments(ctx.db, ids),
+    fastestTempos(ctx.db, ids),
   ])
+  const tempoOf = new Map(tempos.map((t) => [t.user_id, t]))
   const weekOf = new Map(weeks.map((w) => [w.user_id, w]))
   const instrumentRow = new Map(instruments.map((i) => [i.user_id, i]))
   return {
@@ -144,6 +153,7 @@ export async function rosterSummary(
       studios: m.studios,
       ...weekPart(weekOf.get(m.id)),
       instrument: instrumentOf(instrumentRow.get(m.id)),
+      fastestTempo: tempoPart(tempoOf.get(m.id)),
       weakestPositions: weak
         .filter((w) => w.user_id === m.id)
         .map(toWeak)

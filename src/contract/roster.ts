@@ -33,6 +33,7 @@ export const ROSTER_SORT_KEYS = [
   'recallTrend',
   'planCompletion',
   'status',
+  'fastestTempo',
 ] as const
 export type RosterSortKey = (typeof ROSTER_SORT_KEYS)[number]
 
@@ -78,6 +79,15 @@ export interface RosterInstrument {
   leftHanded: boolean
 }
 
+/** The fastest clean tempo of a played take in the last 7 days, any drill. */
+export interface FastestTempo {
+  bpm: number
+  /** The drill's id ("runs"); its name comes from drillName. */
+  drill: string
+  /** The take's settings in words ("C major, frets 2–5"), when it named them. */
+  settings: string | null
+}
+
 export interface RosterRow {
   id: string
   name: string
@@ -103,6 +113,8 @@ export interface RosterRow {
   /** Reasons to look at this student now, most pressing first; empty when all is well. */
   attention: AttentionReason[]
   instrument: RosterInstrument | null
+  /** Null when no take was played clean in the last 7 days. */
+  fastestTempo: FastestTempo | null
 }
 
 export interface RosterPage {

@@ -26,6 +26,7 @@ function row(name: string, over: Partial<RosterRow> = {}): RosterRow {
     status: 'on-track',
     attention: [],
     instrument: null,
+    fastestTempo: null,
     ...over,
   }
 }

@@ -2,6 +2,7 @@
 import type { RosterRow, RosterStatus } from '@/api/roster'
 import { toUnicode } from '@/theory'
 import { calendarDaysBetween } from '@/contract/local-time'
+import { drillName } from '@/contract/drills'
 import { ROSTER_STATUS_TEXT } from '@/contract/roster'
 import { dateText, shownZone } from '@/composables/local-dates'
 
@@ -50,3 +51,7 @@ export const spotText = (w: RosterRow['weakSpots'][number]) =>
 /** Whole minutes; a short first session still shows as practice. */
 export const minutesText = (minutes: number) =>
   minutes > 0 && minutes < 1 ? '< 1' : String(Math.round(minutes))
+
+/** "96 BPM · Range Runs", or "—" when no take was played clean in the last 7 days. */
+export const tempoText = (tempo: RosterRow['fastestTempo']) =>
+  tempo ? `${tempo.bpm} BPM · ${drillName(tempo.drill)}` : '—'
