@@ -13,7 +13,8 @@ import {
   signInThroughUi,
 } from '../helpers/browser'
 
-const STUDENT = { name: 'Lucia Amari', email: 'lucia@cedarhollow.test' }
+// Signe: no other spec changes her account (account.spec resets Lucia's password)
+const STUDENT = { name: 'Signe Marlow', email: 'signe@cedarhollow.test' }
 
 let browser: Browser
 let db: Db
