@@ -90,14 +90,19 @@ const INSERTED_COLUMNS = Object.keys(attemptRow('', {} as AttemptInput)).join(',
  * keeps a 200-answer batch a single small statement for PostgreSQL to plan and the API to build.
  */
 export async function insertNewAttempts(db: Db, userId: string, attempts: AttemptInput[]) {
-  const { rows } = await db.raw<{ rows: AttemptRow[] }>(
-    `insert into attempts (${INSERTED_COLUMNS})
-     select ${INSERTED_COLUMNS} from json_populate_recordset(null::attempts, ?::json) r
-     where not exists (select 1 from attempts a where a.id = r.id)
-     on conflict (user_id, id, created_at) do nothing returning *`,
-    [JSON.stringify(attempts.map((a) => attemptRow(userId, a)))],
-  )
-  return rows
+  return db.transaction(async (trx) => {
+    // One batch of a player at a time: a resend in flight waits, then sees the first one's rows
+    // (the id check cannot be a unique index across monthly partitions).
+    await trx.raw('select pg_advisory_xact_lock(?::int, hashtext(?))', [0x41747470, userId])
+    const { rows } = await trx.raw<{ rows: AttemptRow[] }>(
+      `insert into attempts (${INSERTED_COLUMNS})
+       select ${INSERTED_COLUMNS} from json_populate_recordset(null::attempts, ?::json) r
+       where not exists (select 1 from attempts a where a.id = r.id)
+       on conflict (user_id, id, created_at) do nothing returning *`,
+      [JSON.stringify(attempts.map((a) => attemptRow(userId, a)))],
+    )
+    return rows
+  })
 }
 
 /** Creates the monthly partitions of attempts up to `monthsAhead` months on; resolves to how many. */
