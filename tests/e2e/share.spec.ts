@@ -26,9 +26,17 @@ const currentNote = (page: Page) =>
     return match ? Number(match[1]) : null
   })
 
+// Tobiah (5-string) practises here: the drill specs count Noor's stored answers while they run.
+const SHARING_STUDENT = 'tobiah@cedarhollow.test'
+
 describe('Notation in a drill and shared exercises', () => {
   it('on a laptop: the staff follows the scatter, the summary exports and shares it, a visitor opens it, a revoke closes it', async () => {
-    const { page, context } = await studentOn(e2e.browser, LAPTOP, '/practice/scatter')
+    const { page, context } = await studentOn(
+      e2e.browser,
+      LAPTOP,
+      '/practice/scatter',
+      SHARING_STUDENT,
+    )
     const instrument = await activeInstrument(page)
     await choose(page, 'question-count', '8')
     await page.getByTestId('paper-panel-title').click()
@@ -114,7 +122,7 @@ describe('Notation in a drill and shared exercises', () => {
   })
 
   it('on a phone: a Range Run in notation during the session, and a shared link read on a phone', async () => {
-    const { page, context } = await studentOn(e2e.browser, PHONE, '/practice/runs')
+    const { page, context } = await studentOn(e2e.browser, PHONE, '/practice/runs', SHARING_STUDENT)
     await page.getByTestId('paper-panel-title').click()
     const notation = page.getByTestId('notation')
     await expect.poll(() => notation.locator('svg').count(), { timeout: 30_000 }).toBe(1)

@@ -21,14 +21,15 @@ export interface AskedQuestion {
   text: string
 }
 
-/** A signed-in demo student on a fresh page at `path`. */
+/** A signed-in demo student (Noor unless `email` names another) on a fresh page at `path`. */
 export async function studentOn(
   browser: Browser,
   viewport: { width: number; height: number },
   path: string,
+  email = STUDENT,
 ) {
   const { page, context } = await newPage(browser, viewport)
-  await signInThroughUi(page, STUDENT)
+  await signInThroughUi(page, email)
   await page.waitForURL('**/practice')
   await page.goto(path)
   await page.locator('[data-testid="drill-setup"][data-ready="true"]').waitFor()
