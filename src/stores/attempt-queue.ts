@@ -1,7 +1,9 @@
 // The answers waiting to be sent, kept in IndexedDB (Dexie), one queue per player, so a reload, a
 // closed tab or a day without network loses nothing. A queue that earlier versions kept in
-// localStorage is moved over once. Only the attempts store imports this (and so Dexie).
-import Dexie, { type EntityTable } from 'dexie'
+// localStorage is moved over once. Only the attempts store imports this; Dexie itself loads with the
+// first queue access, so a drill page's first question does not wait for it.
+import type Dexie from 'dexie'
+import type { EntityTable } from 'dexie'
 import type { AttemptInput } from '../api/attempts'
 
 interface QueuedAttempt {
@@ -15,14 +17,16 @@ interface QueuedAttempt {
 type QueueDb = Dexie & { attempts: EntityTable<QueuedAttempt, 'id'> }
 
 const LEGACY_PREFIX = 'ambitus.attempts.v1.'
-let db: QueueDb | null = null
+let queue: Promise<{ db: QueueDb; keys: typeof Dexie }> | null = null
 let counter = 0
 
-function database(): QueueDb {
-  if (db) return db
-  db = new Dexie('ambitus-attempts') as QueueDb
-  db.version(1).stores({ attempts: 'id, [owner+queuedAt]' })
-  return db
+function database() {
+  queue ??= import('dexie').then(({ default: Database }) => {
+    const db = new Database('ambitus-attempts') as QueueDb
+    db.version(1).stores({ attempts: 'id, [owner+queuedAt]' })
+    return { db, keys: Database }
+  })
+  return queue
 }
 
 /** Adds answers to a player's queue (an id already queued is overwritten, never doubled). */
@@ -34,20 +38,21 @@ export async function saveAttempts(owner: string, attempts: AttemptInput[]) {
     queuedAt: now + (counter++ % 1000),
     attempt,
   }))
-  await database().attempts.bulkPut(rows)
+  await (await database()).db.attempts.bulkPut(rows)
 }
 
 /** Removes answers (sent, or refused by the server) from every queue. */
 export async function removeAttempts(ids: string[]) {
-  await database().attempts.bulkDelete(ids)
+  await (await database()).db.attempts.bulkDelete(ids)
 }
 
 /** A player's queued answers, oldest first; adopts a localStorage queue left by earlier versions. */
 export async function loadAttempts(owner: string): Promise<AttemptInput[]> {
   await adoptLegacyQueue(owner)
-  const rows = await database()
-    .attempts.where('[owner+queuedAt]')
-    .between([owner, Dexie.minKey], [owner, Dexie.maxKey])
+  const { db, keys } = await database()
+  const rows = await db.attempts
+    .where('[owner+queuedAt]')
+    .between([owner, keys.minKey], [owner, keys.maxKey])
     .toArray()
   return rows.map((row) => row.attempt)
 }

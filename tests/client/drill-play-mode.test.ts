@@ -106,8 +106,10 @@ describe('the Tap / Play switch', () => {
   it('the set-up dialog holds the tuner and the microphone set-up', async () => {
     const { wrapper } = await inPlayMode(usePitchHunt)
     await wrapper.find('[data-testid="play-setup-open"]').trigger('click')
-    await flushPromises()
-    expect(document.querySelector('[data-testid="tuner-panel"]')).not.toBeNull()
+    // The dialog is an async component: wait for its chunk.
+    await vi.waitFor(() =>
+      expect(document.querySelector('[data-testid="tuner-panel"]')).not.toBeNull(),
+    )
     expect(document.querySelector('[data-testid="microphone-setup"]')).not.toBeNull()
     wrapper.unmount()
   })
