@@ -7,6 +7,7 @@ import request from 'supertest'
 import { randomUUID } from 'node:crypto'
 import { afterAll, beforeAll, describe, expect, it } from 'vitest'
 import { errorHandler } from '../../server/lib/errors'
+import { MAX_BODY_DEPTH } from '../../server/lib/text-guard'
 import { signedInAdmin, signedInAgent, startTestApi, type TestApi } from '../helpers/api'
 import { attemptBody, practiser } from '../helpers/practice'
 import { createPlan, planBody, studentIn, teacherWithStudio } from '../helpers/studio'
@@ -124,6 +125,33 @@ describe('NUL in text', () => {
       .attach('file', Buffer.from('RIFF'), 'take.wav')
     expect(res.status).toBe(400)
     expect(res.body.error.fields.planItemId[0]).toMatch(/NUL character/)
+  })
+})
+
+// Found by the fuzz run: the NUL walk copied the path at every level, so one 240 kB body of 40,000
+// nested objects held the event loop for about a minute and every other caller waited.
+describe('deeply nested bodies', () => {
+  const nested = (depth: number) => '{"a":'.repeat(depth) + '"x"' + '}'.repeat(depth)
+
+  it('when a body nests 40,000 levels (240 kB), then 400 names where it went too deep and the API answers others', async () => {
+    const res = await teacher.agent
+      .post('/api/studio/studios')
+      .set('content-type', 'application/json')
+      .send(nested(40_000))
+    expect(res.status).toBe(400)
+    const [path, messages] = Object.entries(res.body.error.fields)[0] as [string, string[]]
+    expect(path.split('.')).toHaveLength(MAX_BODY_DEPTH)
+    expect(messages[0]).toMatch(/Nested too deeply: at most 32 levels/)
+    expect((await request(api.app).get('/api/health')).status).toBe(200)
+  })
+
+  it('when a body nests exactly as deep as allowed, then the NUL check passes it on to the route', async () => {
+    const res = await teacher.agent
+      .post('/api/studio/studios')
+      .set('content-type', 'application/json')
+      .send(nested(MAX_BODY_DEPTH))
+    expect(res.status).toBe(400)
+    expect(Object.keys(res.body.error.fields)).toEqual(['name']) // the route's own schema speaks
   })
 })
 
