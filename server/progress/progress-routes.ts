@@ -1,61 +1,35 @@
 // /api/progress: a student's statistics (own by default; `student=` for their teachers and admins).
 import { Router } from 'express'
+import type { z } from 'zod'
 import { requireAuth } from '../auth/auth-middleware'
 import type { AppContext } from '../context'
 import { parse } from '../lib/validate'
-import {
-  ChordTonesQuerySchema,
-  CyclePositionQuerySchema,
-  FingeringsQuerySchema,
-  ProgressScopeSchema,
-  RangeQuerySchema,
-} from './progress-schema'
-import {
-  chordTones,
-  cyclePosition,
-  fingerings,
-  notes,
-  positions,
-  summary,
-  tempos,
-  timeline,
-} from './progress-service'
+import type { PublicUser } from '../users/users-schema'
+import * as schemas from './progress-schema'
+import * as progress from './progress-service'
+
+type Reader<S extends z.ZodType> = (
+  ctx: AppContext,
+  viewer: PublicUser,
+  query: z.infer<S>,
+) => Promise<unknown>
 
 export function progressRoutes(ctx: AppContext): Router {
   const router = Router()
   router.use(requireAuth(ctx))
+  // Every statistic is a GET whose query one schema checks, answered by one service function.
+  const read = <S extends z.ZodType>(path: string, schema: S, reader: Reader<S>) =>
+    router.get(path, async (req, res) => {
+      res.json(await reader(ctx, req.user!, parse(schema, req, 'query')))
+    })
 
-  router.get('/summary', async (req, res) => {
-    res.json(await summary(ctx, req.user!, parse(RangeQuerySchema, req, 'query')))
-  })
-
-  router.get('/positions', async (req, res) => {
-    res.json(await positions(ctx, req.user!, parse(ProgressScopeSchema, req, 'query')))
-  })
-
-  router.get('/notes', async (req, res) => {
-    res.json(await notes(ctx, req.user!, parse(ProgressScopeSchema, req, 'query')))
-  })
-
-  router.get('/timeline', async (req, res) => {
-    res.json(await timeline(ctx, req.user!, parse(RangeQuerySchema, req, 'query')))
-  })
-
-  router.get('/tempos', async (req, res) => {
-    res.json(await tempos(ctx, req.user!, parse(RangeQuerySchema, req, 'query')))
-  })
-
-  router.get('/fingerings', async (req, res) => {
-    res.json(await fingerings(ctx, req.user!, parse(FingeringsQuerySchema, req, 'query')))
-  })
-
-  router.get('/cycle-position', async (req, res) => {
-    res.json(await cyclePosition(ctx, req.user!, parse(CyclePositionQuerySchema, req, 'query')))
-  })
-
-  router.get('/chords', async (req, res) => {
-    res.json(await chordTones(ctx, req.user!, parse(ChordTonesQuerySchema, req, 'query')))
-  })
-
+  read('/summary', schemas.RangeQuerySchema, progress.summary)
+  read('/positions', schemas.ProgressScopeSchema, progress.positions)
+  read('/notes', schemas.ProgressScopeSchema, progress.notes)
+  read('/timeline', schemas.RangeQuerySchema, progress.timeline)
+  read('/tempos', schemas.RangeQuerySchema, progress.tempos)
+  read('/fingerings', schemas.FingeringsQuerySchema, progress.fingerings)
+  read('/cycle-position', schemas.CyclePositionQuerySchema, progress.cyclePosition)
+  read('/chords', schemas.ChordTonesQuerySchema, progress.chordTones)
   return router
 }
