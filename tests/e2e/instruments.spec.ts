@@ -1,17 +1,19 @@
-// A demo student (Rafe, drop-D bass) sets up instruments: preview, left-handed and back, a new
-// 5-string, activate it. Not Noor: the drills spec practises on her instrument at the same time.
+// A student with a drop-D bass (as the seed gives Rafe) sets up instruments: preview, left-handed and
+// back, a new 5-string, activate it. A fresh account, not a seeded one: other specs read the seeded
+// students' instruments (the roster shows Rafe's drop D) while this one changes them.
 import { copyFileSync, readFileSync } from 'node:fs'
 import path from 'node:path'
 import type { Browser, Page } from 'playwright-core'
 import { afterAll, beforeAll, describe, expect, it } from 'vitest'
 import {
+  APP_HEADERS,
   LAPTOP,
   launchBrowser,
   newPage,
   PHONE,
   screenshot,
   SCREENSHOT_DIR,
-  signInThroughUi,
+  signUpFresh,
 } from '../helpers/browser'
 
 let browser: Browser
@@ -31,9 +33,21 @@ async function instrumentsOf(page: Page): Promise<ApiInstrument[]> {
   return (await (await page.request.get('/api/instruments')).json()).instruments
 }
 
+/** A new student whose one instrument is a 4-string drop-D bass, frets 0–21 (like Rafe's in the seed). */
 async function openInstruments(page: Page) {
-  await signInThroughUi(page, 'rafe@cedarhollow.test')
-  await page.waitForURL('**/practice')
+  await signUpFresh(page, 'Ida Strand')
+  const created = await page.request.post('/api/instruments', {
+    headers: APP_HEADERS,
+    data: {
+      name: 'Drop-D bass',
+      presetId: 'bass-4-drop-d',
+      tuning: [26, 33, 38, 43], // D1 A1 D2 G2 (scientific pitch notation)
+      frets: 21,
+      scaleLengthMm: 864,
+      accidentals: 'sharp',
+    },
+  })
+  expect(created.status()).toBe(201)
   await page.goto('/instruments')
   await page.getByTestId('instrument-editor').waitFor()
 }
@@ -53,7 +67,7 @@ describe('instruments', () => {
     const { page, context, foreign } = await newPage(browser, LAPTOP)
     await openInstruments(page)
     const [original] = await instrumentsOf(page)
-    // Rafe's seeded drop-D bass: 4 strings × frets 0–21 (db/seeds/lib/cedar-hollow.ts)
+    // the drop-D bass: 4 strings × frets 0–21
     await expect.poll(() => preview(page).locator('[data-string][data-fret]').count()).toBe(4 * 22)
     expect(
       await preview(page).getByRole('button', { name: 'A string, fret 5', exact: false }).count(),
@@ -120,7 +134,7 @@ describe('instruments', () => {
       .toBe(1)
     await screenshot(page, 'instruments-activated-laptop')
 
-    // Put Rafe back as the seed left him, for the other end-to-end tests.
+    // Back to the drop-D bass, and the 5-string deleted.
     await page.getByRole('button', { name: `Use ${original!.name} for practice` }).click()
     await expect
       .poll(async () => (await instrumentsOf(page)).find((i) => i.isActive)?.id)

@@ -2,11 +2,10 @@
 // service worker, the answers wait on the device with a note in the app bar, and when the network
 // comes back every answer is stored exactly once and the statistics count them. Signing out leaves
 // no cached answer of the API behind.
-import { randomUUID } from 'node:crypto'
 import type { Page } from 'playwright-core'
 import { describe, expect, it } from 'vitest'
 import { noteAt, pitchClassName } from '../../src/theory'
-import { LAPTOP, newPage, PHONE, screenshot } from '../helpers/browser'
+import { LAPTOP, newPage, PHONE, screenshot, signUpFresh } from '../helpers/browser'
 import { useDrillE2e } from '../helpers/drill-e2e'
 import { answerAll, choose } from '../helpers/drill-pages'
 
@@ -47,13 +46,7 @@ const queuedOnDevice = (page: Page) =>
   )
 
 async function newStudent(page: Page) {
-  await page.goto('/')
-  const email = `offline-${randomUUID().slice(0, 8)}@example.test`
-  const res = await page.request.post('/api/auth/register', {
-    headers: { 'X-Requested-With': 'ambitus' }, // as the app's client sends (anti-CSRF)
-    data: { email, password: 'a long enough password', name: 'Ada Offline', role: 'student' },
-  })
-  expect(res.status()).toBe(201)
+  const email = await signUpFresh(page, 'Ada Offline')
   const user = await e2e.db('users').where({ email }).first()
   return user.id as string
 }

@@ -1,4 +1,5 @@
 // Debian's Chromium driven by playwright-core (never a downloaded browser); screenshots for review.
+import { randomUUID } from 'node:crypto'
 import { mkdirSync } from 'node:fs'
 import path from 'node:path'
 import { chromium, type Browser, type BrowserContext, type Page } from 'playwright-core'
@@ -76,4 +77,26 @@ export async function signInThroughUi(page: Page, email: string, password = 'amb
   await page.getByLabel('E-mail').fill(email)
   await page.getByLabel('Password', { exact: true }).fill(password)
   await page.getByRole('button', { name: 'Sign in' }).click()
+}
+
+/** The app's anti-CSRF header, as its own client sends it with every change. */
+export const APP_HEADERS = { 'X-Requested-With': 'ambitus' }
+
+/**
+ * Signs a new account up through the API on this page (its cookie signs the page in): for specs that
+ * change what they use, so no seeded user another spec reads changes under it. Returns the e-mail.
+ */
+export async function signUpFresh(
+  page: Page,
+  name: string,
+  role: 'student' | 'teacher' = 'student',
+) {
+  await page.goto('/')
+  const email = `${role}-${randomUUID()}@example.test`
+  const res = await page.request.post('/api/auth/register', {
+    headers: APP_HEADERS,
+    data: { email, password: 'a long enough password', name, role },
+  })
+  if (res.status() !== 201) throw new Error(`sign-up answered ${res.status()}: ${await res.text()}`)
+  return email
 }
