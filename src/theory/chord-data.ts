@@ -22,12 +22,30 @@ export interface ChordTypeData {
   label: string
 }
 
-const type = (suffix: string, tonal: string, group: ChordGroup, label: string) => ({
-  suffix,
-  tonal,
-  group,
-  label,
-})
+/** Each group's types as [suffix, tonal's type name, label], in teaching order (common practice). */
+const BY_GROUP: Readonly<Record<ChordGroup, readonly (readonly [string, string, string])[]>> = {
+  triad: [
+    ['', 'major', 'Major triad'],
+    ['m', 'minor', 'Minor triad'],
+    ['dim', 'diminished', 'Diminished triad'],
+    ['aug', 'augmented', 'Augmented triad'],
+    ['sus2', 'suspended second', 'Suspended 2nd'],
+    ['sus4', 'suspended fourth', 'Suspended 4th'],
+  ],
+  sixth: [
+    ['6', 'sixth', 'Major sixth'],
+    ['m6', 'minor sixth', 'Minor sixth'],
+  ],
+  seventh: [
+    ['maj7', 'major seventh', 'Major seventh'],
+    ['7', 'dominant seventh', 'Dominant seventh'],
+    ['m7', 'minor seventh', 'Minor seventh'],
+    ['m7b5', 'half-diminished', 'Half-diminished (minor 7 ♭5)'],
+    ['dim7', 'diminished seventh', 'Diminished seventh'],
+    ['mMaj7', 'minor/major seventh', 'Minor-major seventh'],
+    ['7sus4', 'suspended fourth seventh', 'Dominant seventh sus4'],
+  ],
+}
 
 /**
  * The triads, sixth chords and seventh chords bassists practise as arpeggios, written with
@@ -36,23 +54,11 @@ const type = (suffix: string, tonal: string, group: ChordGroup, label: string) =
  * @example
  * CHORD_TYPES.filter((type) => type.group === 'triad').map((type) => type.suffix) // ['', 'm', 'dim', 'aug', 'sus2', 'sus4']
  */
-export const CHORD_TYPES: readonly ChordTypeData[] = [
-  type('', 'major', 'triad', 'Major triad'),
-  type('m', 'minor', 'triad', 'Minor triad'),
-  type('dim', 'diminished', 'triad', 'Diminished triad'),
-  type('aug', 'augmented', 'triad', 'Augmented triad'),
-  type('sus2', 'suspended second', 'triad', 'Suspended 2nd'),
-  type('sus4', 'suspended fourth', 'triad', 'Suspended 4th'),
-  type('6', 'sixth', 'sixth', 'Major sixth'),
-  type('m6', 'minor sixth', 'sixth', 'Minor sixth'),
-  type('maj7', 'major seventh', 'seventh', 'Major seventh'),
-  type('7', 'dominant seventh', 'seventh', 'Dominant seventh'),
-  type('m7', 'minor seventh', 'seventh', 'Minor seventh'),
-  type('m7b5', 'half-diminished', 'seventh', 'Half-diminished (minor 7 ♭5)'),
-  type('dim7', 'diminished seventh', 'seventh', 'Diminished seventh'),
-  type('mMaj7', 'minor/major seventh', 'seventh', 'Minor-major seventh'),
-  type('7sus4', 'suspended fourth seventh', 'seventh', 'Dominant seventh sus4'),
-]
+export const CHORD_TYPES: readonly ChordTypeData[] = (
+  Object.entries(BY_GROUP) as [ChordGroup, (typeof BY_GROUP)[ChordGroup]][]
+).flatMap(([group, types]) =>
+  types.map(([suffix, tonal, label]) => ({ suffix, tonal, group, label })),
+)
 
 /**
  * Lead-sheet glyphs tonal does not read, with the suffix they stand for (common practice).
