@@ -2,13 +2,10 @@
 import type { Knex } from 'knex'
 import type { Db } from '../lib/db'
 import type { Invitation, InvitationStatus } from '../../src/contract/studios'
+import { invitingStudio, type InvitingStudioRow } from './inviting-studio'
 
-interface InvitationRow {
+interface InvitationRow extends InvitingStudioRow {
   id: string
-  studio_id: string
-  studio_name: string
-  teacher_id: string
-  teacher_name: string
   email: string
   message: string | null
   expires_at: Date
@@ -32,10 +29,7 @@ function statusOf(row: InvitationRow, now: Date): InvitationStatus {
 
 const toRecord = (row: InvitationRow, now = new Date()): InvitationRecord => ({
   id: row.id,
-  studioId: row.studio_id,
-  studioName: row.studio_name,
-  teacherId: row.teacher_id,
-  teacherName: row.teacher_name,
+  ...invitingStudio(row),
   email: row.email,
   message: row.message,
   status: statusOf(row, now),

@@ -89,34 +89,23 @@ function linkRoutes(ctx: AppContext): Router {
 /** Mount before the studios: the invite route lives under a studio's path. */
 export function mountInvitations(api: Router, ctx: AppContext) {
   const inviteLimit = mailLimit(ctx, 'invitation')
-  api.post(
-    '/studio/studios/:id/invitations',
-    requireAuth(ctx),
-    requireRole('teacher'),
-    inviteLimit,
-    async (req, res) => {
-      const { params, body } = parseRequest(req, {
-        params: StudioIdParamsSchema,
-        body: InvitationInputSchema,
-      })
-      const result = await invite(ctx, req.user!.id, params.id, body.email, body.message)
-      res.status(result.resent ? 200 : 201).json(result)
-    },
-  )
-  api.post(
-    '/studio/studios/:id/invitations/batch',
-    requireAuth(ctx),
-    requireRole('teacher'),
-    inviteLimit,
-    async (req, res) => {
-      const { params, body } = parseRequest(req, {
-        params: StudioIdParamsSchema,
-        body: InvitationBatchSchema,
-      })
-      const results = await inviteMany(ctx, req.user!.id, params.id, body.emails, body.message)
-      res.json({ results })
-    },
-  )
+  const teacherInviting = [requireAuth(ctx), requireRole('teacher'), inviteLimit] // within the mail limit
+  api.post('/studio/studios/:id/invitations', ...teacherInviting, async (req, res) => {
+    const { params, body } = parseRequest(req, {
+      params: StudioIdParamsSchema,
+      body: InvitationInputSchema,
+    })
+    const result = await invite(ctx, req.user!.id, params.id, body.email, body.message)
+    res.status(result.resent ? 200 : 201).json(result)
+  })
+  api.post('/studio/studios/:id/invitations/batch', ...teacherInviting, async (req, res) => {
+    const { params, body } = parseRequest(req, {
+      params: StudioIdParamsSchema,
+      body: InvitationBatchSchema,
+    })
+    const results = await inviteMany(ctx, req.user!.id, params.id, body.emails, body.message)
+    res.json({ results })
+  })
   api.post(
     '/studio/studios/:id/invite-links',
     requireAuth(ctx),

@@ -2,13 +2,10 @@
 import type { Knex } from 'knex'
 import type { Db } from '../lib/db'
 import type { InviteLink } from '../../src/contract/studios'
+import { invitingStudio, type InvitingStudioRow } from './inviting-studio'
 
-interface LinkRow {
+interface LinkRow extends InvitingStudioRow {
   id: string
-  studio_id: string
-  studio_name: string
-  teacher_id: string
-  teacher_name: string
   max_uses: number
   uses: number
   expires_at: Date
@@ -29,10 +26,7 @@ function statusOf(row: LinkRow, now: Date): InviteLink['status'] {
 
 const toRecord = (row: LinkRow, now = new Date()): InviteLinkRecord => ({
   id: row.id,
-  studioId: row.studio_id,
-  studioName: row.studio_name,
-  teacherId: row.teacher_id,
-  teacherName: row.teacher_name,
+  ...invitingStudio(row),
   maxUses: row.max_uses,
   uses: row.uses,
   status: statusOf(row, now),
