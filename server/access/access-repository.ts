@@ -24,10 +24,7 @@ const SINCE_SQL =
   'case when bool_or(m.shares_from is null) then null else min(m.shares_from) end as since'
 
 /** The students of the teacher's studios, each once, by name, with the studios they are in. */
-export async function teacherStudents(
-  db: Db,
-  teacherId: string,
-): Promise<TeacherStudent[]> {
+export async function teacherStudents(db: Db, teacherId: string): Promise<TeacherStudent[]> {
   return db('studio_members as m')
     .join('studios as s', 's.id', 'm.studio_id')
     .join('users as u', 'u.id', 'm.student_id')
@@ -56,10 +53,7 @@ export async function sharedSince(
         .where('s.teacher_id', teacherId)
         .whereIn('m.student_id', studentIds)
         .groupBy('m.student_id')
-        .select(
-          'm.student_id',
-          db.raw(SINCE_SQL),
-        )
+        .select('m.student_id', db.raw(SINCE_SQL))
     : []
   return new Map(rows.map((r) => [r.student_id, r.since]))
 }

@@ -89,7 +89,12 @@ export async function acceptLink(
   return ctx.db.transaction(async (trx) => {
     const created = account ? await insertUser(trx, account).catch(duplicateEmail) : null
     const studentId = current?.id ?? created!.id
-    const { joined, sharesFrom } = await joinStudio(trx, link.studioId, studentId, input.shareHistory)
+    const { joined, sharesFrom } = await joinStudio(
+      trx,
+      link.studioId,
+      studentId,
+      input.shareHistory,
+    )
     // A use counts only for someone who joined; the join is undone when the link closed meanwhile.
     if (joined && !(await repo.consumeLinkUse(trx, link.id)))
       throw new AppError(
@@ -98,6 +103,12 @@ export async function acceptLink(
         410,
       )
     const { studioId, studioName } = link
-    return { created, studioId, studioName, alreadyMember: !joined, sharesFrom: joined ? sharesFrom : null }
+    return {
+      created,
+      studioId,
+      studioName,
+      alreadyMember: !joined,
+      sharesFrom: joined ? sharesFrom : null,
+    }
   })
 }

@@ -116,7 +116,11 @@ export async function summary(
   viewer: PublicUser,
   q: RangeQuery,
 ): Promise<SummaryAnswer> {
-  const { studentId, instruments, timeZone, key, pending, window } = await rangeScope(ctx, viewer, q)
+  const { studentId, instruments, timeZone, key, pending, window } = await rangeScope(
+    ctx,
+    viewer,
+    q,
+  )
   const drill = q.drill ?? ALL_DRILLS
   const today = localDay(new Date(), timeZone)
   const weekStart = addDays(today, -6)
@@ -275,7 +279,13 @@ export async function tempos(
   const to = q.to ?? localDay(new Date(), timeZone)
   const from = q.from ?? addDays(to, -(DEFAULT_TIMELINE_DAYS - 1))
   const range = { from, to }
-  const filter = { instrumentKey: key, drill: q.drill ?? null, timeZone, range, since: window.since }
+  const filter = {
+    instrumentKey: key,
+    drill: q.drill ?? null,
+    timeZone,
+    range,
+    since: window.since,
+  }
   const rows = await repo.tempoRows(ctx.db, studentId, filter)
   const series = new Map<string, TemposAnswer['series'][number]>()
   for (const { drill, settings, day, bpm } of rows) {

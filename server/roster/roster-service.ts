@@ -106,6 +106,7 @@ function toRosterRow(student: RosterStudent, assignments: Assignment[], at: RowC
     attention: attentionOf(student, assignments, at),
     instrument: student.instrument,
     fastestTempo: student.fastestTempo,
+    sharesFrom: student.sharesFrom,
   }
 }
 

@@ -54,6 +54,8 @@ export interface RosterStudent {
   medianRecallMs7d: number | null
   medianRecallMsPrev7d: number | null
   recallTrend: { change: number | null; direction: 'faster' | 'slower' | 'steady' | null }
+  /** The first instant of practice the teacher may see (ISO; null: all of it). */
+  sharesFrom: string | null
   weakestPositions: {
     instrumentId: string
     string: number
@@ -175,6 +177,7 @@ export async function rosterSummary(
       name: m.name,
       email: m.email,
       studios: m.studios,
+      sharesFrom: m.since?.toISOString() ?? null,
       ...weekPart(weekOf.get(m.id)),
       instrument: instrumentOf(instrumentRow.get(m.id)),
       fastestTempo: tempoPart(tempoOf.get(m.id)),

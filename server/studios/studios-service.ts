@@ -108,7 +108,11 @@ const DAY_MS = 24 * 3600 * 1000
 export function sharesFromOf(choice: ShareHistoryChoice, timeZone: string, now = new Date()) {
   if (choice === 'everything') return null
   if (choice === 'from-now') return now
-  return zonedTimeToUtc(localDay(new Date(now.getTime() - 30 * DAY_MS), timeZone), '00:00', timeZone)
+  return zonedTimeToUtc(
+    localDay(new Date(now.getTime() - 30 * DAY_MS), timeZone),
+    '00:00',
+    timeZone,
+  )
 }
 
 /**

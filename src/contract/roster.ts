@@ -115,6 +115,8 @@ export interface RosterRow {
   instrument: RosterInstrument | null
   /** Null when no take was played clean in the last 7 days. */
   fastestTempo: FastestTempo | null
+  /** The student shares practice with this teacher from this instant on; null: all of it. */
+  sharesFrom: string | null
 }
 
 export interface RosterPage {

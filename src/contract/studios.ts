@@ -25,7 +25,10 @@ export interface Membership {
  */
 export const SHARE_HISTORY_CHOICES = ['from-now', 'last-30-days', 'everything'] as const
 export type ShareHistoryChoice = (typeof SHARE_HISTORY_CHOICES)[number]
-export const ShareHistorySchema = z.enum(SHARE_HISTORY_CHOICES, 'Choose what earlier practice to share.')
+export const ShareHistorySchema = z.enum(
+  SHARE_HISTORY_CHOICES,
+  'Choose what earlier practice to share.',
+)
 export const SHARE_HISTORY_LABELS: Record<ShareHistoryChoice, string> = {
   'from-now': 'From now on',
   'last-30-days': 'The last 30 days',
