@@ -171,6 +171,7 @@ export interface ActiveInstrumentRow {
   name: string
   preset_id: string | null
   tuning: number[]
+  frets: number
   handedness: 'right' | 'left'
   accidentals: 'sharp' | 'flat'
 }
@@ -183,7 +184,7 @@ export async function activeInstruments(
   return db('instruments')
     .whereIn('user_id', studentIds)
     .andWhere('is_active', true)
-    .select('user_id', 'name', 'preset_id', 'tuning', 'handedness', 'accidentals')
+    .select('user_id', 'name', 'preset_id', 'tuning', 'frets', 'handedness', 'accidentals')
 }
 
 interface MembershipRow {
@@ -199,7 +200,10 @@ interface MembershipRow {
 }
 
 /** Every student in the teacher's studios, with last practice and overall accuracy. */
-export async function listTeacherStudents(db: Db, teacherId: string): Promise<StudioStudent[]> {
+export async function listTeacherStudents(
+  db: Db,
+  teacherId: string,
+): Promise<Omit<StudioStudent, 'instrument'>[]> {
   const rows: MembershipRow[] = await db('studios as s')
     .join('studio_members as m', 'm.studio_id', 's.id')
     .join('users as u', 'u.id', 'm.student_id')
