@@ -121,7 +121,7 @@ describe('a Neck Recall item on each student instrument', () => {
     })
   })
 
-  it('warns when a Window Cycle window reaches below the instrument (B0 under a 4-string's E1)', () => {
+  it('warns when a Window Cycle window reaches below the instrument (B0 under the E1 of a 4-string)', () => {
     const cycle = {
       drill: 'cycle' as const,
       settings: CycleSettingsSchema.parse({ low: 23, high: 35, scale: 'major' }),
