@@ -1,7 +1,13 @@
 // What a plan item will show on one student's instrument, in words for the plan editor: the concrete
 // strings of a region counted from the lowest or highest string, and where frets or a pitch window
 // do not fit that instrument.
-import { instrumentRange, pitchName, stringNames, toUnicode } from '../theory'
+import {
+  instrumentRange,
+  pitchName,
+  stringNames,
+  toUnicode,
+  type AccidentalPreference,
+} from '../theory'
 import { describeSettings, drillContract, type DrillContract, type DrillPreset } from './drills'
 import { spanOnInstrument } from './string-span'
 
@@ -9,7 +15,7 @@ import { spanOnInstrument } from './string-span'
 export interface PreviewNeck {
   tuning: readonly number[]
   frets: number
-  accidentals: 'sharp' | 'flat'
+  accidentals: AccidentalPreference
 }
 
 export interface ItemPreview {
