@@ -22,9 +22,8 @@ describe('plan editor drill forms', () => {
   it.each(DRILL_IDS)(
     'a new %s item starts from the settings its drill page gives a standard 4-string bass',
     (drill) => {
-      const { strings: _relative, ...settings } = defaultPreset(drill).settings as {
-        strings?: unknown
-      }
+      const settings = { ...defaultPreset(drill).settings } as { strings?: unknown }
+      delete settings.strings // only plans count strings from the ends (tested below)
       expect(settings).toEqual(drillDefinition(drill).defaults(FALLBACK_NECK))
     },
   )

@@ -4,6 +4,8 @@ import { afterEach, describe, expect, it, vi } from 'vitest'
 import AssignedPlans from '../../src/components/plans/AssignedPlans.vue'
 import PlanCard from '../../src/components/plans/PlanCard.vue'
 import PlanEditorDialog from '../../src/components/plans/PlanEditorDialog.vue'
+import { DrillPresetSchema } from '../../src/contract/drills'
+import type { Plan } from '../../src/contract/plans'
 import { defaultPreset } from '../../src/plans/preset-fields'
 import { mountRoute, mountWithApp } from '../helpers/mount'
 
@@ -176,17 +178,20 @@ const STUDENTS = [
 describe('instrument-aware plans', () => {
   it('when a plan for two students is edited, then each item shows the strings on each instrument', async () => {
     stubApi({})
-    const preset = defaultPreset('recall')
-    const plan = {
+    const preset = DrillPresetSchema.parse({
+      drill: 'recall',
+      settings: {
+        ...defaultPreset('recall').settings,
+        strings: { from: 'lowest', to: '2nd-lowest' },
+      },
+    })
+    const plan: Plan = {
       ...{ id: 'p1', title: 'Low end', notes: '', dueAt: null, createdAt: '', updatedAt: '' },
       items: [
         {
           id: ITEM_RECALL,
           position: 0,
-          preset: {
-            ...preset,
-            settings: { ...preset.settings, strings: { from: 'lowest', to: '2nd-lowest' } },
-          },
+          preset,
           target: { kind: 'sessions', count: 2 },
         },
       ],
