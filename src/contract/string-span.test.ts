@@ -10,7 +10,13 @@ import {
   stringIndex,
   type StringSpan,
 } from './string-span'
-import { CycleSettingsSchema, recallOnInstrument, RecallSettingsSchema } from './drills'
+import {
+  CycleSettingsSchema,
+  HuntSettingsSchema,
+  recallOnInstrument,
+  RecallSettingsSchema,
+  settingsOnInstrument,
+} from './drills'
 import { previewOnInstrument } from './plan-preview'
 
 // Tunings, open strings lowest first (REFERENCES.md, common practice)
@@ -101,6 +107,15 @@ describe('a Neck Recall item on each student instrument', () => {
     const onGuitar = recallOnInstrument(item, GUITAR.length)
     expect(onGuitar.region).toMatchObject({ lowString: 0, highString: 2, lowFret: 5 })
     expect(onGuitar.strings).toBeUndefined()
+  })
+
+  it('changes only drills that count strings from the ends (a Pitch Hunt item stays as it is)', () => {
+    expect(settingsOnInstrument('recall', item, BASS_5).region).toMatchObject({
+      lowString: 0,
+      highString: 2,
+    })
+    const hunt = HuntSettingsSchema.parse({})
+    expect(settingsOnInstrument('hunt', hunt, BASS_5)).toBe(hunt)
   })
 
   it('names the strings each student will see: B–A on a 5-string, E–D on a 4-string', () => {

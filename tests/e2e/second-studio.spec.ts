@@ -6,40 +6,11 @@
 import { randomUUID } from 'node:crypto'
 import type { Browser, Page } from 'playwright-core'
 import { afterAll, beforeAll, describe, expect, it } from 'vitest'
-import { LAPTOP, launchBrowser, newPage, PHONE, screenshot } from '../helpers/browser'
+import { launchBrowser, PHONE, screenshot } from '../helpers/browser'
+import { HEADERS, joinWithToken, signedUp, studioLink } from '../helpers/e2e-accounts'
 import { attemptBody } from '../helpers/practice'
 
-const HEADERS = { 'X-Requested-With': 'ambitus' } // as the app's client sends (anti-CSRF)
-const PASSWORD = 'a long enough password'
-const stamp = `${Date.now()}-${Math.round(Math.random() * 1e6)}`
 let browser: Browser
-
-async function signedUp(role: 'student' | 'teacher', name: string, viewport = LAPTOP) {
-  const { page } = await newPage(browser, viewport)
-  await page.goto('/')
-  const email = `${role}-${name.split(' ')[0]!.toLowerCase()}-${stamp}@example.test`
-  const res = await page.request.post('/api/auth/register', {
-    headers: HEADERS,
-    data: { email, password: PASSWORD, name, role },
-  })
-  expect(res.status()).toBe(201)
-  return { page, id: ((await res.json()) as { user: { id: string } }).user.id }
-}
-
-/** The teacher's new studio and an open link to it (its path and query, and its token). */
-async function studioLink(teacher: Page, name: string) {
-  const studio = await teacher.request.post('/api/studio/studios', {
-    headers: HEADERS,
-    data: { name },
-  })
-  const { id } = ((await studio.json()) as { studio: { id: string } }).studio
-  const link = await teacher.request.post(`/api/studio/studios/${id}/invite-links`, {
-    headers: HEADERS,
-    data: {},
-  })
-  const url = new URL(((await link.json()) as { url: string }).url)
-  return { path: url.pathname + url.search, token: url.searchParams.get('token')! }
-}
 
 /** Three answers two days ago on the student's own bass, as the drills would have sent them. */
 async function practisedTwoDaysAgo(student: Page) {
@@ -90,18 +61,14 @@ describe('a student joins a second studio', () => {
   let student: { page: Page; id: string }
 
   beforeAll(async () => {
-    first = await signedUp('teacher', 'Ilse Firstbrook')
-    student = await signedUp('student', 'Tamsin Twofold')
-    const joined = await student.page.request.post('/api/invitations/accept', {
-      headers: HEADERS,
-      data: { token: (await studioLink(first.page, 'Firstbrook Bass')).token },
-    })
-    expect(joined.status()).toBe(200)
+    first = await signedUp(browser, 'teacher', 'Ilse Firstbrook')
+    student = await signedUp(browser, 'student', 'Tamsin Twofold')
+    await joinWithToken(student.page, (await studioLink(first.page, 'Firstbrook Bass')).token)
     await practisedTwoDaysAgo(student.page)
   })
 
   it('"from now on": the new teacher sees none of the earlier answers, the first teacher all', async () => {
-    const second = await signedUp('teacher', 'Oskar Secondvale')
+    const second = await signedUp(browser, 'teacher', 'Oskar Secondvale')
     const { path } = await studioLink(second.page, 'Secondvale Strings')
     await joinWithChoice(student.page, path, 'From now on', 'second-studio-choice-laptop')
     const line = student.page.getByText('Oskar Secondvale sees your practice from')
@@ -124,7 +91,7 @@ describe('a student joins a second studio', () => {
   })
 
   it('"everything": the new teacher sees the earlier answers too', async () => {
-    const third = await signedUp('teacher', 'Greta Thirdmoor', PHONE)
+    const third = await signedUp(browser, 'teacher', 'Greta Thirdmoor', PHONE)
     const { path } = await studioLink(third.page, 'Thirdmoor Guitar')
     await joinWithChoice(student.page, path, 'Everything', 'second-studio-everything-laptop')
     const theirs = await glance(third.page, student.id)
