@@ -80,6 +80,7 @@ function attentionOf(student: RosterStudent, assignments: Assignment[], at: RowC
       assignments,
       timeZone: at.timeZone,
       lastLessonAt: at.lastLessonAt,
+      sharesFrom: student.sharesFrom ? new Date(student.sharesFrom) : null,
     },
     at.now,
   )

@@ -82,6 +82,9 @@ describe('joining a second studio', () => {
     expect(await resultLines(teacher)).toHaveLength(1) // the header only
     const row = await rosterRowFor(teacher)
     expect(row).toMatchObject({ lastPracticeAt: null, attemptsThisWeek: 0, weakSpots: [] })
+    expect(row.attention.map((r: { text: string }) => r.text)).toContain(
+      'No practice since joining',
+    )
     const listed = (await teacher.agent.get('/api/studio/students')).body.students
     expect(listed[0]).toMatchObject({ lastPracticeAt: null, accuracy: null })
     const since = await teacher.agent
