@@ -7,6 +7,8 @@ import PlanEditorDialog from '../../src/components/plans/PlanEditorDialog.vue'
 import { DrillPresetSchema } from '../../src/contract/drills'
 import type { Plan } from '../../src/contract/plans'
 import { defaultPreset } from '../../src/plans/preset-fields'
+import type { PublicUser } from '../../src/contract/users'
+import { useAuthStore } from '../../src/stores/auth'
 import { mountRoute, mountWithApp } from '../helpers/mount'
 
 afterEach(() => {
@@ -265,5 +267,41 @@ describe('InvitationAcceptView', () => {
     expect(wrapper.text()).toContain('Marta Ilves invites you to Cedar Hollow')
     expect(wrapper.find('input[name="name"]').exists()).toBe(true)
     expect(wrapper.text()).toContain('Create my account and join')
+  })
+
+  it('when a student of another studio joins, then they choose what earlier practice to share', async () => {
+    const sent: unknown[] = []
+    const student = { id: 'u1', email: 'wren@example.test', name: 'Wren', role: 'student' }
+    stubApi({
+      'GET /api/invitations/preview': () => ({
+        invitation: {
+          ...{ studioName: 'Second Studio', teacherName: 'Oskar', email: null },
+          ...{ expiresAt: new Date().toISOString(), accountExists: false },
+        },
+      }),
+      'GET /api/studio/memberships': () => ({
+        memberships: [{ studioId: 's1', studioName: 'First', teacherName: 'Ilse' }],
+      }),
+      'POST /api/invitations/accept': (_url, init) => {
+        sent.push(JSON.parse(String(init.body)))
+        return { user: student, studio: { id: 's2', name: 'Second Studio' }, alreadyMember: false }
+      },
+    })
+    const { wrapper, pinia } = await mountRoute(
+      '/invitations/accept?token=abcdefghijklmnopqrstuvwxyz',
+    )
+    useAuthStore(pinia).user = student as PublicUser // signed in (mountRoute leaves guards out)
+    await flushPromises()
+    const choice = wrapper.get('[data-testid="share-history"]')
+    expect(choice.text()).toContain('What earlier practice may Oskar see?')
+    const checked = () => choice.findAll('input:checked').map((i) => i.attributes('value'))
+    expect(checked()).toEqual(['from-now'])
+    await choice.get('[data-testid="share-history-everything"] input').setValue(true)
+    await wrapper
+      .findAll('button')
+      .find((b) => b.text() === 'Join Second Studio')!
+      .trigger('click')
+    await flushPromises()
+    expect(sent).toEqual([expect.objectContaining({ shareHistory: 'everything' })])
   })
 })
