@@ -5,8 +5,8 @@
 import { randomUUID } from 'node:crypto'
 import type { Browser, Page } from 'playwright-core'
 import { afterAll, beforeAll, describe, expect, it } from 'vitest'
-import { launchBrowser, PHONE, screenshot } from '../helpers/browser'
-import { HEADERS, joinWithToken, signedUp, studioLink } from '../helpers/e2e-accounts'
+import { APP_HEADERS, launchBrowser, PHONE, screenshot } from '../helpers/browser'
+import { joinWithToken, signedUp, studioLink } from '../helpers/e2e-accounts'
 import { attemptBody } from '../helpers/practice'
 
 // Open strings lowest first (common practice): B0 E1 A1 D2 G2 and E2 A2 D3 G3 B3 E4
@@ -20,12 +20,12 @@ let browser: Browser
 /** Adds an instrument and makes it the active one. */
 async function playing(student: Page, neck: (typeof NECKS)['five']) {
   const res = await student.request.post('/api/instruments', {
-    headers: HEADERS,
+    headers: APP_HEADERS,
     data: { ...neck, scaleLengthMm: 864 },
   })
   expect(res.status()).toBe(201)
   const { id } = ((await res.json()) as { instrument: { id: string } }).instrument
-  await student.request.post(`/api/instruments/${id}/activate`, { headers: HEADERS })
+  await student.request.post(`/api/instruments/${id}/activate`, { headers: APP_HEADERS })
   return id
 }
 
@@ -47,7 +47,7 @@ describe('a plan on two instruments', () => {
       students.push({ name, page, id, instrumentId: await playing(page, neck) })
     }
     const plan = await teacher.request.post('/api/plans', {
-      headers: HEADERS,
+      headers: APP_HEADERS,
       data: {
         title: 'The two highest strings',
         items: [
@@ -110,7 +110,7 @@ describe('a plan on two instruments', () => {
       }),
     )
     const res = await tobin.page.request.post('/api/attempts', {
-      headers: HEADERS,
+      headers: APP_HEADERS,
       data: { attempts, timeZone: 'UTC' },
     })
     expect(res.status()).toBe(201)

@@ -6,8 +6,8 @@
 import { randomUUID } from 'node:crypto'
 import type { Browser, Page } from 'playwright-core'
 import { afterAll, beforeAll, describe, expect, it } from 'vitest'
-import { launchBrowser, PHONE, screenshot } from '../helpers/browser'
-import { HEADERS, joinWithToken, signedUp, studioLink } from '../helpers/e2e-accounts'
+import { APP_HEADERS, launchBrowser, PHONE, screenshot } from '../helpers/browser'
+import { joinWithToken, signedUp, studioLink } from '../helpers/e2e-accounts'
 import { attemptBody } from '../helpers/practice'
 
 let browser: Browser
@@ -25,7 +25,7 @@ async function practisedTwoDaysAgo(student: Page) {
     }),
   )
   const res = await student.request.post('/api/attempts', {
-    headers: HEADERS,
+    headers: APP_HEADERS,
     data: { attempts, timeZone: 'UTC' },
   })
   expect(res.status()).toBe(201)

@@ -1,14 +1,10 @@
-// Fresh accounts for e2e specs that must not touch the seeded users: sign-ups through the API in a
-// page's own browser context, and a studio with an open invitation link.
+// Fresh accounts for e2e specs that must not touch the seeded users: a signed-up account in a page of
+// its own (with its id), a studio with an open invitation link, joining with the link's token.
 import type { Browser, Page } from 'playwright-core'
 import { expect } from 'vitest'
-import { LAPTOP, newPage } from './browser'
+import { APP_HEADERS, LAPTOP, newPage, signUpFresh } from './browser'
 
-export const HEADERS = { 'X-Requested-With': 'ambitus' } // as the app's client sends (anti-CSRF)
-const PASSWORD = 'a long enough password'
-const stamp = `${Date.now()}-${Math.round(Math.random() * 1e6)}`
-
-/** A new signed-in account in a page of its own. */
+/** A new signed-in account in a page of its own, with its user id. */
 export async function signedUp(
   browser: Browser,
   role: 'student' | 'teacher',
@@ -16,25 +12,20 @@ export async function signedUp(
   viewport = LAPTOP,
 ) {
   const { page } = await newPage(browser, viewport)
-  await page.goto('/')
-  const email = `${role}-${name.split(' ')[0]!.toLowerCase()}-${stamp}@example.test`
-  const res = await page.request.post('/api/auth/register', {
-    headers: HEADERS,
-    data: { email, password: PASSWORD, name, role },
-  })
-  expect(res.status()).toBe(201)
-  return { page, id: ((await res.json()) as { user: { id: string } }).user.id }
+  await signUpFresh(page, name, role)
+  const me = await page.request.get('/api/auth/me')
+  return { page, id: ((await me.json()) as { user: { id: string } }).user.id }
 }
 
 /** The teacher's new studio and an open link to it (its path and query, and its token). */
 export async function studioLink(teacher: Page, name: string) {
   const studio = await teacher.request.post('/api/studio/studios', {
-    headers: HEADERS,
+    headers: APP_HEADERS,
     data: { name },
   })
   const { id } = ((await studio.json()) as { studio: { id: string } }).studio
   const link = await teacher.request.post(`/api/studio/studios/${id}/invite-links`, {
-    headers: HEADERS,
+    headers: APP_HEADERS,
     data: {},
   })
   const url = new URL(((await link.json()) as { url: string }).url)
@@ -44,7 +35,7 @@ export async function studioLink(teacher: Page, name: string) {
 /** Joins a studio with a link's token through the API (the signed-in student of the page). */
 export async function joinWithToken(student: Page, token: string, shareHistory?: string) {
   const res = await student.request.post('/api/invitations/accept', {
-    headers: HEADERS,
+    headers: APP_HEADERS,
     data: { token, ...(shareHistory ? { shareHistory } : {}) },
   })
   expect(res.status()).toBe(200)
