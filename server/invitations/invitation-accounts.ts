@@ -12,6 +12,8 @@ export interface AcceptResult {
   studioId: string
   studioName: string
   alreadyMember: boolean
+  /** What the teacher sees of earlier practice (null: all of it, or already a member). */
+  sharesFrom: Date | null
 }
 
 const signInInstead = () =>

@@ -48,7 +48,11 @@ function publicRoutes(ctx: AppContext): Router {
     const user = current ?? toPublicUser(result.created!)
     res.status(result.created ? 201 : 200).json({
       user,
-      studio: { id: result.studioId, name: result.studioName },
+      studio: {
+        id: result.studioId,
+        name: result.studioName,
+        sharesFrom: result.sharesFrom?.toISOString() ?? null,
+      },
       alreadyMember: result.alreadyMember,
     })
   })

@@ -1,7 +1,11 @@
 // Invitation inputs: the address to invite, the list's filter, and the token of the public link.
 import { z } from 'zod'
 import { EmailSchema, NameSchema, PasswordSchema } from '../users/users-schema'
-import { INVITE_BATCH_MAX, INVITE_MESSAGE_MAX } from '../../src/contract/studios'
+import {
+  INVITE_BATCH_MAX,
+  INVITE_MESSAGE_MAX,
+  ShareHistorySchema,
+} from '../../src/contract/studios'
 
 const NoteSchema = z
   .string('Write the note as text.')
@@ -36,5 +40,7 @@ export const AcceptInvitationSchema = z.object({
   email: EmailSchema.optional(),
   name: NameSchema.optional(),
   password: PasswordSchema.optional(),
+  /** A signed-in student's choice of earlier practice the new teacher may see. */
+  shareHistory: ShareHistorySchema.optional(),
 })
 export type AcceptInvitationInput = z.infer<typeof AcceptInvitationSchema>

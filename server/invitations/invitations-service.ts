@@ -225,12 +225,18 @@ export async function acceptInvitation(
         410,
       )
     }
-    const joined = await joinStudio(trx, invitation.studioId, studentId)
+    const { joined, sharesFrom } = await joinStudio(
+      trx,
+      invitation.studioId,
+      studentId,
+      input.shareHistory,
+    )
     return {
       created,
       studioId: invitation.studioId,
       studioName: invitation.studioName,
       alreadyMember: !joined,
+      sharesFrom: joined ? sharesFrom : null,
     }
   })
 }

@@ -88,7 +88,13 @@ export async function acceptLink(
   const account = current ? null : await newStudentAccount(ctx, input.email, input)
   return ctx.db.transaction(async (trx) => {
     const created = account ? await insertUser(trx, account).catch(duplicateEmail) : null
-    const joined = await joinStudio(trx, link.studioId, current?.id ?? created!.id)
+    const studentId = current?.id ?? created!.id
+    const { joined, sharesFrom } = await joinStudio(
+      trx,
+      link.studioId,
+      studentId,
+      input.shareHistory,
+    )
     // A use counts only for someone who joined; the join is undone when the link closed meanwhile.
     if (joined && !(await repo.consumeLinkUse(trx, link.id)))
       throw new AppError(
@@ -96,6 +102,13 @@ export async function acceptLink(
         'This link was used up or withdrawn a moment ago.',
         410,
       )
-    return { created, studioId: link.studioId, studioName: link.studioName, alreadyMember: !joined }
+    const { studioId, studioName } = link
+    return {
+      created,
+      studioId,
+      studioName,
+      alreadyMember: !joined,
+      sharesFrom: joined ? sharesFrom : null,
+    }
   })
 }

@@ -8,6 +8,7 @@ import { forbidden, notFound } from '../lib/errors'
 import type { PublicUser } from '../users/users-schema'
 import { teacherStudents } from '../access/access-repository'
 import { assertCanReadStudent } from '../access/student-access'
+import { readableSince } from '../access/shared-history'
 import { timeZoneOf } from '../users/users-repository'
 import { zonedTimeToUtc } from '../../src/contract/local-time'
 import type {
@@ -107,16 +108,18 @@ export async function sinceLastLesson(
   studentId: string,
   now = new Date(),
 ): Promise<SinceLastLesson> {
-  await assertCanReadStudent(ctx, viewer, studentId)
+  const shared = await readableSince(ctx, viewer, studentId)
   const lessons = await lessonsFor(ctx, viewer, studentId)
   const last = lessons
     .filter((l) => l.status !== 'cancelled' && Date.parse(l.startsAt) <= now.getTime())
     .at(-1)
   const lessonAt = last ? new Date(last.startsAt) : null
+  // practice from before what the student shared with this teacher stays hidden
+  const since = shared && (!lessonAt || shared > lessonAt) ? shared : lessonAt
   const figures = await repo.practiceSince(
     ctx.db,
     studentId,
-    lessonAt,
+    since,
     await timeZoneOf(ctx.db, studentId),
   )
   return { lessonAt: lessonAt?.toISOString() ?? null, ...figures }

@@ -6,6 +6,7 @@ import type { PublicUser } from '../users/users-schema'
 import { teacherStudents } from '../access/access-repository'
 import {
   assignmentOf,
+  assignmentRows,
   assignStudents,
   dropRecordingFiles,
   purgeAssignments,
@@ -24,7 +25,10 @@ import {
 } from './plans-repository'
 import { dueDateChangedMail, planAssignedMail } from './plans-mail'
 import { timeZonesOf } from '../users/users-repository'
+import { buildAssignments } from './assigned-plans'
+import type { Assignment } from '../../src/contract/assignments'
 import type {
+  AssigneeProgress,
   Plan,
   PlanCreateInput,
   PlanItemContext,
@@ -32,7 +36,33 @@ import type {
 } from '../../src/contract/plans'
 import { STARTER_PLANS } from '../../src/contract/starter-plans'
 
-export const listPlans = (ctx: AppContext, teacherId: string) => listTeacherPlans(ctx.db, teacherId)
+/** How far the student of an assignment is through its plan. */
+function progressOf(assignment: Assignment): AssigneeProgress {
+  const ratios = assignment.items.map((item) => item.progress.ratio)
+  return {
+    targetsMet: assignment.targetsMet,
+    targetsTotal: assignment.items.length,
+    share: ratios.length ? ratios.reduce((a, b) => a + b, 0) / ratios.length : 0,
+    complete: assignment.complete,
+    overdue: assignment.overdue,
+  }
+}
+
+/** The teacher's plans, each assignee with how far they are. */
+export async function listPlans(ctx: AppContext, teacherId: string): Promise<Plan[]> {
+  const [list, assignments] = await Promise.all([
+    listTeacherPlans(ctx.db, teacherId),
+    assignmentRows(ctx, { teacherId }).then((rows) => buildAssignments(ctx, rows)),
+  ])
+  const byId = new Map(assignments.map((a) => [a.id, a]))
+  return list.map((plan) => ({
+    ...plan,
+    assignees: plan.assignees.map((a) => {
+      const assignment = byId.get(a.assignmentId)
+      return assignment ? { ...a, progress: progressOf(assignment) } : a
+    }),
+  }))
+}
 export const starterPlans = () => STARTER_PLANS
 
 async function ownPlan(ctx: AppContext, teacherId: string, planId: string): Promise<PlanRecord> {

@@ -6,6 +6,8 @@ export interface CycleStopFilter {
   scale: string
   /** Only this plan item's attempts; null: any Window Cycle attempt of the scale. */
   planItemId: string | null
+  /** Only attempts from this instant on (what the student shares with the viewer); null: all. */
+  since?: Date | null
 }
 
 export interface CycleStopRow {
@@ -27,6 +29,7 @@ export async function lastCycleStop(
     .whereRaw(`detail->>'noteIndex' ~ '^[0-9]{1,2}$'`)
     .whereRaw(`detail->>'phase' in ('up', 'down')`)
   if (filter.planItemId) q.where('plan_item_id', filter.planItemId)
+  if (filter.since) q.where('created_at', '>=', filter.since)
   const row = (await q
     .orderBy('created_at', 'desc')
     .first(

@@ -34,6 +34,8 @@ export interface DayRow {
 export interface DayRange {
   from?: string
   to?: string
+  /** Sessions begun from this instant on only (a teacher sees what the student shared). */
+  since?: Date
 }
 
 /** The player's time zone for days and streaks (UTC until their client has sent one). */
@@ -137,6 +139,7 @@ export async function sessionCount(
   range: DayRange,
 ) {
   const q = db('progress_sessions').where('user_id', userId).modify(inRange(range))
+  if (range.since) q.where('first_at', '>=', range.since)
   if (instrumentKey !== ALL_INSTRUMENTS) q.where('instrument_key', instrumentKey)
   if (drill !== ALL_DRILLS) q.where('drill', drill)
   const row = await q.count({ n: '*' }).first()
@@ -149,6 +152,8 @@ export interface FingeringFilter {
   scale: string
   lowFret: number
   highFret: number
+  /** Sessions that ended from this instant on only. */
+  since?: Date
 }
 
 /** Range Runs of one key and region, per fingering pattern (from the per-session runs rollup). */
@@ -161,6 +166,7 @@ export async function fingeringRows(db: Db, userId: string, f: FingeringFilter) 
     high_fret: f.highFret,
   })
   if (f.instrumentId) q.where('instrument_key', f.instrumentId)
+  if (f.since) q.where('last_at', '>=', f.since)
   const rows = (await q
     .groupBy('pattern')
     .select('pattern')
@@ -222,7 +228,13 @@ export interface TempoRow {
 export async function tempoRows(
   db: Db,
   userId: string,
-  f: { instrumentKey: string; drill: string | null; timeZone: string; range: Required<DayRange> },
+  f: {
+    instrumentKey: string
+    drill: string | null
+    timeZone: string
+    range: { from: string; to: string }
+    since: Date | null
+  },
 ): Promise<TempoRow[]> {
   const day = db.raw('to_char((created_at at time zone ?)::date, ?)', [f.timeZone, 'YYYY-MM-DD'])
   const q = db('attempts')
@@ -235,6 +247,7 @@ export async function tempoRows(
     ])
   if (f.instrumentKey !== ALL_INSTRUMENTS) q.where('instrument_id', f.instrumentKey)
   if (f.drill) q.where('drill', f.drill)
+  if (f.since) q.where('created_at', '>=', f.since)
   const rows = (await q
     .select('drill', db.raw(`coalesce(detail->>'playedSettings', '') as settings`), { day })
     .max({ bpm: db.raw(`(detail->>'cleanTempo')::int`) })

@@ -1,6 +1,6 @@
 // Progress use cases: summary, places, notes, timeline and fingerings of one student, read from the
 // rollups. Own data by default; teachers and admins pass `student` and are checked first.
-import { assertCanReadStudent } from '../access/student-access'
+import { practiceWindow, readableSince, type PracticeWindow } from '../access/shared-history'
 import type { AppContext } from '../context'
 import { badRequest } from '../lib/errors'
 import { listInstruments } from '../instruments/instruments-repository'
@@ -18,6 +18,7 @@ import {
   totalsOf,
 } from './progress-stats'
 import * as repo from './progress-repository'
+import { chordToneRowsSince, itemRowsSince } from './window-repository'
 import { lastCycleStop } from './cycle-stop-repository'
 import type { CyclePositionAnswer } from '../../src/contract/drills'
 import type {
@@ -48,13 +49,20 @@ const DEFAULT_TIMELINE_DAYS = 30
  */
 async function settledStudent(ctx: AppContext, viewer: PublicUser, student?: string) {
   const studentId = student ?? viewer.id
-  await assertCanReadStudent(ctx, viewer, studentId)
-  return { studentId, pending: await ctx.statistics.settle([studentId]) }
+  const since = await readableSince(ctx, viewer, studentId)
+  return { studentId, since, pending: await ctx.statistics.settle([studentId]) }
 }
 
-/** The student whose data is asked for (see settledStudent). */
+/** The student whose data is asked for (see settledStudent) and from when on the viewer sees it. */
 export async function readableStudent(ctx: AppContext, viewer: PublicUser, student?: string) {
-  return (await settledStudent(ctx, viewer, student)).studentId
+  const { studentId, since } = await settledStudent(ctx, viewer, student)
+  return { studentId, since }
+}
+
+/** A day range cut to the days the viewer sees wholly (the rollups count whole local days). */
+function visibleRange(window: PracticeWindow, from?: string, to?: string) {
+  const start = window.fromDay && (!from || from < window.fromDay) ? window.fromDay : from
+  return { from: start, to, since: window.since ?? undefined }
 }
 
 async function instrumentsOf(ctx: AppContext, studentId: string): Promise<ProgressInstrument[]> {
@@ -92,13 +100,14 @@ function pickInstrument(
 
 /** Whose figures, their instruments and time zone, and the instrument key a range query reads. */
 async function rangeScope(ctx: AppContext, viewer: PublicUser, q: RangeQuery) {
-  const { studentId, pending } = await settledStudent(ctx, viewer, q.student)
+  const { studentId, since, pending } = await settledStudent(ctx, viewer, q.student)
   const [instruments, timeZone] = await Promise.all([
     instrumentsOf(ctx, studentId),
     repo.timeZoneOf(ctx.db, studentId),
   ])
   const key = pickInstrument(instruments, q.instrument, false)?.id ?? ALL_INSTRUMENTS
-  return { studentId, instruments, timeZone, key, pending }
+  const window = practiceWindow(since, timeZone)
+  return { studentId, instruments, timeZone, key, pending, window }
 }
 
 /** Summary: totals in the range (all time by default), today, the last 7 days, and the streak. */
@@ -107,14 +116,18 @@ export async function summary(
   viewer: PublicUser,
   q: RangeQuery,
 ): Promise<SummaryAnswer> {
-  const { studentId, instruments, timeZone, key, pending } = await rangeScope(ctx, viewer, q)
+  const { studentId, instruments, timeZone, key, pending, window } = await rangeScope(
+    ctx,
+    viewer,
+    q,
+  )
   const drill = q.drill ?? ALL_DRILLS
   const today = localDay(new Date(), timeZone)
   const weekStart = addDays(today, -6)
   const sessions = (from?: string, to?: string) =>
-    repo.sessionCount(ctx.db, studentId, key, drill, { from, to })
+    repo.sessionCount(ctx.db, studentId, key, drill, visibleRange(window, from, to))
   const [days, inRange, onToday, inWeek] = await Promise.all([
-    repo.dayRows(ctx.db, studentId, key, [drill], {}),
+    repo.dayRows(ctx.db, studentId, key, [drill], visibleRange(window)),
     sessions(q.from, q.to),
     sessions(today, today),
     sessions(weekStart, today),
@@ -143,11 +156,13 @@ export async function summary(
 }
 
 async function itemScope(ctx: AppContext, viewer: PublicUser, q: ProgressScope) {
-  const studentId = await readableStudent(ctx, viewer, q.student)
+  const { studentId, since } = await readableStudent(ctx, viewer, q.student)
   const instrument = pickInstrument(await instrumentsOf(ctx, studentId), q.instrument, true)
-  const rows = instrument
-    ? await repo.itemRows(ctx.db, studentId, instrument.id, q.drill ?? ALL_DRILLS)
-    : []
+  const drill = q.drill ?? ALL_DRILLS
+  if (!instrument) return { instrument, rows: [] }
+  const rows = since
+    ? await itemRowsSince(ctx.db, studentId, instrument.id, drill, since)
+    : await repo.itemRows(ctx.db, studentId, instrument.id, drill)
   return { instrument, rows }
 }
 
@@ -182,10 +197,11 @@ export async function timeline(
   viewer: PublicUser,
   q: RangeQuery,
 ): Promise<TimelineAnswer> {
-  const { studentId, timeZone, key } = await rangeScope(ctx, viewer, q)
+  const { studentId, timeZone, key, window } = await rangeScope(ctx, viewer, q)
   const to = q.to ?? localDay(new Date(), timeZone)
   const from = q.from ?? addDays(to, -(DEFAULT_TIMELINE_DAYS - 1))
-  const rows = await repo.dayRows(ctx.db, studentId, key, q.drill ? [q.drill] : null, { from, to })
+  const range = visibleRange(window, from, to)
+  const rows = await repo.dayRows(ctx.db, studentId, key, q.drill ? [q.drill] : null, range)
   const drills = [...new Set(rows.map((r) => r.drill))].sort((a, b) =>
     a === ALL_DRILLS ? -1 : b === ALL_DRILLS ? 1 : a.localeCompare(b),
   )
@@ -203,11 +219,11 @@ async function studentAndInstrument(
   viewer: PublicUser,
   q: { student?: string; instrument?: string },
 ) {
-  const studentId = await readableStudent(ctx, viewer, q.student)
+  const { studentId, since } = await readableStudent(ctx, viewer, q.student)
   const instrument = q.instrument
     ? pickInstrument(await instrumentsOf(ctx, studentId), q.instrument, false)
     : null
-  return { studentId, instrument }
+  return { studentId, since, instrument }
 }
 
 /** How often each fingering pattern of a key and region was practised in Range Runs. */
@@ -216,10 +232,11 @@ export async function fingerings(
   viewer: PublicUser,
   q: FingeringsQuery,
 ): Promise<FingeringsAnswer> {
-  const { studentId, instrument } = await studentAndInstrument(ctx, viewer, q)
+  const { studentId, since, instrument } = await studentAndInstrument(ctx, viewer, q)
   const patterns = await repo.fingeringRows(ctx.db, studentId, {
     ...q,
     instrumentId: instrument?.id,
+    since: since ?? undefined,
   })
   return { patterns }
 }
@@ -230,10 +247,11 @@ export async function cyclePosition(
   viewer: PublicUser,
   q: CyclePositionQuery,
 ): Promise<CyclePositionAnswer> {
-  const studentId = await readableStudent(ctx, viewer, q.student)
+  const { studentId, since } = await readableStudent(ctx, viewer, q.student)
   const row = await lastCycleStop(ctx.db, studentId, {
     scale: q.scale,
     planItemId: q.planItem ?? null,
+    since,
   })
   return { stop: row && { ...row, at: row.at.toISOString() } }
 }
@@ -244,8 +262,10 @@ export async function chordTones(
   viewer: PublicUser,
   q: ChordTonesQuery,
 ): Promise<ChordTonesAnswer> {
-  const { studentId, instrument } = await studentAndInstrument(ctx, viewer, q)
-  const rows = await repo.chordToneRows(ctx.db, studentId, instrument?.id)
+  const { studentId, since, instrument } = await studentAndInstrument(ctx, viewer, q)
+  const rows = since
+    ? await chordToneRowsSince(ctx.db, studentId, since, instrument?.id)
+    : await repo.chordToneRows(ctx.db, studentId, instrument?.id)
   return chordToneFigures(rows, instrument?.id ?? null)
 }
 
@@ -255,10 +275,17 @@ export async function tempos(
   viewer: PublicUser,
   q: RangeQuery,
 ): Promise<TemposAnswer> {
-  const { studentId, timeZone, key } = await rangeScope(ctx, viewer, q)
+  const { studentId, timeZone, key, window } = await rangeScope(ctx, viewer, q)
   const to = q.to ?? localDay(new Date(), timeZone)
   const from = q.from ?? addDays(to, -(DEFAULT_TIMELINE_DAYS - 1))
-  const filter = { instrumentKey: key, drill: q.drill ?? null, timeZone, range: { from, to } }
+  const range = { from, to }
+  const filter = {
+    instrumentKey: key,
+    drill: q.drill ?? null,
+    timeZone,
+    range,
+    since: window.since,
+  }
   const rows = await repo.tempoRows(ctx.db, studentId, filter)
   const series = new Map<string, TemposAnswer['series'][number]>()
   for (const { drill, settings, day, bpm } of rows) {

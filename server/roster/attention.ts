@@ -16,6 +16,8 @@ export interface AttentionFacts {
   lastLessonAt?: Date | null
   /** The viewer's zone, for the days in the words. */
   timeZone: string
+  /** The student shares practice from this instant on (joined a second studio); null: all. */
+  sharesFrom?: Date | null
 }
 
 const WEIGHT: Record<AttentionKind, number> = {
@@ -58,7 +60,8 @@ function practiceReason(f: AttentionFacts, now: Date): AttentionReason[] {
     }).format(f.lastLessonAt)
     return [reason('no-practice', `No practice since the lesson on ${day}`)]
   }
-  if (!f.lastPracticeAt) return [reason('no-practice', 'No practice yet')]
+  if (!f.lastPracticeAt)
+    return [reason('no-practice', f.sharesFrom ? 'No practice since joining' : 'No practice yet')]
   const days = calendarDaysBetween(f.lastPracticeAt, now, f.timeZone)
   return days >= QUIET_DAYS ? [reason('no-practice', `No practice for ${days} days`)] : []
 }

@@ -7,7 +7,7 @@ import { pitchName } from '../../src/theory'
 import type { AppContext } from '../context'
 import { findUserById, timeZoneOf } from '../users/users-repository'
 import { badRequest } from '../lib/errors'
-import { assertCanReadStudent } from '../access/student-access'
+import { readableSince } from '../access/shared-history'
 import type { PublicUser } from '../users/users-schema'
 import { csvFileName, toCsv } from './csv'
 import { studentResults, type ResultRow } from './results-repository'
@@ -59,7 +59,7 @@ export async function resultsCsv(
   studentId: string,
   range: { from?: string; to?: string; timeZone?: string },
 ) {
-  await assertCanReadStudent(ctx, teacher, studentId)
+  const since = await readableSince(ctx, teacher, studentId)
   const to = range.to ? new Date(Date.parse(range.to) + DAY_MS) : new Date()
   const from = range.from ? new Date(range.from) : new Date(to.getTime() - 90 * DAY_MS)
   if (from >= to)
@@ -68,7 +68,7 @@ export async function resultsCsv(
     })
   const timeZone = range.timeZone ?? (await timeZoneOf(ctx.db, teacher.id))
   const student = (await findUserById(ctx.db, studentId))!
-  const rows = await studentResults(ctx.db, studentId, teacher.id, from, to)
+  const rows = await studentResults(ctx.db, studentId, teacher.id, { from, to, since })
   return {
     fileName: csvFileName(student.name, 'results'),
     csv: toCsv(

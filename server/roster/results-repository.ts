@@ -11,7 +11,7 @@ export interface ResultRow {
   answer: string
   correct: boolean
   response_ms: number
-  /** 1 for the student's first session ever, 2 for the next… (by each session's first answer) */
+  /** 1 for the first session the teacher may see, 2 for the next… (by each session's first answer) */
   session_number: number
   plan_title: string | null
   /** How the answer's instrument spells notes; null when it was deleted since. */
@@ -24,11 +24,14 @@ export async function studentResults(
   db: Db,
   studentId: string,
   teacherId: string,
-  from: Date,
-  to: Date,
+  range: { from: Date; to: Date; since: Date | null },
 ): Promise<ResultRow[]> {
+  const { to, since } = range
+  const from = since && since > range.from ? since : range.from
+  // sessions are numbered among the answers the teacher may see, so the count hides nothing
   const sessions = db('attempts')
     .where('user_id', studentId)
+    .modify((q) => since && q.where('created_at', '>=', since))
     .groupBy('session_id')
     .select('session_id', db.raw('row_number() over (order by min(created_at)) as session_number'))
   const rows = await db('attempts as a')

@@ -18,5 +18,12 @@ export function instrumentOf(row: ActiveInstrumentRow | undefined): RosterInstru
       // a tuning the theory core refuses: the string count alone
     }
   }
-  return { name: row.name, description, leftHanded: row.handedness === 'left' }
+  return {
+    name: row.name,
+    description,
+    leftHanded: row.handedness === 'left',
+    tuning,
+    frets: row.frets,
+    accidentals: row.accidentals,
+  }
 }

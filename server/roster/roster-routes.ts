@@ -8,14 +8,13 @@ import { studentAssignmentsForTeacher } from '../plans/assigned-plans'
 import { rosterCsv } from './roster-export'
 import { resultsCsv } from './results-export'
 import { pageRoster } from './roster-query'
-import { listTeacherStudents } from './roster-repository'
 import {
   ResultsExportQuerySchema,
   RosterExportQuerySchema,
   RosterQuerySchema,
   StudentIdParamsSchema,
 } from './roster-schema'
-import { rosterRowOf, rosterRows } from './roster-service'
+import { rosterRowOf, rosterRows, teacherStudentList } from './roster-service'
 
 function sendCsv(res: Response, file: { fileName: string; csv: string }) {
   res
@@ -27,7 +26,7 @@ function sendCsv(res: Response, file: { fileName: string; csv: string }) {
 
 function studentRoutes(ctx: AppContext, router: Router) {
   router.get('/', async (req, res) => {
-    res.json({ students: await listTeacherStudents(ctx.db, req.user!.id) })
+    res.json({ students: await teacherStudentList(ctx, req.user!.id) })
   })
   router.get('/:id', async (req, res) => {
     const { id } = parse(StudentIdParamsSchema, req, 'params')

@@ -10,7 +10,9 @@ import { attentionReasons } from './attention'
 import { lastLessonsOf } from '../lessons/lessons-service'
 import { timeZoneOf } from '../users/users-repository'
 import type { PublicUser } from '../users/users-schema'
-import type { RosterRow, RosterStatus, WeakSpot } from '../../src/contract/roster'
+import type { RosterRow, RosterStatus, StudioStudent, WeakSpot } from '../../src/contract/roster'
+import { activeInstruments, listTeacherStudents } from './roster-repository'
+import { instrumentOf } from './roster-instrument'
 
 const DAY_MS = 24 * 3600 * 1000
 
@@ -78,6 +80,7 @@ function attentionOf(student: RosterStudent, assignments: Assignment[], at: RowC
       assignments,
       timeZone: at.timeZone,
       lastLessonAt: at.lastLessonAt,
+      sharesFrom: student.sharesFrom ? new Date(student.sharesFrom) : null,
     },
     at.now,
   )
@@ -106,6 +109,7 @@ function toRosterRow(student: RosterStudent, assignments: Assignment[], at: RowC
     attention: attentionOf(student, assignments, at),
     instrument: student.instrument,
     fastestTempo: student.fastestTempo,
+    sharesFrom: student.sharesFrom,
   }
 }
 
@@ -136,6 +140,17 @@ export async function rosterRows(
       { now, timeZone, lastLessonAt: lessons.get(s.studentId) ?? null },
     ),
   )
+}
+
+/** Every membership of the teacher's studios, with each student's active instrument. */
+export async function teacherStudentList(
+  ctx: AppContext,
+  teacherId: string,
+): Promise<StudioStudent[]> {
+  const rows = await listTeacherStudents(ctx.db, teacherId)
+  const necks = await activeInstruments(ctx.db, [...new Set(rows.map((r) => r.id))])
+  const byStudent = new Map(necks.map((n) => [n.user_id, n]))
+  return rows.map((r) => ({ ...r, instrument: instrumentOf(byStudent.get(r.id)) }))
 }
 
 /** One student's roster row, for the teacher's student page (403 unless in the teacher's studios). */

@@ -20,12 +20,15 @@
 //   }
 import { pitchClassName, pitchName, stringNames } from '../../src/theory'
 import { compareWeakPlaces } from '../../src/contract/weak-places'
-import { teacherStudents } from '../access/access-repository'
+import { teacherStudents, type TeacherStudent } from '../access/access-repository'
+import { practiceWindow } from '../access/shared-history'
+import { timeZonesOf } from '../users/users-repository'
 import type { AppContext } from '../context'
 import {
   activeInstruments,
   fastestTempos,
   weakestPlaces,
+  weakestPlacesSince,
   weekFigures,
   type FastestTempoRow,
   type WeakRow,
@@ -51,6 +54,8 @@ export interface RosterStudent {
   medianRecallMs7d: number | null
   medianRecallMsPrev7d: number | null
   recallTrend: { change: number | null; direction: 'faster' | 'slower' | 'steady' | null }
+  /** The first instant of practice the teacher may see (ISO; null: all of it). */
+  sharesFrom: string | null
   weakestPositions: {
     instrumentId: string
     string: number
@@ -127,6 +132,17 @@ const toWeak = (r: WeakRow) => ({
 const tempoPart = (t: FastestTempoRow | undefined): FastestTempo | null =>
   t ? { bpm: Number(t.bpm), drill: t.drill, settings: t.settings } : null
 
+/** The weakest places of every student: from the rollups, or from the answers a student shared. */
+async function weakestOf(ctx: AppContext, members: TeacherStudent[], ids: string[]) {
+  const windowed = members.flatMap((m) => (m.since ? [{ id: m.id, since: m.since }] : []))
+  const whole = ids.filter((id) => !windowed.some((w) => w.id === id))
+  const [fromRollups, fromAnswers] = await Promise.all([
+    whole.length ? weakestPlaces(ctx.db, whole, WEAKEST_COUNT) : [],
+    weakestPlacesSince(ctx.db, windowed, WEAKEST_COUNT),
+  ])
+  return [...fromRollups, ...fromAnswers]
+}
+
 /** Every student of the teacher's studios with their week in figures (see the shape above). */
 export async function rosterSummary(
   ctx: AppContext,
@@ -136,11 +152,21 @@ export async function rosterSummary(
   if (!members.length) return { students: [] }
   const ids = members.map((m) => m.id)
   await ctx.statistics.settle(ids) // answers still queued count in the figures read next
+  const zones = await timeZonesOf(ctx.db, ids)
+  const windows = members.map((m) => practiceWindow(m.since, zones.get(m.id) ?? 'UTC'))
   const [weeks, weak, instruments, tempos] = await Promise.all([
-    weekFigures(ctx.db, ids),
-    weakestPlaces(ctx.db, ids, WEAKEST_COUNT),
+    weekFigures(
+      ctx.db,
+      ids,
+      windows.map((w) => w.fromDay),
+    ),
+    weakestOf(ctx, members, ids),
     activeInstruments(ctx.db, ids),
-    fastestTempos(ctx.db, ids),
+    fastestTempos(
+      ctx.db,
+      ids,
+      members.map((m) => m.since),
+    ),
   ])
   const tempoOf = new Map(tempos.map((t) => [t.user_id, t]))
   const weekOf = new Map(weeks.map((w) => [w.user_id, w]))
@@ -151,6 +177,7 @@ export async function rosterSummary(
       name: m.name,
       email: m.email,
       studios: m.studios,
+      sharesFrom: m.since?.toISOString() ?? null,
       ...weekPart(weekOf.get(m.id)),
       instrument: instrumentOf(instrumentRow.get(m.id)),
       fastestTempo: tempoPart(tempoOf.get(m.id)),

@@ -65,14 +65,15 @@ export async function countMembers(db: Db, studioId: string): Promise<number> {
   return Number(row.count)
 }
 
-/** Adds a student to a studio; false when they were already in it. */
+/** Adds a student to a studio (sharing practice from `sharesFrom`); false when already in it. */
 export async function addMember(
   db: Db | Knex.Transaction,
   studioId: string,
   studentId: string,
+  sharesFrom: Date | null = null,
 ): Promise<boolean> {
   const rows = await db('studio_members')
-    .insert({ studio_id: studioId, student_id: studentId })
+    .insert({ studio_id: studioId, student_id: studentId, shares_from: sharesFrom })
     .onConflict(['studio_id', 'student_id'])
     .ignore()
     .returning('student_id')
@@ -87,19 +88,34 @@ export async function removeMember(db: Db, studioId: string, studentId: string):
 }
 
 export async function memberships(db: Db, studentId: string): Promise<Membership[]> {
-  const rows: { studio_id: string; studio_name: string; teacher_name: string; joined_at: Date }[] =
-    await db('studio_members as m')
-      .join('studios as s', 's.id', 'm.studio_id')
-      .join('users as t', 't.id', 's.teacher_id')
-      .where('m.student_id', studentId)
-      .select('m.studio_id', 's.name as studio_name', 't.name as teacher_name', 'm.joined_at')
-      .orderBy('m.joined_at')
+  const rows: {
+    studio_id: string
+    studio_name: string
+    teacher_name: string
+    joined_at: Date
+    shares_from: Date | null
+  }[] = await db('studio_members as m')
+    .join('studios as s', 's.id', 'm.studio_id')
+    .join('users as t', 't.id', 's.teacher_id')
+    .where('m.student_id', studentId)
+    .select('m.studio_id', 's.name as studio_name', 't.name as teacher_name', 'm.joined_at')
+    .select('m.shares_from')
+    .orderBy('m.joined_at')
   return rows.map((r) => ({
     studioId: r.studio_id,
     studioName: r.studio_name,
     teacherName: r.teacher_name,
     joinedAt: r.joined_at.toISOString(),
+    sharesFrom: r.shares_from?.toISOString() ?? null,
   }))
+}
+
+/** How many studios the student is in. */
+export async function studioCountOf(db: Db | Knex.Transaction, studentId: string): Promise<number> {
+  const [row] = (await db('studio_members')
+    .where({ student_id: studentId })
+    .count({ count: '*' })) as [{ count: string }]
+  return Number(row.count)
 }
 
 /** Whether the e-mail already belongs to a member of the studio. */

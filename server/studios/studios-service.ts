@@ -1,6 +1,10 @@
 // Studio use cases: a teacher's studios (create, rename, delete when empty), removing a student,
 // and a student's own memberships (list, leave).
+import type { Knex } from 'knex'
 import type { AppContext } from '../context'
+import { timeZoneOf } from '../users/users-repository'
+import { localDay, zonedTimeToUtc } from '../../src/contract/local-time'
+import type { ShareHistoryChoice } from '../../src/contract/studios'
 import { conflict, forbidden, notFound } from '../lib/errors'
 import { teacherHasStudent } from '../access/access-repository'
 import { assignmentRows, purgeAssignments } from '../assignments/assignments-service'
@@ -15,6 +19,7 @@ import {
   removeMember,
   isMemberEmail,
   renameStudio as rename,
+  studioCountOf,
   type StudioRecord,
 } from './studios-repository'
 
@@ -97,5 +102,31 @@ export async function leaveStudio(ctx: AppContext, studentId: string, studioId: 
 export const studioHasEmail = (ctx: AppContext, studioId: string, email: string) =>
   isMemberEmail(ctx.db, studioId, email)
 
-/** Adds a student to a studio (inside the caller's transaction); false when already a member. */
-export const joinStudio = addMember
+const DAY_MS = 24 * 3600 * 1000
+
+/** The first instant of practice a new studio's teacher sees for a choice (null: everything). */
+export function sharesFromOf(choice: ShareHistoryChoice, timeZone: string, now = new Date()) {
+  if (choice === 'everything') return null
+  if (choice === 'from-now') return now
+  return zonedTimeToUtc(
+    localDay(new Date(now.getTime() - 30 * DAY_MS), timeZone),
+    '00:00',
+    timeZone,
+  )
+}
+
+/**
+ * Adds a student to a studio (inside the caller's transaction), sharing the earlier practice they
+ * chose (default: from now on when already in another studio, else everything); false when already
+ * a member.
+ */
+export async function joinStudio(
+  trx: Knex.Transaction,
+  studioId: string,
+  studentId: string,
+  choice?: ShareHistoryChoice,
+) {
+  const chosen = choice ?? ((await studioCountOf(trx, studentId)) > 0 ? 'from-now' : 'everything')
+  const sharesFrom = sharesFromOf(chosen, await timeZoneOf(trx, studentId))
+  return { joined: await addMember(trx, studioId, studentId, sharesFrom), sharesFrom }
+}

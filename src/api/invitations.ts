@@ -5,11 +5,12 @@ import type {
   InvitationPreview,
   InviteLink,
   InviteLinkCreateInput,
+  ShareHistoryChoice,
 } from '../contract/studios'
 import type { PublicUser } from '../contract/users'
 import { http } from './http'
 
-export type { Invitation, InvitationPreview, InviteLink }
+export type { Invitation, InvitationPreview, InviteLink, ShareHistoryChoice }
 
 export const invite = (studioId: string, email: string, message?: string) =>
   http.post<{ invitation: Invitation; resent: boolean }>(
@@ -44,9 +45,10 @@ export const acceptInvitation = (body: {
   name?: string
   password?: string
   email?: string
+  shareHistory?: ShareHistoryChoice
 }) =>
-  http.post<{ user: PublicUser; studio: { id: string; name: string }; alreadyMember: boolean }>(
-    '/invitations/accept',
-    body,
-    { quiet401: true },
-  )
+  http.post<{
+    user: PublicUser
+    studio: { id: string; name: string; sharesFrom: string | null }
+    alreadyMember: boolean
+  }>('/invitations/accept', body, { quiet401: true })

@@ -3,6 +3,7 @@
 import type { Assignment } from '../contract/assignments'
 import type {
   Plan,
+  PlanAssignee,
   PlanCreateInput,
   PlanItemContext,
   PlanUpdateInput,
@@ -10,7 +11,7 @@ import type {
 } from '../contract/plans'
 import { http } from './http'
 
-export type { Assignment, Plan, PlanItemContext, StarterPlan }
+export type { Assignment, Plan, PlanAssignee, PlanItemContext, StarterPlan }
 export type { AssignedItem, RecordingSummary } from '../contract/assignments'
 export type { TargetProgress } from '../contract/targets'
 

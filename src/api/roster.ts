@@ -1,6 +1,7 @@
 // The roster (/api/studio/roster, its CSV), the students list and a student's page.
 import type { Assignment } from '../contract/assignments'
 import type {
+  RosterInstrument,
   RosterPage,
   RosterRow,
   RosterSortKey,
@@ -9,7 +10,7 @@ import type {
 } from '../contract/roster'
 import { http, withQuery } from './http'
 
-export type { RosterPage, RosterRow, RosterSortKey, RosterStatus, StudioStudent }
+export type { RosterInstrument, RosterPage, RosterRow, RosterSortKey, RosterStatus, StudioStudent }
 
 export interface RosterFilters {
   search?: string

@@ -83,6 +83,18 @@ export interface PlanAssignee {
   studentId: string
   name: string
   assignedAt: string
+  /** How far this student is (in the plans list; absent in a single plan's answer). */
+  progress?: AssigneeProgress
+}
+
+/** One student's way through an assigned plan. */
+export interface AssigneeProgress {
+  targetsMet: number
+  targetsTotal: number
+  /** 0–1: the mean of the items' progress toward their targets (1 when every target is met). */
+  share: number
+  complete: boolean
+  overdue: boolean
 }
 
 /** A plan as its teacher sees it in the editor. */

@@ -11,6 +11,8 @@ export interface StudioStudent {
   joinedAt: string
   lastPracticeAt: string | null
   accuracy: number | null
+  /** The student's active instrument (null before they set one up). */
+  instrument: RosterInstrument | null
 }
 
 export const ROSTER_STATUSES = ['behind', 'on-track', 'inactive'] as const
@@ -77,6 +79,10 @@ export interface RosterInstrument {
   /** "5-string bass (B E A D G)", "6 strings (D A D G B E)" */
   description: string
   leftHanded: boolean
+  /** Open strings, lowest first (MIDI numbers), its frets and how it spells notes. */
+  tuning: number[]
+  frets: number
+  accidentals: 'sharp' | 'flat'
 }
 
 /** The fastest clean tempo of a played take in the last 7 days, any drill. */
@@ -115,6 +121,8 @@ export interface RosterRow {
   instrument: RosterInstrument | null
   /** Null when no take was played clean in the last 7 days. */
   fastestTempo: FastestTempo | null
+  /** The student shares practice with this teacher from this instant on; null: all of it. */
+  sharesFrom: string | null
 }
 
 export interface RosterPage {

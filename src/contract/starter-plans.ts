@@ -12,7 +12,8 @@ interface StarterInput {
   items: { preset: unknown; target: unknown }[]
 }
 
-// Region strings 0–3 fit every 4- to 8-string instrument; frets stay within the first 12.
+// Strings are counted from the lowest, so each item fits every 4- to 8-string instrument; frets stay
+// within the first 12.
 const STARTERS: StarterInput[] = [
   {
     key: 'first-position-names',
@@ -23,7 +24,10 @@ const STARTERS: StarterInput[] = [
       {
         preset: {
           drill: 'recall',
-          settings: { region: { lowString: 0, highString: 3, lowFret: 0, highFret: 5 } },
+          settings: {
+            region: { lowString: 0, highString: 3, lowFret: 0, highFret: 5 },
+            strings: { from: 'lowest', to: '4th-lowest' },
+          },
         },
         target: { kind: 'accuracy', minAccuracy: 0.9, maxMedianMs: 2500, minAttempts: 60 },
       },
@@ -80,7 +84,10 @@ const STARTERS: StarterInput[] = [
       {
         preset: {
           drill: 'recall',
-          settings: { region: { lowString: 0, highString: 3, lowFret: 5, highFret: 9 } },
+          settings: {
+            region: { lowString: 0, highString: 3, lowFret: 5, highFret: 9 },
+            strings: { from: 'lowest', to: '4th-lowest' },
+          },
         },
         target: { kind: 'accuracy', minAccuracy: 0.9, maxMedianMs: 3000, minAttempts: 50 },
       },

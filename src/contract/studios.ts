@@ -15,6 +15,24 @@ export interface Membership {
   studioName: string
   teacherName: string
   joinedAt: string
+  /** The teacher sees practice from this instant on; null: all of it. */
+  sharesFrom: string | null
+}
+
+/**
+ * What earlier practice a new studio's teacher may see: from joining on (the default for a student
+ * already in another studio), the last 30 days, or everything (the default for a first studio).
+ */
+export const SHARE_HISTORY_CHOICES = ['from-now', 'last-30-days', 'everything'] as const
+export type ShareHistoryChoice = (typeof SHARE_HISTORY_CHOICES)[number]
+export const ShareHistorySchema = z.enum(
+  SHARE_HISTORY_CHOICES,
+  'Choose what earlier practice to share.',
+)
+export const SHARE_HISTORY_LABELS: Record<ShareHistoryChoice, string> = {
+  'from-now': 'From now on',
+  'last-30-days': 'The last 30 days',
+  everything: 'Everything',
 }
 
 export const INVITATION_STATUSES = ['pending', 'expired', 'accepted', 'revoked'] as const

@@ -22,9 +22,20 @@ describe('plan editor drill forms', () => {
   it.each(DRILL_IDS)(
     'a new %s item starts from the settings its drill page gives a standard 4-string bass',
     (drill) => {
-      expect(defaultPreset(drill).settings).toEqual(drillDefinition(drill).defaults(FALLBACK_NECK))
+      const settings = { ...defaultPreset(drill).settings } as { strings?: unknown }
+      delete settings.strings // only plans count strings from the ends (tested below)
+      expect(settings).toEqual(drillDefinition(drill).defaults(FALLBACK_NECK))
     },
   )
+
+  it('a new Neck Recall item asks for all strings, counted from the ends of any instrument', () => {
+    expect(defaultPreset('recall').settings).toMatchObject({
+      strings: { from: 'lowest', to: 'highest' },
+    })
+    expect(fieldsFor(defaultPreset('recall')).map((f) => f.path)).toEqual(
+      expect.arrayContaining(['strings.from', 'strings.to']),
+    )
+  })
 
   it('Range Runs starts on frets 2–5 and Octave Scatter on C major, as on their pages', () => {
     expect(defaultPreset('runs').settings).toMatchObject({ lowFret: 2, highFret: 5 })

@@ -4,12 +4,22 @@ import { DrillPresetSchema, type DrillId, type DrillPreset } from '../contract/d
 import { FALLBACK_NECK } from '../drills/engine/useDrillNeck'
 import { drillDefinition, DRILLS } from '../drills/registry'
 import type { FieldSpec } from '../drills/setting-fields'
+import { ALL_STRINGS } from '../contract/string-span'
 
 export type { FieldKind, FieldSpec } from '../drills/setting-fields'
 
-/** A complete preset for a drill: the defaults its page starts from on a standard 4-string bass. */
+/** What a plan item adds to a drill's own defaults: Neck Recall counts its strings from the ends. */
+const PLAN_EXTRAS: Partial<Record<DrillId, object>> = { recall: { strings: ALL_STRINGS } }
+
+/**
+ * A complete preset for a drill: the defaults its page starts from on a standard 4-string bass,
+ * with what only plans have (strings counted from the lowest or highest).
+ */
 export const defaultPreset = (drill: DrillId): DrillPreset =>
-  DrillPresetSchema.parse({ drill, settings: drillDefinition(drill).defaults(FALLBACK_NECK) })
+  DrillPresetSchema.parse({
+    drill,
+    settings: { ...drillDefinition(drill).defaults(FALLBACK_NECK), ...PLAN_EXTRAS[drill] },
+  })
 
 /** Each drill's plan-editor fields. */
 export const DRILL_FIELDS = Object.fromEntries(

@@ -31,6 +31,7 @@ function row(id: string, name: string, fastestTempo: RosterRow['fastestTempo']):
     attention: [],
     instrument: null,
     fastestTempo,
+    sharesFrom: null,
   }
 }
 const ROWS = [

@@ -2,8 +2,13 @@
 import { flushPromises } from '@vue/test-utils'
 import { afterEach, describe, expect, it, vi } from 'vitest'
 import AssignedPlans from '../../src/components/plans/AssignedPlans.vue'
+import PlanCard from '../../src/components/plans/PlanCard.vue'
 import PlanEditorDialog from '../../src/components/plans/PlanEditorDialog.vue'
+import { DrillPresetSchema } from '../../src/contract/drills'
+import type { Plan } from '../../src/contract/plans'
 import { defaultPreset } from '../../src/plans/preset-fields'
+import type { PublicUser } from '../../src/contract/users'
+import { useAuthStore } from '../../src/stores/auth'
 import { mountRoute, mountWithApp } from '../helpers/mount'
 
 afterEach(() => {
@@ -125,7 +130,11 @@ describe('PlanEditorDialog', () => {
       },
     })
     const { wrapper } = mountWithApp(PlanEditorDialog, {
-      props: { modelValue: false, plan: null, students: [{ id: 's1', name: 'Noor' }] },
+      props: {
+        modelValue: false,
+        plan: null,
+        students: [{ id: 's1', name: 'Noor', instrument: null }],
+      },
       attachTo: document.body,
     })
     await wrapper.setProps({ modelValue: true })
@@ -156,6 +165,91 @@ describe('PlanEditorDialog', () => {
   }, 30_000) // a full Vuetify dialog mounts slowly in jsdom when the machine is busy
 })
 
+// 5-string bass B0 E1 A1 D2 G2 and guitar E2 A2 D3 G3 B3 E4 (common practice)
+const FIVE = { name: 'Five', description: '5-string bass (B E A D G)', leftHanded: false }
+const neck = (tuning: number[]) => ({ tuning, frets: 24, accidentals: 'flat' as const })
+const STUDENTS = [
+  { id: 's1', name: 'Tobiah', instrument: { ...FIVE, ...neck([23, 28, 33, 38, 43]) } },
+  {
+    id: 's2',
+    name: 'Wren',
+    instrument: { ...FIVE, description: '6-string guitar', ...neck([40, 45, 50, 55, 59, 64]) },
+  },
+]
+
+describe('instrument-aware plans', () => {
+  it('when a plan for two students is edited, then each item shows the strings on each instrument', async () => {
+    stubApi({})
+    const preset = DrillPresetSchema.parse({
+      drill: 'recall',
+      settings: {
+        ...defaultPreset('recall').settings,
+        strings: { from: 'lowest', to: '2nd-lowest' },
+      },
+    })
+    const plan: Plan = {
+      ...{ id: 'p1', title: 'Low end', notes: '', dueAt: null, createdAt: '', updatedAt: '' },
+      items: [
+        {
+          id: ITEM_RECALL,
+          position: 0,
+          preset,
+          target: { kind: 'sessions', count: 2 },
+        },
+      ],
+      assignees: STUDENTS.map((s) => ({
+        assignmentId: `a-${s.id}`,
+        studentId: s.id,
+        name: s.name,
+        assignedAt: '',
+      })),
+    }
+    const { wrapper } = mountWithApp(PlanEditorDialog, {
+      props: { modelValue: false, plan, students: STUDENTS },
+      attachTo: document.body,
+    })
+    await wrapper.setProps({ modelValue: true })
+    await flushPromises()
+    const line = (id: string) =>
+      document.querySelector(`[data-testid="preview-${id}"]`)?.textContent
+    expect(line('s1')).toContain('Tobiah (5-string bass (B E A D G)): strings B–E, frets 0–5')
+    expect(line('s2')).toContain('Wren (6-string guitar): strings low E–A, frets 0–5')
+    wrapper.unmount()
+  }, 30_000)
+
+  it('when the plans list answers, then each assignee shows finished or how far along', async () => {
+    const progress = (targetsMet: number, share: number, complete = false) => ({
+      ...{ targetsMet, targetsTotal: 2, share, complete, overdue: false },
+    })
+    const plan = {
+      ...{ id: 'p1', title: 'Low end', notes: '', dueAt: null, createdAt: '', updatedAt: '' },
+      items: [],
+      assignees: [
+        {
+          assignmentId: 'a1',
+          studentId: 's1',
+          name: 'Tobiah',
+          assignedAt: '',
+          progress: progress(2, 1, true),
+        },
+        {
+          assignmentId: 'a2',
+          studentId: 's2',
+          name: 'Wren',
+          assignedAt: '',
+          progress: progress(1, 0.7),
+        },
+      ],
+    }
+    const { wrapper } = mountWithApp(PlanCard, { props: { plan } })
+    expect(wrapper.get('[data-testid="assignee-s1"]').text()).toContain('Tobiah: finished')
+    expect(wrapper.get('[data-testid="assignee-s2"]').text()).toContain(
+      'Wren: 1 of 2 targets · 70 %',
+    )
+    expect(wrapper.text()).toContain('2 assigned, 1 finished')
+  })
+})
+
 describe('InvitationAcceptView', () => {
   it('when a new student opens a valid link, then the teacher, the studio and the sign-up fields are shown', async () => {
     stubApi({
@@ -173,5 +267,41 @@ describe('InvitationAcceptView', () => {
     expect(wrapper.text()).toContain('Marta Ilves invites you to Cedar Hollow')
     expect(wrapper.find('input[name="name"]').exists()).toBe(true)
     expect(wrapper.text()).toContain('Create my account and join')
+  })
+
+  it('when a student of another studio joins, then they choose what earlier practice to share', async () => {
+    const sent: unknown[] = []
+    const student = { id: 'u1', email: 'wren@example.test', name: 'Wren', role: 'student' }
+    stubApi({
+      'GET /api/invitations/preview': () => ({
+        invitation: {
+          ...{ studioName: 'Second Studio', teacherName: 'Oskar', email: null },
+          ...{ expiresAt: new Date().toISOString(), accountExists: false },
+        },
+      }),
+      'GET /api/studio/memberships': () => ({
+        memberships: [{ studioId: 's1', studioName: 'First', teacherName: 'Ilse' }],
+      }),
+      'POST /api/invitations/accept': (_url, init) => {
+        sent.push(JSON.parse(String(init.body)))
+        return { user: student, studio: { id: 's2', name: 'Second Studio' }, alreadyMember: false }
+      },
+    })
+    const { wrapper, pinia } = await mountRoute(
+      '/invitations/accept?token=abcdefghijklmnopqrstuvwxyz',
+    )
+    useAuthStore(pinia).user = student as PublicUser // signed in (mountRoute leaves guards out)
+    await flushPromises()
+    const choice = wrapper.get('[data-testid="share-history"]')
+    expect(choice.text()).toContain('What earlier practice may Oskar see?')
+    const checked = () => choice.findAll('input:checked').map((i) => i.attributes('value'))
+    expect(checked()).toEqual(['from-now'])
+    await choice.get('[data-testid="share-history-everything"] input').setValue(true)
+    await wrapper
+      .findAll('button')
+      .find((b) => b.text() === 'Join Second Studio')!
+      .trigger('click')
+    await flushPromises()
+    expect(sent).toEqual([expect.objectContaining({ shareHistory: 'everything' })])
   })
 })

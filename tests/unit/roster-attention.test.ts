@@ -44,6 +44,13 @@ describe('attentionReasons', () => {
     expect(attentionReasons(facts({ lastPracticeAt: null }), NOW)[0]!.text).toBe('No practice yet')
   })
 
+  it('says "since joining" for a student who shared only practice from joining on', () => {
+    const f = facts({ lastPracticeAt: null, sharesFrom: daysAgo(1) })
+    expect(attentionReasons(f, NOW)).toEqual([
+      { kind: 'no-practice', text: 'No practice since joining' },
+    ])
+  })
+
   it('names no practice since the last lesson when lessons are kept', () => {
     const f = facts({ lastPracticeAt: daysAgo(3), lastLessonAt: daysAgo(2) })
     expect(attentionReasons(f, NOW)).toEqual([

@@ -27,6 +27,7 @@ function row(name: string, over: Partial<RosterRow> = {}): RosterRow {
     attention: [],
     instrument: null,
     fastestTempo: null,
+    sharesFrom: null,
     ...over,
   }
 }

@@ -26,6 +26,11 @@ export interface DrillContract<
   describe(settings: z.infer<S>): string
   /** The keys a preset plays in order; a drill with it offers the "every key" target. */
   keysOf?(settings: z.infer<S>): string[]
+  /**
+   * A plan item's settings made concrete for the student's instrument (open strings, lowest
+   * first), e.g. strings counted from the highest; absent: the settings apply as they are.
+   */
+  onInstrument?(settings: z.infer<S>, tuning: readonly number[]): z.infer<S>
   /** Why a plan item with these settings could not be practised (empty: it can). */
   presetIssues?(settings: z.infer<S>): SettingsIssue[]
 }

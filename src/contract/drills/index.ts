@@ -59,6 +59,16 @@ export function describeSettings(preset: DrillPreset): string {
   return [contract.describe(preset.settings), length].filter(Boolean).join(' · ')
 }
 
+/** A plan item's settings as they play on an instrument (see DrillContract.onInstrument). */
+export function settingsOnInstrument<D extends DrillId>(
+  drill: D,
+  settings: DrillSettings[D],
+  tuning: readonly number[],
+): DrillSettings[D] {
+  const contract = drillContract(drill) as DrillContract
+  return (contract.onInstrument?.(settings, tuning) ?? settings) as DrillSettings[D]
+}
+
 /** "Neck Recall — strings 1–4 …" */
 export const describePreset = (preset: DrillPreset) =>
   `${drillContract(preset.drill).name} — ${describeSettings(preset)}`

@@ -2,9 +2,15 @@
 import { z } from 'zod'
 import { defineDrillContract } from './drill-contract'
 import { DetailText, Length, PlayedDetail, Region, Scale, Tonic } from './fields'
+import { describeStringSpan, spanOnInstrument, StringSpanSchema } from '../string-span'
 
 export const RecallSettingsSchema = Length.extend({
   region: Region,
+  /**
+   * A plan's strings counted from the instrument's lowest or highest string; on the student's
+   * instrument they replace region.lowString/highString (recallOnInstrument).
+   */
+  strings: StringSpanSchema.optional(),
   order: z.enum(['sequential', 'random']).default('random'),
   answerMode: z.enum(['typed', 'picked']).default('typed'),
   /** When on, only the spelling used in the key counts (Eb in Bb major, not D#). */
@@ -29,6 +35,18 @@ export const recallContract = defineDrillContract({
   settings: RecallSettingsSchema,
   detail: RecallDetailSchema,
   focus: { keys: false, regions: false },
-  describe: ({ region }) =>
-    `strings ${region.lowString + 1}–${region.highString + 1} (lowest = 1), frets ${region.lowFret}–${region.highFret}`,
+  describe: ({ region, strings }) =>
+    `${strings ? describeStringSpan(strings) : `strings ${region.lowString + 1}–${region.highString + 1} (lowest = 1)`}, frets ${region.lowFret}–${region.highFret}`,
+  onInstrument: (settings, tuning) => recallOnInstrument(settings, tuning.length),
 })
+
+/**
+ * The settings on an instrument with `stringCount` strings: relative strings become the region's
+ * string numbers (see spanOnInstrument).
+ */
+export function recallOnInstrument(settings: RecallSettings, stringCount: number): RecallSettings {
+  const { strings, ...rest } = settings
+  if (!strings) return settings
+  const { lowString, highString } = spanOnInstrument(strings, stringCount)
+  return { ...rest, region: { ...rest.region, lowString, highString } }
+}

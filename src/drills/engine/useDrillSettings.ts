@@ -2,7 +2,12 @@
 // this browser, else defaults made for the player's instrument once it has loaded (remembered
 // settings that do not fit this instrument are replaced by those defaults too).
 import { ref, watch, type Ref } from 'vue'
-import { drillContract, type DrillId, type DrillSettings } from '../../contract/drills'
+import {
+  drillContract,
+  settingsOnInstrument,
+  type DrillId,
+  type DrillSettings,
+} from '../../contract/drills'
 import { copySettings, loadSettings } from './remembered-settings'
 import type { DrillNeck } from './useDrillNeck'
 import type { LoadedPlanItem } from './usePlanItem'
@@ -24,6 +29,9 @@ export function useDrillSettings<D extends DrillId>(
   const { drill, neck } = options
   const remembered = loadSettings(drill, drillContract(drill).settings) as DrillSettings[D] | null
   const settings = ref(remembered ?? options.defaults(neck.value)) as Ref<DrillSettings[D]>
+  // a plan's strings counted from the instrument's ends become this instrument's strings
+  const onNeck = (item: LoadedPlanItem<D>) =>
+    settingsOnInstrument(drill, copySettings(item.settings), neck.value.tuning)
 
   let checked = false // only when the instrument first arrives; later changes are the student's
   watch(
@@ -32,13 +40,14 @@ export function useDrillSettings<D extends DrillId>(
       if (!ready || checked) return
       checked = true
       const fits = options.fits?.(settings.value, neck.value) ?? true
-      if (!options.planItem.value && (!remembered || !fits))
-        settings.value = options.defaults(neck.value)
+      const item = options.planItem.value
+      if (item) settings.value = onNeck(item)
+      else if (!remembered || !fits) settings.value = options.defaults(neck.value)
     },
     { immediate: true },
   )
   watch(options.planItem, (item) => {
-    if (item) settings.value = copySettings(item.settings)
+    if (item) settings.value = onNeck(item)
   })
   return settings
 }

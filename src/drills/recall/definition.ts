@@ -3,6 +3,9 @@ import { mdiBrain } from '@mdi/js'
 import { recallContract, RecallSettingsSchema } from '../../contract/drills'
 import { defineDrill } from '../drill-definition'
 import { FOCUS_FIELD, fretField, LENGTH_FIELDS, switchField } from '../setting-fields'
+import { STRING_REFS, stringRefLabel } from '../../contract/string-span'
+
+const STRING_OPTIONS = STRING_REFS.map((ref) => ({ title: stringRefLabel(ref), value: ref }))
 
 export const recallDrill = defineDrill(recallContract, {
   route: '/practice/recall',
@@ -21,15 +24,9 @@ export const recallDrill = defineDrill(recallContract, {
       },
     }),
   presetFields: [
-    {
-      path: 'region.lowString',
-      label: 'From string (1 = lowest)',
-      kind: 'number',
-      min: 1,
-      max: 10,
-      offset: 1,
-    },
-    { path: 'region.highString', label: 'To string', kind: 'number', min: 1, max: 10, offset: 1 },
+    // strings counted from the instrument's ends, so the item fits every student's instrument
+    { path: 'strings.from', label: 'From the', kind: 'select', options: STRING_OPTIONS },
+    { path: 'strings.to', label: 'To the', kind: 'select', options: STRING_OPTIONS },
     fretField('region.lowFret', 'From fret'),
     fretField('region.highFret', 'To fret'),
     {
