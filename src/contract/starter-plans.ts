@@ -12,6 +12,18 @@ interface StarterInput {
   items: { preset: unknown; target: unknown }[]
 }
 
+/** A Neck Recall item on the four lowest strings of any instrument, between two frets. */
+const recallOnLowestFour = (lowFret: number, highFret: number, target: unknown) => ({
+  preset: {
+    drill: 'recall',
+    settings: {
+      region: { lowString: 0, highString: 3, lowFret, highFret },
+      strings: { from: 'lowest', to: '4th-lowest' },
+    },
+  },
+  target,
+})
+
 // Strings are counted from the lowest, so each item fits every 4- to 8-string instrument; frets stay
 // within the first 12.
 const STARTERS: StarterInput[] = [
@@ -21,16 +33,12 @@ const STARTERS: StarterInput[] = [
     notes:
       'Name every note from the nut to the fifth fret on the four lowest strings, from memory. Short daily sessions beat one long one.',
     items: [
-      {
-        preset: {
-          drill: 'recall',
-          settings: {
-            region: { lowString: 0, highString: 3, lowFret: 0, highFret: 5 },
-            strings: { from: 'lowest', to: '4th-lowest' },
-          },
-        },
-        target: { kind: 'accuracy', minAccuracy: 0.9, maxMedianMs: 2500, minAttempts: 60 },
-      },
+      recallOnLowestFour(0, 5, {
+        kind: 'accuracy',
+        minAccuracy: 0.9,
+        maxMedianMs: 2500,
+        minAttempts: 60,
+      }),
     ],
   },
   {
@@ -81,16 +89,12 @@ const STARTERS: StarterInput[] = [
     notes:
       'A mixed week: the middle of the neck from memory, then E minor pentatonic scattered across octaves.',
     items: [
-      {
-        preset: {
-          drill: 'recall',
-          settings: {
-            region: { lowString: 0, highString: 3, lowFret: 5, highFret: 9 },
-            strings: { from: 'lowest', to: '4th-lowest' },
-          },
-        },
-        target: { kind: 'accuracy', minAccuracy: 0.9, maxMedianMs: 3000, minAttempts: 50 },
-      },
+      recallOnLowestFour(5, 9, {
+        kind: 'accuracy',
+        minAccuracy: 0.9,
+        maxMedianMs: 3000,
+        minAttempts: 50,
+      }),
       {
         preset: { drill: 'scatter', settings: { tonic: 'E', scale: 'minor pentatonic' } },
         target: { kind: 'sessions', count: 4 },
