@@ -19,6 +19,7 @@ import { attemptsRoutes } from './attempts/attempts-routes'
 import { focusRoutes } from './focus/focus-routes'
 import { progressRoutes } from './progress/progress-routes'
 import { mountAssignments } from './assignments/assignments-routes'
+import { recordingRoutes } from './recordings/recordings-routes'
 import { mountDigests } from './digests/digest-routes'
 import { mountInvitations } from './invitations/invitations-routes'
 import { planRoutes } from './plans/plans-routes'
@@ -58,6 +59,7 @@ function apiRouter(ctx: AppContext) {
   api.use('/lessons', lessonRoutes(ctx))
   api.use('/messages', messageRoutes(ctx))
   mountAssignments(api, ctx)
+  api.use('/recordings', recordingRoutes(ctx))
   api.use('/instruments', instrumentsRoutes(ctx))
   api.use('/attempts', attemptsRoutes(ctx))
   api.use('/progress', progressRoutes(ctx))

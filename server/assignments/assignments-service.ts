@@ -15,7 +15,12 @@ import {
   type AssignmentRow,
 } from './assignments-repository'
 import { recordingStorage } from './recording-storage'
-import { recordingsOfAssignments, storageKeysOf, toSummary } from './recordings-repository'
+import {
+  recordingsOfAssignments,
+  referencesOfItems,
+  storageKeysOf,
+  toSummary,
+} from './recordings-repository'
 
 export type { AssignmentRow }
 
@@ -85,4 +90,9 @@ export async function assignmentActivity(ctx: AppContext, assignmentIds: string[
     comments,
     recordings: recordings.map((r) => ({ assignmentId: r.assignmentId, summary: toSummary(r) })),
   }
+}
+
+/** The teachers' reference takes on these plan items (newest first). */
+export async function itemReferences(ctx: AppContext, itemIds: string[]) {
+  return (await referencesOfItems(ctx.db, itemIds)).map(toSummary)
 }

@@ -1,8 +1,7 @@
 // /api/assignments/:id/recordings: upload (multipart "file" + "planItemId", streamed by
 // recording-upload.ts), play with HTTP range requests so the player can seek
 // (…/:recordingId/audio), delete (…/:recordingId).
-import type { Router, Request, Response } from 'express'
-import { pipeline } from 'node:stream'
+import type { Router, Request } from 'express'
 import { requireRole } from '../auth/auth-middleware'
 import type { AppContext } from '../context'
 import { badRequest } from '../lib/errors'
@@ -12,6 +11,7 @@ import {
   RecordingParamsSchema,
   RecordingUploadSchema,
 } from './assignments-schema'
+import { sendAudio } from './recording-audio'
 import { receiveRecording, takeUploadSlot, type StoredUpload } from './recording-upload'
 import { recordingStorage } from './recording-storage'
 import {
@@ -20,35 +20,6 @@ import {
   removeRecording,
   uploadRecording,
 } from './recordings-service'
-
-type Opened = Awaited<ReturnType<typeof openRecording>>
-
-/** 200 with the whole file, or 206 with one byte range; 416 when the range lies outside the file. */
-function sendAudio(req: Request, res: Response, audio: Opened) {
-  res.set({
-    'Accept-Ranges': 'bytes',
-    'Content-Type': audio.mimeType,
-    'Content-Disposition': `inline; filename="${audio.fileName}"`,
-    'Cache-Control': 'private, no-cache',
-  })
-  const ranges = req.range(audio.size, { combine: true })
-  if (ranges === -1) {
-    res.status(416).set('Content-Range', `bytes */${audio.size}`).end()
-    return
-  }
-  const single =
-    Array.isArray(ranges) && ranges.type === 'bytes' && ranges.length === 1 ? ranges[0] : undefined
-  if (single) {
-    res.status(206).set('Content-Range', `bytes ${single.start}-${single.end}/${audio.size}`)
-    res.set('Content-Length', String(single.end - single.start + 1))
-  } else {
-    res.set('Content-Length', String(audio.size))
-  }
-  pipeline(audio.read(single), res, (error) => {
-    if (error && error.code !== 'ERR_STREAM_PREMATURE_CLOSE')
-      req.log?.warn({ err: error }, 'recording stream failed')
-  })
-}
 
 /** Files the streamed take under the item named in the form; a refused take's bytes are deleted. */
 async function fileUpload(

@@ -2,11 +2,15 @@
 import type { Db } from '../lib/db'
 import type { RecordingSummary } from '../../src/contract/assignments'
 
-interface RecordingRow {
+export interface RecordingRow {
   id: string
-  assignment_id: string
-  plan_item_id: string
-  student_id: string
+  assignment_id: string | null
+  plan_item_id: string | null
+  student_id: string | null
+  uploaded_by: string
+  shared_with: string | null
+  kind: 'take' | 'reference'
+  title: string
   storage_key: string
   mime_type: string
   extension: string
@@ -17,17 +21,23 @@ interface RecordingRow {
 }
 
 export interface RecordingRecord extends RecordingSummary {
-  assignmentId: string
-  studentId: string
+  assignmentId: string | null
+  studentId: string | null
+  uploadedBy: string
+  sharedWithId: string | null
   storageKey: string
   extension: string
 }
 
-const toRecord = (r: RecordingRow): RecordingRecord => ({
+export const toRecord = (r: RecordingRow): RecordingRecord => ({
   id: r.id,
   assignmentId: r.assignment_id,
   planItemId: r.plan_item_id,
   studentId: r.student_id,
+  uploadedBy: r.uploaded_by,
+  sharedWithId: r.shared_with,
+  kind: r.kind,
+  title: r.title,
   storageKey: r.storage_key,
   mimeType: r.mime_type,
   extension: r.extension,
@@ -40,6 +50,8 @@ const toRecord = (r: RecordingRow): RecordingRecord => ({
 export const toSummary = ({
   id,
   planItemId,
+  kind,
+  title,
   mimeType,
   sizeBytes,
   originalName,
@@ -48,6 +60,8 @@ export const toSummary = ({
 }: RecordingRecord): RecordingSummary => ({
   id,
   planItemId,
+  kind,
+  title,
   mimeType,
   sizeBytes,
   originalName,
@@ -55,15 +69,19 @@ export const toSummary = ({
   durationMs,
 })
 
-export async function insertRecording(
-  db: Db,
-  input: Omit<RecordingRecord, 'id' | 'createdAt'>,
-): Promise<RecordingRecord> {
+/** A recording to insert: everything but what the database gives it. */
+export type NewRecording = Omit<RecordingRecord, 'id' | 'createdAt'>
+
+export async function insertRecording(db: Db, input: NewRecording): Promise<RecordingRecord> {
   const [row] = await db('recordings')
     .insert({
       assignment_id: input.assignmentId,
       plan_item_id: input.planItemId,
       student_id: input.studentId,
+      uploaded_by: input.uploadedBy,
+      shared_with: input.sharedWithId,
+      kind: input.kind,
+      title: input.title,
       storage_key: input.storageKey,
       mime_type: input.mimeType,
       extension: input.extension,
@@ -87,7 +105,7 @@ export async function findRecording(db: Db, id: string): Promise<RecordingRecord
  */
 export function insertRecordingBelowLimit(
   db: Db,
-  input: Omit<RecordingRecord, 'id' | 'createdAt'>,
+  input: NewRecording & { assignmentId: string; planItemId: string },
   max: number,
 ): Promise<RecordingRecord | 'full' | 'gone'> {
   return db.transaction(async (trx) => {
@@ -110,6 +128,16 @@ async function countItemRecordings(
     .where({ assignment_id: assignmentId, plan_item_id: planItemId })
     .count({ count: '*' })) as [{ count: string }]
   return Number(row.count)
+}
+
+/** The teachers' reference takes on these plan items, newest first. */
+export async function referencesOfItems(db: Db, itemIds: string[]): Promise<RecordingRecord[]> {
+  if (!itemIds.length) return []
+  const rows: RecordingRow[] = await db('recordings')
+    .whereIn('plan_item_id', itemIds)
+    .where({ kind: 'reference' })
+    .orderBy('created_at', 'desc')
+  return rows.map(toRecord)
 }
 
 /** Recordings of several assignments, newest first. */

@@ -1,5 +1,6 @@
 // Recording use cases: a student attaches audio to an item of a plan assigned to them; the student
-// and the plan's teacher may play it; the student may delete it.
+// and the plan's teacher may play it; the student may delete it. Also what every upload shares: the
+// format read from the bytes, the length, and deleting the bytes of a refused take.
 import { fileTypeFromBuffer } from 'file-type'
 import type { AppContext } from '../context'
 import { AppError, badRequest, conflict, forbidden, notFound } from '../lib/errors'
@@ -7,6 +8,7 @@ import type { PublicUser } from '../users/users-schema'
 import { itemInAssignment } from './assignments-repository'
 import { ACCEPTED_AUDIO, MAX_RECORDINGS_PER_ITEM } from './assignments-schema'
 import { participantAssignment } from './assignments-service'
+import { measuredLength } from './recording-length'
 import { recordingStorage, type RecordingStorage } from './recording-storage'
 import type { StoredUpload } from './recording-upload'
 import {
@@ -58,8 +60,45 @@ export async function checkUploader(ctx: AppContext, student: PublicUser, assign
   if (assignment.studentId !== student.id) throw forbidden(NOT_YOURS)
 }
 
-/** The item a take is filed under, and its length as the browser measured it (if recorded there). */
-type RecordingTarget = { assignmentId: string; planItemId: string; durationMs?: number }
+/**
+ * What a stored upload is: its format (from the bytes), size, name and length — the browser's
+ * measured length when it recorded the take, else the length the file itself states.
+ */
+export async function describeUpload(ctx: AppContext, upload: StoredUpload, durationMs?: number) {
+  const storage = recordingStorage(ctx)
+  const format = await audioFormat(storage, upload)
+  const length =
+    durationMs ?? (await measuredLength(storage, { ...upload, mimeType: format.mimeType }))
+  return {
+    ...format,
+    storageKey: upload.storageKey,
+    sizeBytes: upload.size,
+    originalName: cleanName(upload.originalname),
+    durationMs: length,
+  }
+}
+
+/** Runs the filing of an upload; when it throws, the bytes already stored are deleted. */
+export async function fileOrDiscard<T>(
+  ctx: AppContext,
+  upload: StoredUpload,
+  file: () => Promise<T>,
+): Promise<T> {
+  try {
+    return await file()
+  } catch (error) {
+    await recordingStorage(ctx).delete(upload.storageKey)
+    throw error
+  }
+}
+
+/** The item a take is filed under, its title, and its length as the browser measured it. */
+type RecordingTarget = {
+  assignmentId: string
+  planItemId: string
+  durationMs?: number
+  title?: string
+}
 
 async function fileUnderItem(
   ctx: AppContext,
@@ -69,18 +108,13 @@ async function fileUnderItem(
 ) {
   const { assignmentId, planItemId } = target
   if (!(await itemInAssignment(ctx.db, assignmentId, planItemId))) throw notFound('That plan item')
-  const format = await audioFormat(recordingStorage(ctx), upload)
+  const described = await describeUpload(ctx, upload, target.durationMs)
   const stored = await insertRecordingBelowLimit(
     ctx.db,
     {
-      assignmentId,
-      planItemId,
-      studentId: student.id,
-      storageKey: upload.storageKey,
-      sizeBytes: upload.size,
-      originalName: cleanName(upload.originalname),
-      durationMs: target.durationMs ?? null,
-      ...format,
+      ...{ assignmentId, planItemId, studentId: student.id, uploadedBy: student.id },
+      ...{ sharedWithId: null, kind: 'take', title: target.title ?? '' },
+      ...described,
     },
     MAX_RECORDINGS_PER_ITEM,
   )
@@ -94,19 +128,12 @@ async function fileUnderItem(
 }
 
 /** Files a take already streamed into storage under its plan item; refused takes are deleted. */
-export async function uploadRecording(
+export const uploadRecording = (
   ctx: AppContext,
   student: PublicUser,
   target: RecordingTarget,
   upload: StoredUpload,
-) {
-  try {
-    return await fileUnderItem(ctx, student, target, upload)
-  } catch (error) {
-    await recordingStorage(ctx).delete(upload.storageKey)
-    throw error
-  }
-}
+) => fileOrDiscard(ctx, upload, () => fileUnderItem(ctx, student, target, upload))
 
 /** The recording of this assignment, when the user is its student or the teacher of its plan. */
 async function visibleRecording(
@@ -126,12 +153,7 @@ async function visibleRecording(
 }
 
 /** What the audio route needs: type, size and a way to read (part of) the bytes. */
-export async function openRecording(
-  ctx: AppContext,
-  user: PublicUser,
-  at: { assignmentId: string; recordingId: string },
-) {
-  const recording = await visibleRecording(ctx, user, at)
+export async function playable(ctx: AppContext, recording: RecordingRecord) {
   const storage = recordingStorage(ctx)
   const size = await storage.size(recording.storageKey)
   if (size === null) throw notFound('The audio of this recording')
@@ -143,6 +165,20 @@ export async function openRecording(
   }
 }
 
+export async function openRecording(
+  ctx: AppContext,
+  user: PublicUser,
+  at: { assignmentId: string; recordingId: string },
+) {
+  return playable(ctx, await visibleRecording(ctx, user, at))
+}
+
+/** Deletes the recording's row (its pinned comments go with it), then its bytes. */
+export async function discardRecording(ctx: AppContext, recording: RecordingRecord) {
+  await deleteRecording(ctx.db, recording.id)
+  await recordingStorage(ctx).delete(recording.storageKey)
+}
+
 export async function removeRecording(
   ctx: AppContext,
   user: PublicUser,
@@ -151,6 +187,5 @@ export async function removeRecording(
   const recording = await visibleRecording(ctx, user, at)
   if (recording.studentId !== user.id)
     throw forbidden('Only the student who recorded it can delete it.')
-  await deleteRecording(ctx.db, recording.id)
-  await recordingStorage(ctx).delete(recording.storageKey)
+  await discardRecording(ctx, recording)
 }

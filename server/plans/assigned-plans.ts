@@ -5,6 +5,7 @@ import type { PublicUser } from '../users/users-schema'
 import {
   assignmentActivity,
   assignmentRows,
+  itemReferences,
   type AssignmentRow,
 } from '../assignments/assignments-service'
 import { itemAttempts } from './item-attempts-repository'
@@ -18,6 +19,7 @@ interface Loaded {
   attempts: Map<string, ItemAttempt[]>
   comments: Map<string, number>
   recordings: Awaited<ReturnType<typeof assignmentActivity>>['recordings']
+  references: Awaited<ReturnType<typeof itemReferences>>
 }
 
 function toAssignment(row: AssignmentRow, loaded: Loaded, now: Date): Assignment {
@@ -31,6 +33,7 @@ function toAssignment(row: AssignmentRow, loaded: Loaded, now: Date): Assignment
     recordings: loaded.recordings
       .filter((r) => r.assignmentId === row.id && r.summary.planItemId === item.id)
       .map((r) => r.summary),
+    references: loaded.references.filter((r) => r.planItemId === item.id),
   }))
   const targetsMet = items.filter((item) => item.progress.met).length
   const complete = items.length > 0 && targetsMet === items.length
@@ -62,11 +65,13 @@ export async function buildAssignments(
   const items = await itemsOfPlans(ctx.db, planIds)
   const itemIds = [...items.values()].flat().map((item) => item.id)
   const assignmentIds = rows.map((r) => r.id)
-  const [attempts, { comments, recordings }] = await Promise.all([
+  const [attempts, { comments, recordings }, references] = await Promise.all([
     itemAttempts(ctx.db, studentIds, itemIds),
     assignmentActivity(ctx, assignmentIds),
+    itemReferences(ctx, itemIds),
   ])
-  return rows.map((row) => toAssignment(row, { items, attempts, comments, recordings }, now))
+  const loaded = { items, attempts, comments, recordings, references }
+  return rows.map((row) => toAssignment(row, loaded, now))
 }
 
 /** The signed-in student's assigned plans. */

@@ -6,7 +6,12 @@ import type { TargetProgress } from './targets'
 
 export interface RecordingSummary {
   id: string
-  planItemId: string
+  /** The plan item it belongs to; null for a free-standing take or a reference for one student. */
+  planItemId: string | null
+  /** A take the student recorded, or a reference the teacher recorded to play along with. */
+  kind: 'take' | 'reference'
+  /** Given by the student or the teacher; empty until someone names it. */
+  title: string
   mimeType: string
   sizeBytes: number
   originalName: string
@@ -18,6 +23,8 @@ export interface RecordingSummary {
 export interface AssignedItem extends PlanItem {
   progress: TargetProgress
   recordings: RecordingSummary[]
+  /** The teacher's reference takes on this item (every student assigned the plan hears them). */
+  references: RecordingSummary[]
 }
 
 /** One plan assigned to one student, with progress toward each target (student and teacher views). */
