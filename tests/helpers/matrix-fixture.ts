@@ -47,6 +47,9 @@ export interface Fixture {
   messageId: string
   messageToDeleteId: string
   inviteLinkId: string
+  freeTakeId: string
+  freeTakeToDeleteId: string
+  pinnedCommentId: string
   billing: Awaited<ReturnType<typeof billingFixture>>
 }
 
@@ -152,6 +155,23 @@ async function messagesAndLink(people: Awaited<ReturnType<typeof cast>>) {
   }
 }
 
+/** Two free takes of the student shared with the teacher (one to delete), one pinned comment. */
+async function freeTakes(people: Awaited<ReturnType<typeof cast>>) {
+  const { teacher, student } = people
+  const upload = async () =>
+    (
+      await student.agent
+        .post('/api/recordings')
+        .field('shareWith', teacher.user.id)
+        .attach('file', wavFile(800), 'take.wav')
+    ).body.recording.id as string
+  const [freeTakeId, freeTakeToDeleteId] = [await upload(), await upload()]
+  const pinned = await student.agent
+    .post(`/api/recordings/${freeTakeId}/comments`)
+    .send({ atMs: 50, body: 'Mine' })
+  return { freeTakeId, freeTakeToDeleteId, pinnedCommentId: pinned.body.comment.id as string }
+}
+
 /** Builds the whole fixture through the API (and the database where no API exists). */
 export async function buildFixture(api: TestApi) {
   const people = await cast(api)
@@ -200,6 +220,7 @@ export async function buildFixture(api: TestApi) {
     ...fixture,
     ...(await lessonsAndShares(people, fixture)),
     ...(await messagesAndLink(people)),
+    ...(await freeTakes(people)),
   }
 }
 

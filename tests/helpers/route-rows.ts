@@ -5,6 +5,7 @@ import { attemptInput } from './attempt-input'
 import { BASS, freshId, type Fixture } from './matrix-fixture'
 import { LESSON_ROWS, SHARE_ROWS } from './route-rows-lessons'
 import { ACCOUNT_ROWS, INVITE_ROWS, MESSAGE_ROWS } from './route-rows-reach'
+import { RECORDING_ROWS } from './route-rows-recordings'
 import {
   all,
   get,
@@ -205,6 +206,7 @@ export const ROWS: Record<string, Row> = {
   ...MESSAGE_ROWS,
   ...INVITE_ROWS,
   ...BILLING_ROWS,
+  ...RECORDING_ROWS,
   'GET /api/studio/studios': [get(() => '/api/studio/studios'), teachers(200, 200)],
   'POST /api/studio/studios': [
     send(

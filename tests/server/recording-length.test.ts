@@ -1,11 +1,19 @@
 // Issue 16: a take recorded in the browser keeps its recorded length (WebM from MediaRecorder has
-// none in its header), so players can show it; a nonsense length is a 400 and nothing is stored.
+// none in its header), so players can show it; an uploaded file's length is read from the file; a
+// nonsense length is a 400 and nothing is stored.
 import { mkdtempSync, rmSync } from 'node:fs'
 import { tmpdir } from 'node:os'
 import path from 'node:path'
 import { afterAll, beforeAll, describe, expect, it } from 'vitest'
 import { startTestApi, type TestApi } from '../helpers/api'
-import { createPlan, studentIn, teacherWithStudio, wavFile, type Agent } from '../helpers/studio'
+import {
+  createPlan,
+  oggOpusFile,
+  studentIn,
+  teacherWithStudio,
+  wavFile,
+  type Agent,
+} from '../helpers/studio'
 
 let api: TestApi
 let dataDir: string
@@ -43,8 +51,18 @@ describe('recorded length', () => {
     expect(assignment.items[0].recordings[0]).toMatchObject({ durationMs: 4210 })
   })
 
-  it('when an uploaded file comes without one, then the length is null (the file carries its own)', async () => {
+  it('when an uploaded file comes without one, then the length is read from the file (music-metadata)', async () => {
     const res = await upload()
+    expect(res.status).toBe(201)
+    // wavFile(): 800 frames at 8,000 Hz = 100 ms, as its RIFF header says
+    expect(res.body.recording.durationMs).toBe(100)
+  })
+
+  it('when the file does not state its length, then the length is null and the take is kept', async () => {
+    const res = await student.agent
+      .post(`/api/assignments/${assignmentId}/recordings`)
+      .field('planItemId', itemId)
+      .attach('file', oggOpusFile(), 'head-only.ogg')
     expect(res.status).toBe(201)
     expect(res.body.recording.durationMs).toBeNull()
   })
