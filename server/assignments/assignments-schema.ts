@@ -30,9 +30,9 @@ export const MAX_RECORDING_MS = 11 * 60 * 1000
 
 /** The recorded length, sent with takes recorded in the browser. */
 export const TakeLengthSchema = z.coerce
-    .number('Give the length in milliseconds.')
-    .int('Give the length in whole milliseconds.')
-    .min(1, 'A take lasts at least a millisecond.')
+  .number('Give the length in milliseconds.')
+  .int('Give the length in whole milliseconds.')
+  .min(1, 'A take lasts at least a millisecond.')
   .max(MAX_RECORDING_MS, 'Takes recorded here last at most 10 minutes.')
   .optional()
 

@@ -32,4 +32,3 @@ export function sendAudio(req: Request, res: Response, audio: Opened) {
       req.log?.warn({ err: error }, 'recording stream failed')
   })
 }
-

@@ -19,7 +19,10 @@ async function takeRights(ctx: AppContext, user: PublicUser, take: Entry) {
     await participantAssignment(ctx, user, take.assignmentId, REFUSAL)
   } else if (!isStudent) {
     const teachers = take.sharedWithId === user.id && asTeacher(user)
-    if (!teachers || !(await teachersOfStudent(ctx.db, take.studentId!)).some((t) => t.id === user.id))
+    if (
+      !teachers ||
+      !(await teachersOfStudent(ctx.db, take.studentId!)).some((t) => t.id === user.id)
+    )
       throw forbidden(REFUSAL)
   }
   return { canRetitle: true, canDelete: isStudent, canComment: true }

@@ -27,7 +27,9 @@ function entryQuery(db: Db) {
     .select('r.*', 's.name as student_name', 'a.name as author_name', 't.name as shared_name')
     .select('p.title as plan_title')
     .select(
-      db.raw('(select count(*) from recording_comments c where c.recording_id = r.id) as comment_count'),
+      db.raw(
+        '(select count(*) from recording_comments c where c.recording_id = r.id) as comment_count',
+      ),
     )
 }
 
@@ -194,5 +196,4 @@ export async function findComment(db: Db, recordingId: string, commentId: string
     .first('id', 'author_id')) as { id: string; author_id: string } | undefined
 }
 
-export const deleteComment = (db: Db, id: string) =>
-  db('recording_comments').where({ id }).delete()
+export const deleteComment = (db: Db, id: string) => db('recording_comments').where({ id }).delete()

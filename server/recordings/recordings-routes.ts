@@ -8,7 +8,11 @@ import { badRequest } from '../lib/errors'
 import { parse, parseRequest } from '../lib/validate'
 import type { PublicUser } from '../users/users-schema'
 import { sendAudio } from '../assignments/recording-audio'
-import { receiveRecording, takeUploadSlot, type StoredUpload } from '../assignments/recording-upload'
+import {
+  receiveRecording,
+  takeUploadSlot,
+  type StoredUpload,
+} from '../assignments/recording-upload'
 import { recordingStorage } from '../assignments/recording-storage'
 import { RecordingPatchSchema } from '../../src/contract/recordings'
 import {
@@ -30,7 +34,8 @@ async function receive<S extends z.ZodType>(
   const upload = await receiveRecording(ctx, req, res)
   try {
     const fields = parse(schema, req)
-    if (!upload) throw badRequest('Attach an audio file.', { file: ['Choose a recording to upload.'] })
+    if (!upload)
+      throw badRequest('Attach an audio file.', { file: ['Choose a recording to upload.'] })
     return { fields, upload }
   } catch (error) {
     if (upload) await recordingStorage(ctx).delete(upload.storageKey)

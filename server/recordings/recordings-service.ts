@@ -147,8 +147,7 @@ export async function pinComment(ctx: AppContext, user: PublicUser, id: string, 
   const { entry, rights } = await openEntry(ctx, user, id)
   if (!rights.canComment) throw forbidden('Only the teacher comments on a plan’s reference take.')
   const parsed = pinnedCommentSchema(entry.durationMs).safeParse(body ?? {})
-  if (!parsed.success)
-    throw badRequest('Some fields need attention.', fieldErrors(parsed.error))
+  if (!parsed.success) throw badRequest('Some fields need attention.', fieldErrors(parsed.error))
   return insertComment(ctx.db, { recordingId: id, authorId: user.id, ...parsed.data })
 }
 

@@ -4,11 +4,11 @@ import { defineStore } from 'pinia'
 import { ref } from 'vue'
 import * as assignmentsApi from '../api/assignments'
 import * as plansApi from '../api/plans'
+import * as recordingsApi from '../api/recordings'
 import { useLoadState } from './load-state'
 
 type Threads = Record<string, assignmentsApi.PlanComment[]>
-/** A take to upload: the audio, its file name, and its length when recorded in the browser. */
-type Take = [audio: Blob, fileName: string, durationMs?: number]
+type Summary = assignmentsApi.RecordingSummary
 
 /** The thread as loaded, keeping comments posted while it loaded (the load may answer last). */
 function withPostedMeanwhile(
@@ -20,6 +20,41 @@ function withPostedMeanwhile(
     a.createdAt.localeCompare(b.createdAt),
   )
 }
+
+type UpdateItem = (
+  itemId: string,
+  change: (item: plansApi.AssignedItem) => plansApi.AssignedItem,
+) => void
+
+/** Adding, renaming and deleting an item's takes (the student's) and references (the teacher's). */
+const takeActions = (updateItem: UpdateItem) => ({
+  async addRecording(id: string, itemId: string, take: recordingsApi.TakeUpload) {
+    const { recording } = await assignmentsApi.uploadRecording(id, itemId, take)
+    updateItem(itemId, (item) => ({ ...item, recordings: [recording, ...item.recordings] }))
+  },
+  /** The teacher's reference take on an item: every student assigned the plan hears it. */
+  async addReference(itemId: string, take: recordingsApi.TakeUpload) {
+    const { recording } = await recordingsApi.uploadReference(take, { planItemId: itemId })
+    updateItem(itemId, (item) => ({ ...item, references: [recording, ...item.references] }))
+  },
+  async renameRecording(itemId: string, recordingId: string, title: string) {
+    const { recording } = await recordingsApi.patchRecording(recordingId, { title })
+    const retitled = (list: Summary[]) =>
+      list.map((r) => (r.id === recordingId ? { ...r, title: recording.title } : r))
+    updateItem(itemId, (item) => ({
+      ...item,
+      recordings: retitled(item.recordings),
+      references: retitled(item.references),
+    }))
+  },
+  async deleteReference(itemId: string, recordingId: string) {
+    await recordingsApi.deleteRecording(recordingId)
+    updateItem(itemId, (item) => ({
+      ...item,
+      references: item.references.filter((r) => r.id !== recordingId),
+    }))
+  },
+})
 
 export const useAssignmentsStore = defineStore('assignments', () => {
   const { isLoading, error, load } = useLoadState()
@@ -62,10 +97,7 @@ export const useAssignmentsStore = defineStore('assignments', () => {
       await assignmentsApi.deleteComment(id, commentId)
       setThread(id, (thread) => thread.filter((c) => c.id !== commentId))
     },
-    async addRecording(id: string, itemId: string, ...take: Take) {
-      const { recording } = await assignmentsApi.uploadRecording(id, itemId, ...take)
-      updateItem(itemId, (item) => ({ ...item, recordings: [recording, ...item.recordings] }))
-    },
+    ...takeActions(updateItem),
     async deleteRecording(id: string, itemId: string, recordingId: string) {
       await assignmentsApi.deleteRecording(id, recordingId)
       updateItem(itemId, (item) => ({

@@ -30,7 +30,11 @@ it('when the client posts JSON, posts nothing, puts, patches, deletes or uploads
   await http.put('/plans/p1', {})
   await http.patch('/admin/users/u1', { role: 'teacher' })
   await http.delete('/assignments/a1/recordings/r1')
-  await uploadRecording('a1', 'item-1', new Blob(['RIFF']), 'take.wav')
+  await uploadRecording('a1', 'item-1', {
+    audio: new Blob(['RIFF']),
+    fileName: 'take.wav',
+    title: '',
+  })
   expect(seen.map((r) => r.method)).toEqual(['POST', 'POST', 'PUT', 'PATCH', 'DELETE', 'POST'])
   for (const request of seen) expect(request.headers.get('X-Requested-With')).toBe('ambitus')
   // The browser sets the multipart boundary itself: no content-type of ours on the upload.

@@ -2,7 +2,7 @@
 // accepts, the teacher assigns a plan, the student practises it, the teacher sees the target met and
 // comments, the student reads the comment. Screenshots on laptop and phone, light and dark.
 import { randomUUID } from 'node:crypto'
-import type { Browser, Page } from 'playwright-core'
+import type { Browser, Locator, Page } from 'playwright-core'
 import { afterAll, beforeAll, describe, expect, inject, it } from 'vitest'
 import { createDb, type Db } from '../../server/lib/db'
 import { wavFile } from '../helpers/studio'
@@ -31,6 +31,12 @@ async function screenshot(page: Page, name: string) {
   await page.evaluate(() => window.scrollTo(0, 0))
   await fullPageShot(page, name)
 }
+
+/** Where each listed take's audio is served (a take's card carries its id). */
+const takeSources = (takes: Locator) =>
+  takes.evaluateAll((cards) =>
+    cards.map((card) => `/api/recordings/${card.getAttribute('data-testid')!.slice(5)}/audio`),
+  )
 
 const NEW_STUDENT = {
   name: 'Wren Castillo',
@@ -172,17 +178,16 @@ describe('teacher studio', () => {
       .getByTestId(`recording-file-${planItemId}`)
       .setInputFiles({ name: 'take-1.wav', mimeType: 'audio/wav', buffer: wavFile(4000) })
     const recordings = student.getByTestId(`recordings-${planItemId}`)
-    await expect.poll(() => recordings.locator('audio').count()).toBe(1)
+    const takes = recordings.locator('.take-card')
+    await expect.poll(() => takes.count()).toBe(1)
     // A take recorded in the browser (MediaRecorder on Chromium's synthetic microphone): stored as
     // WebM, whose files begin with the EBML magic 1A 45 DF A3 (Matroska/WebM specification).
     await recordings.getByRole('button', { name: /^Record / }).click()
     await expect.poll(() => recordings.getByRole('button', { name: /^Stop / }).count()).toBe(1)
     await student.waitForTimeout(1500)
     await recordings.getByRole('button', { name: /^Stop / }).click()
-    await expect.poll(() => recordings.locator('audio').count()).toBe(2)
-    const sources = await recordings
-      .locator('audio')
-      .evaluateAll((players) => players.map((p) => p.getAttribute('src') ?? ''))
+    await expect.poll(() => takes.count()).toBe(2)
+    const sources = await takeSources(takes)
     const heads = await Promise.all(
       sources.map(async (src) => [
         ...(await (await student.request.get(src)).body()).subarray(0, 4),
@@ -207,10 +212,10 @@ describe('teacher studio', () => {
     const row = teacher.getByTestId(`plan-item-row-${planItemId}`)
     await expect.poll(() => row.textContent()).toContain('Target met')
     expect(await row.textContent()).toContain('4 of 4 answers · 75 % right')
-    const audio = row.locator('audio')
-    expect(await audio.count()).toBe(2) // the uploaded take and the one recorded in the browser
+    const takes = row.locator('.take-card')
+    expect(await takes.count()).toBe(2) // the uploaded take and the one recorded in the browser
     // The teacher's browser can fetch a take: the player's request gets the audio back.
-    const src = (await audio.first().getAttribute('src')) ?? ''
+    const [src = ''] = await takeSources(takes)
     expect((await teacher.request.get(src, { headers: { range: 'bytes=0-3' } })).status()).toBe(206)
     await teacher.getByText('Comments (0)').click()
     await teacher

@@ -6,7 +6,8 @@ import { wavFile } from './studio'
 
 const take = (f: Fixture) => `/api/recordings/${f.freeTakeId}`
 /** Students and teachers (each of their own recordings); admins see none of them. */
-const players = (status: number) => only({ ...students(status), teacher: status, otherTeacher: status })
+const players = (status: number) =>
+  only({ ...students(status), teacher: status, otherTeacher: status })
 
 export const RECORDING_ROWS: Record<string, Row> = {
   'GET /api/recordings': [get(() => '/api/recordings'), players(200)],

@@ -44,11 +44,15 @@ function reference(agent: Agent, fields: Record<string, string>) {
   return req.attach('file', TWO_SECONDS(), 'reference.wav')
 }
 
-const ids = (res: { body: { recordings: { id: string }[] } }) => res.body.recordings.map((r) => r.id)
+const ids = (res: { body: { recordings: { id: string }[] } }) =>
+  res.body.recordings.map((r) => r.id)
 
 describe('free takes', () => {
   it('when a student uploads a titled take shared with their teacher, then both list it with its measured length', async () => {
-    const res = await freeTake(student, { title: '  Walking line in F  ', shareWith: teacher.user.id })
+    const res = await freeTake(student, {
+      title: '  Walking line in F  ',
+      shareWith: teacher.user.id,
+    })
     expect(res.status).toBe(201)
     expect(res.body.recording).toMatchObject({
       title: 'Walking line in F',
@@ -101,7 +105,9 @@ describe('free takes', () => {
 
   it('when a take is retitled, then the teacher may rename it too but only the student deletes it', async () => {
     const { id } = (await freeTake(student, { shareWith: teacher.user.id })).body.recording
-    const renamed = await teacher.agent.patch(`/api/recordings/${id}`).send({ title: 'Bar 9 rushes' })
+    const renamed = await teacher.agent
+      .patch(`/api/recordings/${id}`)
+      .send({ title: 'Bar 9 rushes' })
     expect(renamed.status).toBe(200)
     expect(renamed.body.recording.title).toBe('Bar 9 rushes')
     expect((await teacher.agent.delete(`/api/recordings/${id}`)).status).toBe(403)
@@ -114,7 +120,9 @@ describe('free takes', () => {
   })
 
   it('when a student lists another student’s takes, then 403; a teacher outside the studio too', async () => {
-    expect((await student.agent.get(`/api/recordings?student=${classmate.user.id}`)).status).toBe(403)
+    expect((await student.agent.get(`/api/recordings?student=${classmate.user.id}`)).status).toBe(
+      403,
+    )
     const outsider = await otherTeacher.agent.get(`/api/recordings?student=${student.user.id}`)
     expect(outsider.status).toBe(403)
     expect((await student.agent.get('/api/recordings?student=nope')).status).toBe(400)
@@ -126,7 +134,11 @@ describe('reference takes', () => {
     const itemId = plan.items[0]!.id
     const res = await reference(teacher, { planItemId: itemId, title: 'Slow run, 60 BPM' })
     expect(res.status).toBe(201)
-    expect(res.body.recording).toMatchObject({ kind: 'reference', planItemId: itemId, student: null })
+    expect(res.body.recording).toMatchObject({
+      kind: 'reference',
+      planItemId: itemId,
+      student: null,
+    })
     const [assignment] = (await student.agent.get('/api/plans/assigned')).body.assignments
     expect(assignment.items[0].references).toEqual([
       expect.objectContaining({ id: res.body.recording.id, title: 'Slow run, 60 BPM' }),
@@ -220,9 +232,9 @@ describe('comments pinned to a moment', () => {
   it('when a plan item’s reference is commented, then only its teacher pins; the students read', async () => {
     const ref = await reference(teacher, { planItemId: plan.items[0]!.id })
     const at = `/api/recordings/${ref.body.recording.id}/comments`
-    expect((await teacher.agent.post(at).send({ atMs: 100, body: 'Hear the ghost note' })).status).toBe(
-      201,
-    )
+    expect(
+      (await teacher.agent.post(at).send({ atMs: 100, body: 'Hear the ghost note' })).status,
+    ).toBe(201)
     expect((await student.agent.post(at).send({ atMs: 100, body: 'Me too' })).status).toBe(403)
     const read = await student.agent.get(at)
     expect(read.body.comments).toHaveLength(1)
