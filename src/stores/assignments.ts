@@ -26,16 +26,21 @@ type UpdateItem = (
   change: (item: plansApi.AssignedItem) => plansApi.AssignedItem,
 ) => void
 
-/** Adding, renaming and deleting an item's takes (the student's) and references (the teacher's). */
+/**
+ * Adding, renaming and deleting an item's takes (the student's) and references (the teacher's); each
+ * answers what changed, for lists kept elsewhere (the teacher's student page).
+ */
 const takeActions = (updateItem: UpdateItem) => ({
   async addRecording(id: string, itemId: string, take: recordingsApi.TakeUpload) {
     const { recording } = await assignmentsApi.uploadRecording(id, itemId, take)
     updateItem(itemId, (item) => ({ ...item, recordings: [recording, ...item.recordings] }))
+    return recording
   },
   /** The teacher's reference take on an item: every student assigned the plan hears it. */
   async addReference(itemId: string, take: recordingsApi.TakeUpload) {
     const { recording } = await recordingsApi.uploadReference(take, { planItemId: itemId })
     updateItem(itemId, (item) => ({ ...item, references: [recording, ...item.references] }))
+    return recording
   },
   async renameRecording(itemId: string, recordingId: string, title: string) {
     const { recording } = await recordingsApi.patchRecording(recordingId, { title })
@@ -46,6 +51,7 @@ const takeActions = (updateItem: UpdateItem) => ({
       recordings: retitled(item.recordings),
       references: retitled(item.references),
     }))
+    return recording
   },
   async deleteReference(itemId: string, recordingId: string) {
     await recordingsApi.deleteRecording(recordingId)
