@@ -178,7 +178,7 @@ describe('the teacher’s reference takes', () => {
       .toContain('Your reference')
     await teacher.goto(`/studio/students/${studentId}`)
     const item = teacher.getByTestId(`recordings-${planItemId}`)
-    await item.getByLabel('Title of the reference take of Neck Recall').fill('Slow run, 60 BPM')
+    await item.getByLabel('Title of the reference take').fill('Slow run, 60 BPM')
     await item.getByTestId(`recording-file-${planItemId}`).setInputFiles({
       name: 'slow-run.wav',
       mimeType: 'audio/wav',
