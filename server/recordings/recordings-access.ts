@@ -6,7 +6,7 @@ import { forbidden, notFound } from '../lib/errors'
 import type { PublicUser } from '../users/users-schema'
 import { participantAssignment } from '../assignments/assignments-service'
 import type { RecordingRights } from '../../src/contract/recordings'
-import { findEntry, studentHasItem, teachersOfStudent } from './recordings-repository'
+import { findEntry, isTeacherOf, studentHasItem } from './recordings-repository'
 
 type Entry = NonNullable<Awaited<ReturnType<typeof findEntry>>>
 
@@ -19,10 +19,7 @@ async function takeRights(ctx: AppContext, user: PublicUser, take: Entry) {
     await participantAssignment(ctx, user, take.assignmentId, REFUSAL)
   } else if (!isStudent) {
     const teachers = take.sharedWithId === user.id && asTeacher(user)
-    if (
-      !teachers ||
-      !(await teachersOfStudent(ctx.db, take.studentId!)).some((t) => t.id === user.id)
-    )
+    if (!teachers || !(await isTeacherOf(ctx.db, user.id, take.studentId!)))
       throw forbidden(REFUSAL)
   }
   return { canRetitle: true, canDelete: isStudent, canComment: true }

@@ -103,6 +103,11 @@ export async function teachersOfStudent(db: Db, studentId: string) {
   return rows
 }
 
+/** Whether the teacher (still a teacher's account) has the student in one of their studios. */
+export async function isTeacherOf(db: Db, teacherId: string, studentId: string) {
+  return (await teachersOfStudent(db, studentId)).some((t) => t.id === teacherId)
+}
+
 /** The plan item, when it belongs to a plan of this teacher. */
 export async function teachersItem(db: Db, teacherId: string, itemId: string) {
   const row = await db('plan_items as i')

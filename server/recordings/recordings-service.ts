@@ -20,6 +20,7 @@ import {
   deleteComment,
   findComment,
   insertComment,
+  isTeacherOf,
   studentEntries,
   teacherEntries,
   teachersItem,
@@ -37,7 +38,7 @@ export async function listRecordings(ctx: AppContext, user: PublicUser, studentI
     if (studentId && studentId !== user.id) throw forbidden('You can only list your own takes.')
     return (await studentEntries(ctx.db, user.id)).map(toPublicEntry)
   }
-  if (studentId && !(await teachersOfStudent(ctx.db, studentId)).some((t) => t.id === user.id))
+  if (studentId && !(await isTeacherOf(ctx.db, user.id, studentId)))
     throw forbidden('You can only see the takes of students in your own studios.')
   return (await teacherEntries(ctx.db, user.id, studentId)).map(toPublicEntry)
 }
@@ -47,8 +48,7 @@ export const teachersToShareWith = (ctx: AppContext, student: PublicUser) =>
 
 async function checkShareTarget(ctx: AppContext, studentId: string, teacherId?: string | null) {
   if (!teacherId) return
-  if (!(await teachersOfStudent(ctx.db, studentId)).some((t) => t.id === teacherId))
-    throw forbidden(NOT_YOUR_TEACHER)
+  if (!(await isTeacherOf(ctx.db, teacherId, studentId))) throw forbidden(NOT_YOUR_TEACHER)
 }
 
 async function belowLimit(ctx: AppContext, user: PublicUser, kind: 'take' | 'reference') {
@@ -81,10 +81,7 @@ export const uploadTake = (
 async function checkReferenceTarget(ctx: AppContext, teacher: PublicUser, fields: ReferenceFields) {
   if (fields.planItemId && !(await teachersItem(ctx.db, teacher.id, fields.planItemId)))
     throw forbidden('Add reference takes only to items of your own plans.')
-  if (
-    fields.studentId &&
-    !(await teachersOfStudent(ctx.db, fields.studentId)).some((t) => t.id === teacher.id)
-  )
+  if (fields.studentId && !(await isTeacherOf(ctx.db, teacher.id, fields.studentId)))
     throw forbidden('Add reference takes only for students of your own studios.')
 }
 
