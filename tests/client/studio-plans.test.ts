@@ -54,6 +54,7 @@ const ASSIGNMENT = {
       position: 0,
       preset: defaultPreset('recall'),
       recordings: [],
+      references: [],
       target: { kind: 'accuracy', minAccuracy: 0.9, maxMedianMs: 2000, minAttempts: 4 },
       progress: {
         kind: 'accuracy',
@@ -70,6 +71,7 @@ const ASSIGNMENT = {
       position: 1,
       preset: defaultPreset('cycle'),
       recordings: [],
+      references: [],
       target: { kind: 'all-keys' },
       progress: {
         kind: 'all-keys',
