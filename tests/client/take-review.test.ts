@@ -154,6 +154,21 @@ describe('TakeReview', () => {
     )
   })
 
+  it('when the waveform has the focus, then arrow keys step the play head a second, Home and End jump', async () => {
+    const { wrapper } = await mountReview({})
+    const slider = wrapper.find('[role="slider"]')
+    expect(slider.attributes('aria-valuemax')).toBe('2')
+    await slider.trigger('keydown', { key: 'ArrowRight' })
+    expect(seekedTo.at(-1)).toBe(1)
+    expect(slider.attributes('aria-valuetext')).toBe('0:01.0')
+    await slider.trigger('keydown', { key: 'End' })
+    expect(seekedTo.at(-1)).toBe(2)
+    await slider.trigger('keydown', { key: 'ArrowRight' }) // stays at the end
+    expect(seekedTo.at(-1)).toBe(2)
+    await slider.trigger('keydown', { key: 'Home' })
+    expect(seekedTo.at(-1)).toBe(0)
+  })
+
   it('when a comment is pinned at the play head, then it is sent with that moment and joins the list in order', async () => {
     const created = {
       ...COMMENTS[0]!,

@@ -2,6 +2,7 @@
 // hers: a titled take shared with the teacher, its waveform, seeking by click, comments pinned to
 // moments, a take recorded in the browser that knows its length and seeks, the teacher's reference
 // takes for the student and on a plan item.
+import { AxeBuilder } from '@axe-core/playwright'
 import type { Browser, Locator, Page } from 'playwright-core'
 import { afterAll, beforeAll, describe, expect, inject, it } from 'vitest'
 import { createDb, type Db } from '../../server/lib/db'
@@ -78,6 +79,14 @@ async function openTake(card: Locator) {
 async function clickWaveform(card: Locator, share: number) {
   const box = (await card.locator('.wave').boundingBox())!
   await card.page().mouse.click(box.x + box.width * share, box.y + box.height / 2)
+}
+
+/** axe-core's serious and critical findings on the page as it is now. */
+async function seriousFindings(page: Page) {
+  const { violations } = await new AxeBuilder({ page }).analyze()
+  return violations
+    .filter((v) => v.impact === 'serious' || v.impact === 'critical')
+    .flatMap((v) => v.nodes.map((n) => `${v.id} at ${n.target.join(' ')}`))
 }
 
 const audioOf = (card: Locator) =>
@@ -157,6 +166,7 @@ describe('a student’s take, reviewed by the teacher', () => {
     await take.getByTestId('take-title-field').locator('input').fill('Walking line in F, bar 3')
     await take.getByRole('button', { name: 'Save the title' }).click()
     await expect.poll(() => takeCard(teacher, 'Walking line in F, bar 3').count()).toBe(1)
+    expect(await seriousFindings(teacher)).toEqual([])
     await screenshot(teacher, 'recordings-teacher-review-laptop')
   })
 })
@@ -195,6 +205,7 @@ describe('the teacher’s reference takes', () => {
     await expect.poll(() => onItem.textContent()).toContain('Reference from Iris Vale')
     expect(await onItem.getByRole('button', { name: /^Delete / }).count()).toBe(0)
     await openTake(onItem)
+    expect(await seriousFindings(student)).toEqual([])
     await screenshot(student, 'recordings-student-plan-reference-phone')
     await student.goto('/recordings')
     const reference = takeCard(student, 'How it should swing')
@@ -206,6 +217,7 @@ describe('the teacher’s reference takes', () => {
       .toContain('Mute it with the plucking hand')
     const width = await student.evaluate(() => document.documentElement.scrollWidth)
     expect(width).toBeLessThanOrEqual(PHONE.width)
+    expect(await seriousFindings(student)).toEqual([])
     await screenshot(student, 'recordings-student-phone')
   })
 })
