@@ -187,6 +187,10 @@ describe('the teacher’s reference takes', () => {
       .poll(() => takeCard(teacher, 'How it should swing').textContent())
       .toContain('Your reference')
     await teacher.goto(`/studio/students/${studentId}`)
+    // The student's page lists what they shared and the references made for them.
+    const shared = teacher.getByTestId('student-recordings')
+    await expect.poll(() => shared.textContent()).toContain('Walking line in F, bar 3')
+    expect(await shared.textContent()).toContain('How it should swing')
     const item = teacher.getByTestId(`recordings-${planItemId}`)
     await item.getByLabel('Title of the reference take').fill('Slow run, 60 BPM')
     await item.getByTestId(`recording-file-${planItemId}`).setInputFiles({
