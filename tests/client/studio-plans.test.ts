@@ -103,6 +103,48 @@ describe('AssignedPlans', () => {
     expect(wrapper.text()).toContain('From Marta Ilves · 1 of 2 targets met')
   })
 
+  it('when an item counts strings from the highest, then the student reads them on their own instrument', async () => {
+    const recall = defaultPreset('recall')
+    const fromTop = {
+      ...ASSIGNMENT,
+      items: [
+        {
+          ...ASSIGNMENT.items[0]!,
+          preset: {
+            ...recall,
+            settings: { ...recall.settings, strings: { from: 'highest', to: '2nd-highest' } },
+          },
+        },
+      ],
+    }
+    const fiveString = {
+      id: 'i5',
+      name: 'Five-string',
+      presetId: 'bass-5',
+      tuning: [23, 28, 33, 38, 43], // B0 E1 A1 D2 G2 (scientific pitch notation)
+      frets: 24,
+      scaleLengthMm: 889,
+      handedness: 'right',
+      accidentals: 'flat',
+      referenceHz: 440,
+      soundOn: true,
+      volume: 0.6,
+      isActive: true,
+      createdAt: new Date().toISOString(),
+    }
+    stubApi({
+      'GET /api/plans/assigned': () => ({ assignments: [fromTop] }),
+      'GET /api/instruments': () => ({ instruments: [fiveString] }),
+      'GET /api/instruments/presets': () => ({ presets: [] }),
+    })
+    const { wrapper } = mountWithApp(AssignedPlans)
+    await flushPromises()
+    // the two highest strings of B E A D G are D and G (common practice: string 1 = the highest)
+    expect(wrapper.get('[data-testid="on-my-instrument"]').text()).toMatch(
+      /^On your Five-string: strings D–G, frets \d+–\d+$/,
+    )
+  })
+
   it('when there is no plan, then the student is told where plans will appear', async () => {
     stubApi({ 'GET /api/plans/assigned': () => ({ assignments: [] }) })
     const { wrapper } = mountWithApp(AssignedPlans)
