@@ -53,6 +53,19 @@ async function waitForTakeEnd(page: Page, pitches: number[]) {
     .toBe(ending.join(' '))
 }
 
+/**
+ * The last take's verdicts, extras left out, once every played note has one. A starved audio thread
+ * on a loaded machine may hear one note twice (an "extra" beside it): extras are allowed, a few.
+ */
+async function gradedTake(page: Page, length: number) {
+  const notes = page.getByTestId('take-notes').locator('li')
+  const kinds = () => notes.evaluateAll((items) => items.map((li) => li.dataset.kind ?? ''))
+  const graded = async () => (await kinds()).filter((kind) => kind !== 'extra')
+  await expect.poll(async () => (await graded()).length, { timeout: 30_000 }).toBe(length)
+  expect((await kinds()).length - length).toBeLessThanOrEqual(Math.floor(length / 4))
+  return graded()
+}
+
 async function playedAttempts(email: string, drill: string, atLeast: number) {
   const read = () =>
     db('attempts')
@@ -93,10 +106,7 @@ describe('Range Runs played on the instrument', () => {
     const { page, context, email } = await playRun(browser, LAPTOP, 'laptop')
     await waitForTakeEnd(page, PASS)
     await page.getByTestId('start-session').click()
-    const notes = page.getByTestId('take-notes').locator('li')
-    await expect.poll(() => notes.count(), { timeout: 30_000 }).toBe(PASS.length)
-    const kinds = await notes.evaluateAll((items) => items.map((li) => li.dataset.kind))
-    expect(kinds).toEqual(PASS.map(() => 'right'))
+    expect(await gradedTake(page, PASS.length)).toEqual(PASS.map(() => 'right'))
     await screenshot(page, 'drills-play-runs-take-laptop')
     const all = await playedAttempts(email, 'runs', PASS.length)
     const firstAt = new Date(all[0]!.created_at).getTime()
@@ -112,9 +122,7 @@ describe('Range Runs played on the instrument', () => {
     const { page, context } = await playRun(browser, PHONE, 'phone')
     await waitForTakeEnd(page, PASS)
     await page.getByTestId('start-session').click()
-    await expect
-      .poll(() => page.getByTestId('take-notes').locator('li').count(), { timeout: 30_000 })
-      .toBe(PASS.length)
+    expect(await gradedTake(page, PASS.length)).toEqual(PASS.map(() => 'right'))
     const width = await page.evaluate(() => document.documentElement.scrollWidth)
     expect(width).toBeLessThanOrEqual(PHONE.width)
     await screenshot(page, 'drills-play-runs-take-phone')
@@ -133,10 +141,9 @@ describe('Range Runs played on the instrument', () => {
       const { page, email } = await playRun(wrongBrowser, LAPTOP, 'laptop-wrong')
       await waitForTakeEnd(page, wrong)
       await page.getByTestId('start-session').click()
-      const notes = page.getByTestId('take-notes').locator('li')
-      await expect.poll(() => notes.count(), { timeout: 30_000 }).toBe(PASS.length)
-      const kinds = await notes.evaluateAll((items) => items.map((li) => li.dataset.kind))
-      expect(kinds).toEqual(PASS.map((_, k) => (k === WRONG_AT ? 'wrong' : 'right')))
+      expect(await gradedTake(page, PASS.length)).toEqual(
+        PASS.map((_, k) => (k === WRONG_AT ? 'wrong' : 'right')),
+      )
       await screenshot(page, 'drills-play-runs-wrong-laptop')
       // the first take's answers (stored within a second; the looped file may start a next take)
       const stored = await playedAttempts(email, 'runs', PASS.length)
