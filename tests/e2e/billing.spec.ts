@@ -31,9 +31,25 @@ afterAll(async () => {
   await db?.destroy()
 })
 
+/**
+ * Chooses an option of a select and waits until the field shows it and its menu has closed; on a
+ * loaded machine a click can land while the menu is still opening, so it is tried again.
+ */
 async function pick(page: Page, testId: string, option: string) {
-  await page.getByTestId(testId).click()
-  await page.getByRole('option', { name: option }).click()
+  const field = page.getByTestId(testId)
+  const choice = page.getByRole('option', { name: option })
+  await expect
+    .poll(
+      async () => {
+        if (!(await choice.isVisible())) await field.click()
+        await choice.click({ timeout: 5_000 }).catch(() => undefined)
+        return field.textContent()
+      },
+      { timeout: 60_000 },
+    )
+    .toContain(option)
+  if (await choice.isVisible()) await page.keyboard.press('Escape')
+  await choice.waitFor({ state: 'hidden' })
 }
 
 const invoiceRow = (page: Page) =>
