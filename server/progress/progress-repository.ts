@@ -19,6 +19,32 @@ export interface ItemRow {
   recentMs: number[]
 }
 
+/** A per-place row as PostgreSQL returns it (the recent times may come back as numeric text). */
+export interface ItemDbRow {
+  string: number
+  fret: number
+  pitch: number
+  attempts: number
+  correct: number
+  shown: number
+  last_at: Date
+  recent_correct: boolean[]
+  recent_ms: (number | string)[]
+}
+
+/** The per-place figures of one row, for the progress service. */
+export const toItemRow = (r: ItemDbRow): ItemRow => ({
+  string: r.string,
+  fret: r.fret,
+  pitch: r.pitch,
+  attempts: r.attempts,
+  correct: r.correct,
+  shown: r.shown,
+  lastAt: r.last_at,
+  recentCorrect: r.recent_correct,
+  recentMs: r.recent_ms.map(Number),
+})
+
 export interface DayRow {
   drill: string
   day: string
@@ -64,17 +90,7 @@ export async function itemRows(
       'recent_correct',
       'recent_ms',
     )
-  return rows.map((r) => ({
-    string: r.string,
-    fret: r.fret,
-    pitch: r.pitch,
-    attempts: r.attempts,
-    correct: r.correct,
-    shown: r.shown,
-    lastAt: r.last_at,
-    recentCorrect: r.recent_correct,
-    recentMs: r.recent_ms.map(Number),
-  }))
+  return (rows as ItemDbRow[]).map(toItemRow)
 }
 
 const inRange = (range: DayRange) => (q: ReturnType<Db>) => {
@@ -196,6 +212,26 @@ export interface ChordToneRow {
   recentMs: number[]
 }
 
+/** A Chord Tones row as PostgreSQL returns it. */
+export interface ChordDbRow {
+  chord_type: string
+  degree: string
+  attempts: number
+  correct: number
+  last_at: Date
+  recent_ms: (number | string)[]
+}
+
+/** The figures of one chord tone, for the progress service. */
+export const toChordToneRow = (r: ChordDbRow): ChordToneRow => ({
+  chordType: r.chord_type,
+  degree: r.degree,
+  attempts: r.attempts,
+  correct: r.correct,
+  lastAt: r.last_at,
+  recentMs: r.recent_ms.map(Number),
+})
+
 /** Chord Tones rollup rows of a player (one instrument, or every instrument when none is given). */
 export async function chordToneRows(
   db: Db,
@@ -207,14 +243,7 @@ export async function chordToneRows(
   const rows = await q
     .orderBy(['chord_type', 'degree'])
     .select('chord_type', 'degree', 'attempts', 'correct', 'last_at', 'recent_ms')
-  return rows.map((r) => ({
-    chordType: r.chord_type,
-    degree: r.degree,
-    attempts: r.attempts,
-    correct: r.correct,
-    lastAt: r.last_at,
-    recentMs: r.recent_ms.map(Number),
-  }))
+  return (rows as ChordDbRow[]).map(toChordToneRow)
 }
 
 export interface TempoRow {

@@ -3,7 +3,15 @@
 // the all-time rollups cannot be cut at an instant. Same shapes and rules as the rollups
 // (db/sql/progress_rollup.sql, progress_chords_rollup.sql): 50 answers per place are recent.
 import type { Db } from '../lib/db'
-import { ALL_INSTRUMENTS, type ChordToneRow, type ItemRow } from './progress-repository'
+import {
+  ALL_INSTRUMENTS,
+  toChordToneRow,
+  toItemRow,
+  type ChordDbRow,
+  type ChordToneRow,
+  type ItemDbRow,
+  type ItemRow,
+} from './progress-repository'
 
 /**
  * SQL for progress_items-shaped rows (user_id, instrument_key, string, fret, pitch, attempts,
@@ -30,27 +38,6 @@ export const ITEMS_SINCE_SQL = `
     group by 1, 2, 3, 4, 5
   ) as g`
 
-interface ItemSinceRow {
-  string: number
-  fret: number
-  pitch: number
-  attempts: number
-  correct: number
-  shown: number
-  last_at: Date
-  recent_correct: boolean[]
-  recent_ms: (number | string)[]
-}
-
-interface ChordSinceRow {
-  chord_type: string
-  degree: string
-  attempts: number
-  correct: number
-  last_at: Date
-  recent_ms: (number | string)[]
-}
-
 /** Per-place rows of one instrument (ALL_INSTRUMENTS: not allowed here) and drill, from `since` on. */
 export async function itemRowsSince(
   db: Db,
@@ -65,17 +52,7 @@ export async function itemRowsSince(
      select * from (${ITEMS_SINCE_SQL}) as i where i.instrument_key = ?`,
     [userId, since, drill, drill, instrumentKey],
   )
-  return (rows as ItemSinceRow[]).map((r) => ({
-    string: r.string,
-    fret: r.fret,
-    pitch: r.pitch,
-    attempts: r.attempts,
-    correct: r.correct,
-    shown: r.shown,
-    lastAt: r.last_at,
-    recentCorrect: r.recent_correct,
-    recentMs: r.recent_ms.map(Number),
-  }))
+  return (rows as ItemDbRow[]).map(toItemRow)
 }
 
 /** Chord Tones rows (as progress_chords) of a player's answers from `since` on. */
@@ -98,12 +75,5 @@ export async function chordToneRowsSince(
      group by 1, 2 order by 1, 2`,
     [userId, since, instrumentId ?? null, instrumentId ?? null],
   )
-  return (rows as ChordSinceRow[]).map((r) => ({
-    chordType: r.chord_type,
-    degree: r.degree,
-    attempts: r.attempts,
-    correct: r.correct,
-    lastAt: r.last_at,
-    recentMs: r.recent_ms.map(Number),
-  }))
+  return (rows as ChordDbRow[]).map(toChordToneRow)
 }
