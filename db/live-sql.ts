@@ -35,6 +35,7 @@ export const LIVE_SQL: readonly LiveObject[] = [
     trigger: { name: 'attempts_enqueue_rollup', catchUp: QUEUE_STORED_ATTEMPTS },
   },
   { file: 'progress_chords_rollup.sql', functions: ['progress_chords_rollup'] },
+  { file: 'store_attempts.sql', functions: ['store_attempts'] },
 ]
 
 export const liveSqlText = (file: string) => readFileSync(path.join(SQL_DIR, file), 'utf8')

@@ -82,27 +82,17 @@ export async function assignedPlanItemIds(db: Db, userId: string, ids: string[])
   return new Set(rows.map((r) => r.id))
 }
 
-const INSERTED_COLUMNS = Object.keys(attemptRow('', {} as AttemptInput)).join(', ')
-
 /**
- * Inserts the attempts whose ids are new; ids already stored (by anyone) are left untouched: the
- * id index spans the monthly partitions, the key (player, id, time) catches a resend in flight. The batch travels as one JSON parameter (not one binding per field), which
- * keeps a 200-answer batch a single small statement for PostgreSQL to plan and the API to build.
+ * Inserts the attempts whose ids are new, in one statement (db/sql/store_attempts.sql): one batch of
+ * a player at a time, ids already stored (by anyone) left untouched. The batch travels as one JSON
+ * parameter (not one binding per field), which keeps a 200-answer batch a single small statement.
  */
 export async function insertNewAttempts(db: Db, userId: string, attempts: AttemptInput[]) {
-  return db.transaction(async (trx) => {
-    // One batch of a player at a time: a resend in flight waits, then sees the first one's rows
-    // (the id check cannot be a unique index across monthly partitions).
-    await trx.raw('select pg_advisory_xact_lock(?::int, hashtext(?))', [0x41747470, userId])
-    const { rows } = await trx.raw<{ rows: AttemptRow[] }>(
-      `insert into attempts (${INSERTED_COLUMNS})
-       select ${INSERTED_COLUMNS} from json_populate_recordset(null::attempts, ?::json) r
-       where not exists (select 1 from attempts a where a.id = r.id)
-       on conflict (user_id, id, created_at) do nothing returning *`,
-      [JSON.stringify(attempts.map((a) => attemptRow(userId, a)))],
-    )
-    return rows
-  })
+  const { rows } = await db.raw<{ rows: AttemptRow[] }>(
+    'select * from store_attempts(?::uuid, ?::json)',
+    [userId, JSON.stringify(attempts.map((a) => attemptRow(userId, a)))],
+  )
+  return rows
 }
 
 /** Creates the monthly partitions of attempts up to `monthsAhead` months on; resolves to how many. */
