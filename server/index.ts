@@ -15,7 +15,7 @@ const mailer = createMailer(config)
 const statistics = createStatistics(db, logger)
 const app = createApp({ config, db, logger, mailer, statistics })
 const scheduler = startScheduler({ config, db, logger, mailer, statistics })
-statistics.start()
+statistics.start({ databaseUrl: config.databaseUrl })
 
 const server = app.listen(config.port, config.host, () => {
   logger.info(`Ambitus API listening on http://${config.host}:${config.port}`)

@@ -19,6 +19,7 @@ import { localSecret } from '../lib/paths.mjs'
 import { freePort, startService, stopService } from '../lib/proc.mjs'
 import { BENCH_DATABASE, freshBenchDatabase } from './bench-app'
 import { BASS, createBass, createPlayer } from './bench-seed'
+import { postgresCpuMs, processCpuMs } from './cpu-time'
 
 const SECONDS = Number(process.env.BENCH_SECONDS ?? 15)
 const CONNECTIONS = Number(process.env.BENCH_CONNECTIONS ?? 10)
@@ -126,13 +127,16 @@ async function rawRun(url: string, players: Player[], table = 'attempts') {
     }
   }
   const started = performance.now()
+  const cpu = cpuSince()
   await Promise.all(Array.from({ length: CONNECTIONS }, worker))
   const seconds = (performance.now() - started) / 1000
+  const cost = cpu(latencies.length) // before the pool closes: a backend's CPU goes with it
   await db.destroy()
   latencies.sort((a, b) => a - b)
   return {
     rps: latencies.length / seconds,
     p99: latencies[Math.floor(latencies.length * 0.99)] ?? NaN,
+    postgresCpuMs: cost.postgres,
   }
 }
 
@@ -159,6 +163,16 @@ async function sampledQueue<T>(url: string, work: Promise<T>) {
   const drainMs = performance.now() - after
   await db.destroy()
   return { result, maxDepth, maxLagMs, drainMs }
+}
+
+/** CPU ms per request of the app process (when given) and of PostgreSQL from now until the call. */
+function cpuSince(appPid?: number) {
+  const app0 = appPid ? processCpuMs(appPid) : 0
+  const pg0 = postgresCpuMs()
+  return (requests: number) => ({
+    app: appPid ? (processCpuMs(appPid) - app0) / requests : 0,
+    postgres: (postgresCpuMs() - pg0) / requests,
+  })
 }
 
 /** Waits until the API on the port answers (bounded: a dead server fails the runs instead). */
@@ -237,8 +251,10 @@ try {
   )
   const apiUrl = `http://127.0.0.1:${port}`
   const plain = await rawRun(url, players, 'attempts_plain')
+  const apiCpu = cpuSince(server.pid!)
   const saturated = await sampledQueue(url, apiRun(apiUrl, players))
   const api = saturated.result
+  const apiCost = apiCpu(api.ok)
   const single = await apiRun(apiUrl, players, { connections: 1, seconds: 5 })
   // Half the measured capacity, paced: the latency a studio sees while the server is busy but not
   // saturated (at saturation every request also waits behind the nine others, so p99 ≈ queue time).
@@ -262,6 +278,9 @@ try {
     queued.result.p99,
   )
   console.log(`  API responses: ${api.ok} ok, ${api.failed} failed; API p50 ${api.p50} ms`)
+  console.log(
+    `  CPU per request, saturated (with the drain of its answers): API process ${apiCost.app.toFixed(2)} ms, PostgreSQL ${apiCost.postgres.toFixed(2)} ms; raw INSERT baseline: PostgreSQL ${plain.postgresCpuMs.toFixed(2)} ms`,
+  )
   console.log(
     `  one connection (no queueing): ${single.rps.toFixed(0)} req/s, p50 ${single.p50} ms, p99 ${single.p99} ms`,
   )
