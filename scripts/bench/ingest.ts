@@ -23,7 +23,7 @@ import { postgresCpuMs, processCpuMs } from './cpu-time'
 
 const SECONDS = Number(process.env.BENCH_SECONDS ?? 15)
 const CONNECTIONS = Number(process.env.BENCH_CONNECTIONS ?? 10)
-const PLAYERS = 20
+const PLAYERS = Number(process.env.BENCH_PLAYERS ?? 20)
 const BATCH = 20
 /** POST /api/attempts before the statistics queue (DEVELOPERS.md, "Benchmarks"): the 3× target. */
 const BEFORE_QUEUE_RPS = 185

@@ -52,7 +52,7 @@ export interface PlacedCard {
   card: ReviewCard
 }
 
-interface CardJson extends Omit<CardRow, 'due' | 'last_review' | 'recent_misses'> {
+export interface CardJson extends Omit<CardRow, 'due' | 'last_review' | 'recent_misses'> {
   due: string
   last_review: string | null
   recent_misses: string[]
@@ -65,31 +65,8 @@ const fromJson = (r: CardJson): CardRow => ({
   recent_misses: r.recent_misses.map((at) => new Date(at)),
 })
 
-/** In one round trip: the cards of some places and the player's usual time (see usualMs). */
-export async function cardsAndUsual(
-  db: Conn,
-  userId: string,
-  instrumentKey: string,
-  cells: [number, number][],
-) {
-  const { rows } = await db.raw(
-    `select (select percentile_cont(0.5) within group (order by recent_median_ms) from progress_items
-         where user_id = :user and instrument_key = :key and drill = :all and string >= 0
-           and recent_median_ms is not null) as usual,
-       coalesce((select json_agg(c) from focus_cards c where c.user_id = :user and c.instrument_key = :key
-         and (c.string, c.fret) in (select * from unnest(:strings::smallint[], :frets::smallint[]))), '[]') as cards`,
-    {
-      user: userId,
-      key: instrumentKey,
-      all: ALL_DRILLS,
-      strings: cells.map((c) => c[0]),
-      frets: cells.map((c) => c[1]),
-    },
-  )
-  const row = rows[0] as { usual: number | null; cards: CardJson[] }
-  const cards = new Map(row.cards.map((r) => [cellKey(r.string, r.fret), toCard(fromJson(r))]))
-  return { usual: row.usual, cards }
-}
+/** A card as json_agg gives it. */
+export const cardFromJson = (r: CardJson): ReviewCard => toCard(fromJson(r))
 
 /** Writes cards (insert or replace). */
 export async function saveCards(

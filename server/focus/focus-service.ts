@@ -4,16 +4,14 @@ import { randomInt } from 'node:crypto'
 import { drillContract } from '../../src/contract/drills'
 import { createRandom } from '../../src/theory'
 import type { AppContext } from '../context'
-import type { Knex } from 'knex'
 import { badRequest, type FieldErrors } from '../lib/errors'
 import { listInstruments } from '../instruments/instruments-repository'
 import type { Instrument } from '../../src/contract/instruments'
-import { ALL_DRILLS, itemRows, NO_INSTRUMENT, type ItemRow } from '../progress/progress-repository'
+import { ALL_DRILLS, itemRows, type ItemRow } from '../progress/progress-repository'
 import type { PublicUser } from '../users/users-schema'
 import { reviewCard } from './focus-cards'
 import { rankKeys, rankRegions } from './focus-keys'
 import {
-  cardsAndUsual,
   cellKey,
   latestCellAnswers,
   loadCards,
@@ -44,45 +42,6 @@ export function applyAnswers(
     changed.set(key, { string: a.string, fret: a.fret, card })
   }
   return [...changed.values()]
-}
-
-/** The fields of a stored attempt that move its place's review card. */
-export interface ReviewedAnswer {
-  instrument_id: string | null
-  string: number | null
-  fret: number | null
-  correct: boolean
-  response_ms: number
-  created_at: Date
-}
-
-/** Moves the cards of newly stored attempts (the statistics drain calls it in its transaction). */
-export async function reviewStoredAttempts(
-  db: Knex | Knex.Transaction,
-  userId: string,
-  rows: ReviewedAnswer[],
-) {
-  const placed = rows.filter((r) => r.string !== null && r.fret !== null)
-  const keys = [...new Set(placed.map((r) => r.instrument_id ?? NO_INSTRUMENT))]
-  for (const key of keys) {
-    const answers: CellAnswer[] = placed
-      .filter((r) => (r.instrument_id ?? NO_INSTRUMENT) === key)
-      .sort((a, b) => a.created_at.getTime() - b.created_at.getTime())
-      .map((r) => ({
-        string: r.string!,
-        fret: r.fret!,
-        correct: r.correct,
-        responseMs: r.response_ms,
-        at: r.created_at,
-      }))
-    const cells = [
-      ...new Map(
-        answers.map((a) => [cellKey(a.string, a.fret), [a.string, a.fret] as [number, number]]),
-      ).values(),
-    ]
-    const { cards, usual } = await cardsAndUsual(db, userId, key, cells)
-    await saveCards(db, userId, key, applyAnswers(cards, answers, usual))
-  }
 }
 
 /** Cards of an instrument; rebuilt from past answers when history exists without cards. */

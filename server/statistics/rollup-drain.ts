@@ -1,24 +1,14 @@
 // The drain: takes queued answers and, in the same transaction, rolls them up into the statistics
 // and the spaced-review cards; a crash at any point rolls back, so the answers stay queued.
 import type { Db } from '../lib/db'
-import { reviewStoredAttempts } from '../focus/focus-service'
-import { placedAnswers, rollUp, takeQueued, type PlacedAnswer } from './rollup-queue-repository'
+import { reviewStoredAnswers } from '../focus/card-review'
+import { placedAnswers, rollUp, takeQueued } from './rollup-queue-repository'
 
 /** How many answers one drain takes at most (a few hundred milliseconds of work). */
 export const DRAIN_LIMIT = 5000
 // One drain at a time across every process on the database: cards are read, moved and written, so
 // two drains with answers of one player would lose a review.
 const DRAIN_LOCK = 0x616d6274
-
-function byPlayer(rows: PlacedAnswer[]) {
-  const players = new Map<string, PlacedAnswer[]>()
-  for (const row of rows) {
-    const list = players.get(row.user_id)
-    if (list) list.push(row)
-    else players.set(row.user_id, [row])
-  }
-  return players
-}
 
 /**
  * Rolls up to `limit` queued answers (only these players' when `userIds` is given) into the rollups
@@ -35,8 +25,7 @@ export async function drainOnce(
     if (!taken.length) return 0
     const ids = taken.map((t) => t.attempt_id)
     await rollUp(trx, ids)
-    for (const [userId, rows] of byPlayer(await placedAnswers(trx, ids)))
-      await reviewStoredAttempts(trx, userId, rows)
+    await reviewStoredAnswers(trx, await placedAnswers(trx, ids))
     return taken.length
   })
 }

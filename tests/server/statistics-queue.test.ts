@@ -5,6 +5,9 @@ import { startTestApi, type TestApi } from '../helpers/api'
 import { attemptBody, practiser, type Answer, type Practiser } from '../helpers/practice'
 import { recomputed, rolledUp } from '../helpers/statistics-check'
 import { randomUUID } from 'node:crypto'
+import { applyAnswers } from '../../server/focus/focus-service'
+import { latestCellAnswers, loadCards, usualMs } from '../../server/focus/focus-repository'
+import { NO_INSTRUMENT } from '../../server/progress/progress-repository'
 
 let api: TestApi
 beforeAll(async () => {
@@ -104,3 +107,49 @@ describe('a drain that fails half-way', () => {
     expect(figures).toEqual(await recomputed(api.ctx.db, p.user.id))
   })
 })
+
+describe('one drain for several players and instruments', () => {
+  it('when two players answer on an instrument and without one, then one drain moves each card as if that player and instrument were drained alone', async () => {
+    const players = [await practiser(api.app), await practiser(api.app)]
+    for (const p of players) {
+      const [first, second] = batchesOf(p)
+      const noInstrument = second!.map((a) => ({ ...a, instrumentId: null }))
+      await p.agent.post('/api/attempts').send({ attempts: first }).expect(201)
+      await p.agent.post('/api/attempts').send({ attempts: noInstrument }).expect(201)
+    }
+    const ids = players.map((p) => p.user.id)
+    expect(await api.ctx.db('rollup_queue').whereIn('user_id', ids)).toHaveLength(400)
+
+    expect(await api.ctx.statistics.settle(ids)).toBe(0) // 400 answers: one drain
+
+    for (const p of players) {
+      for (const key of [p.instrumentId, NO_INSTRUMENT]) {
+        const answers = await latestCellAnswers(api.ctx.db, p.user.id, key, 1000)
+        const alone = key === NO_INSTRUMENT ? await answersWithout(p.user.id) : answers
+        const expected = applyAnswers(new Map(), alone, await usualMs(api.ctx.db, p.user.id, key))
+        const stored = await loadCards(api.ctx.db, p.user.id, key)
+        expect(stored.size).toBe(expected.length)
+        for (const { string, fret, card } of expected)
+          expect(stored.get(`${string}:${fret}`)).toEqual(card)
+      }
+    }
+  })
+})
+
+/** A player's placed answers stored without an instrument, oldest first. */
+async function answersWithout(userId: string) {
+  const rows = await api.ctx
+    .db('attempts')
+    .where({ user_id: userId })
+    .whereNull('instrument_id')
+    .whereNotNull('string')
+    .orderBy('created_at')
+    .select('string', 'fret', 'correct', 'response_ms', 'created_at')
+  return rows.map((r) => ({
+    string: r.string,
+    fret: r.fret,
+    correct: r.correct,
+    responseMs: r.response_ms,
+    at: r.created_at,
+  }))
+}
