@@ -12,10 +12,12 @@ const byMoment = (a: api.PinnedComment, b: api.PinnedComment) =>
   a.atMs - b.atMs || a.createdAt.localeCompare(b.createdAt)
 
 type Entries = Ref<api.RecordingEntry[]>
-type Track = <T>(work: () => Promise<T>) => Promise<T>
 
-/** Pinning and unpinning comments, kept in the order of their moments, and each take's count. */
-function pinActions(pinned: Ref<Record<string, Pinned>>, entries: Entries, track: Track) {
+/**
+ * Pinning and unpinning comments, kept in the order of their moments, and each take's count. A
+ * failure goes to the caller only: the take shows it beside its comment form, not the page again.
+ */
+function pinActions(pinned: Ref<Record<string, Pinned>>, entries: Entries) {
   const setPinned = (id: string, change: (p: Pinned) => Pinned) => {
     const current = pinned.value[id]
     if (current) pinned.value = { ...pinned.value, [id]: change(current) }
@@ -25,18 +27,16 @@ function pinActions(pinned: Ref<Record<string, Pinned>>, entries: Entries, track
       e.id === id ? { ...e, commentCount: Math.max(0, e.commentCount + by) } : e,
     ))
   return {
-    pin: (id: string, input: PinnedCommentInput) =>
-      track(async () => {
-        const { comment } = await api.pinComment(id, input)
-        setPinned(id, (p) => ({ ...p, comments: [...p.comments, comment].sort(byMoment) }))
-        count(id, 1)
-      }),
-    unpin: (id: string, commentId: string) =>
-      track(async () => {
-        await api.unpinComment(id, commentId)
-        setPinned(id, (p) => ({ ...p, comments: p.comments.filter((c) => c.id !== commentId) }))
-        count(id, -1)
-      }),
+    async pin(id: string, input: PinnedCommentInput) {
+      const { comment } = await api.pinComment(id, input)
+      setPinned(id, (p) => ({ ...p, comments: [...p.comments, comment].sort(byMoment) }))
+      count(id, 1)
+    },
+    async unpin(id: string, commentId: string) {
+      await api.unpinComment(id, commentId)
+      setPinned(id, (p) => ({ ...p, comments: p.comments.filter((c) => c.id !== commentId) }))
+      count(id, -1)
+    },
   }
 }
 
@@ -84,6 +84,6 @@ export const useRecordingsStore = defineStore('recordings', () => {
         await api.deleteRecording(id)
         entries.value = entries.value.filter((e) => e.id !== id)
       }),
-    ...pinActions(pinned, entries, track),
+    ...pinActions(pinned, entries),
   }
 })

@@ -4,6 +4,7 @@
 import { flushPromises } from '@vue/test-utils'
 import { afterEach, beforeEach, describe, expect, it, vi } from 'vitest'
 import TakeReview from '../../src/components/recordings/TakeReview.vue'
+import { useRecordingsStore } from '../../src/stores/recordings'
 import { mountWithApp } from '../helpers/mount'
 
 const COMMENTS = [
@@ -105,7 +106,7 @@ async function mountReview(answers: Record<string, Answer>) {
     'GET /api/recordings/r1/comments': { body: { comments: COMMENTS, rights: RIGHTS } },
     ...answers,
   })
-  const { wrapper } = mountWithApp(TakeReview, {
+  const { wrapper, pinia } = mountWithApp(TakeReview, {
     props: { recordingId: 'r1', durationMs: 2000, label: 'Walking line' },
     attachTo: document.body,
   })
@@ -113,7 +114,7 @@ async function mountReview(answers: Record<string, Answer>) {
     expect(wrapper.find('[data-testid="take-play"]').attributes('disabled')).toBeUndefined(),
   )
   await flushPromises()
-  return { wrapper, sent }
+  return { wrapper, sent, recordings: useRecordingsStore(pinia) }
 }
 
 describe('TakeReview', () => {
@@ -193,8 +194,8 @@ describe('TakeReview', () => {
     expect(moments).toEqual(['0:00.2', '0:01.0', '0:01.5'])
   })
 
-  it('when the server refuses the moment, then its words show and nothing is added', async () => {
-    const { wrapper } = await mountReview({
+  it('when the server refuses the moment, then its words show once, beside the form, and nothing is added', async () => {
+    const { wrapper, recordings } = await mountReview({
       'POST /api/recordings/r1/comments': {
         status: 400,
         body: {
@@ -211,6 +212,7 @@ describe('TakeReview', () => {
     await flushPromises()
     expect(wrapper.text()).toContain('The take lasts 0:02; pin the comment inside it.')
     expect(wrapper.findAll('[data-testid="pin-marker"]')).toHaveLength(2)
+    expect(recordings.error).toBeNull() // the Recordings page would show the store's error again
   })
 
   it('when the user may only listen (a plan’s reference, as a student), then there is no comment form', async () => {
