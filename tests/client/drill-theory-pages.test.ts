@@ -8,7 +8,7 @@ import {
   HuntSettingsSchema,
   RunsSettingsSchema,
 } from '../../src/contract/drills'
-import { mountRoute } from '../helpers/mount'
+import { mountRoute, untilShown } from '../helpers/mount'
 import { ATTEMPTS_OK, fakePlayer, INSTRUMENT_ANSWERS, stubApi } from './drill-test-kit'
 
 beforeEach(() => setPitchPlayer(fakePlayer().player))
@@ -39,7 +39,7 @@ describe('Window Cycle continues the cycle', { timeout: 60_000 }, () => {
       'POST /api/attempts': ATTEMPTS_OK,
     })
     const { wrapper } = await mountRoute('/practice/cycle', { attachTo: document.body })
-    await flushPromises()
+    await untilShown(wrapper, '[data-testid="cycle-continues"]')
     expect(wrapper.find('[data-testid="cycle-continues"]').text()).toContain('F major')
     expect(api.sent('GET', '/api/progress/cycle-position')[0]?.query.get('scale')).toBe('major')
     await wrapper.find('[data-testid="start-session"]').trigger('click')
@@ -57,7 +57,7 @@ describe('Window Cycle continues the cycle', { timeout: 60_000 }, () => {
       'GET /api/progress/cycle-position': { stop: { key: 'C', noteIndex: 7, phase: 'up', at: '' } },
     })
     const { wrapper } = await mountRoute('/practice/cycle', { attachTo: document.body })
-    await flushPromises()
+    await untilShown(wrapper, '[data-testid="cycle-continues"]')
     await wrapper.find('[data-testid="cycle-continues"] button').trigger('click')
     await wrapper.find('[data-testid="start-session"]').trigger('click')
     await flushPromises()

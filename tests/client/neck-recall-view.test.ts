@@ -3,7 +3,7 @@
 import { flushPromises } from '@vue/test-utils'
 import { afterEach, beforeEach, describe, expect, it, vi } from 'vitest'
 import { setPitchPlayer } from '../../src/audio'
-import { mountRoute } from '../helpers/mount'
+import { mountRoute, untilShown } from '../helpers/mount'
 import { ATTEMPTS_OK, fakePlayer, INSTRUMENT_ANSWERS, NOOR_BASS, stubApi } from './drill-test-kit'
 
 // The A string (A1 = 33), frets 5–6: D2 (38) and Eb2 (39) (arithmetic).
@@ -151,6 +151,7 @@ describe('NeckRecallView with a plan item', () => {
     const banner = wrapper.find('[data-testid="plan-item-banner"]')
     expect(banner.text()).toContain('Week 3: the first five frets')
     expect(banner.text()).toContain('3 practice sessions')
+    await untilShown(wrapper, '[data-testid="focus-switch"]')
     expect(wrapper.find('[data-testid="focus-switch"] input').attributes('disabled')).toBeDefined()
 
     await wrapper.find('[data-testid="start-session"]').trigger('click')
@@ -200,6 +201,7 @@ describe('NeckRecallView defaults', () => {
       'GET /api/instruments/presets': { presets: [] },
     })
     const { wrapper } = await mountRoute('/practice/recall', { attachTo: document.body })
+    await untilShown(wrapper, '[data-testid="focus-switch"]')
     const setup = wrapper.find('[data-testid="drill-setup"]').text()
     expect(setup).toContain('low E string')
     expect(setup).toContain('high E string')

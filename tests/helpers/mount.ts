@@ -1,6 +1,12 @@
 // Mounting components with Vuetify, a fresh Pinia and the app's real routes (in memory): a page is
 // mounted through its route, so a test fails when the route table or the drill registry breaks.
-import { flushPromises, mount, type ComponentMountingOptions } from '@vue/test-utils'
+import {
+  flushPromises,
+  mount,
+  type ComponentMountingOptions,
+  type VueWrapper,
+} from '@vue/test-utils'
+import { expect, vi } from 'vitest'
 import { createPinia, setActivePinia } from 'pinia'
 import { defineComponent, h, type Component } from 'vue'
 import { createMemoryHistory, createRouter, RouterView, type Router } from 'vue-router'
@@ -48,4 +54,10 @@ export function nextNavigation(router: Router): Promise<void> {
       resolve()
     })
   })
+}
+
+/** Waits until `selector` shows: for parts a page fetches apart from itself (a drill's settings form). */
+export async function untilShown(wrapper: VueWrapper, selector: string): Promise<void> {
+  // a first import of the part's module is transformed on demand, slow on a loaded machine
+  await vi.waitFor(() => expect(wrapper.find(selector).exists()).toBe(true), { timeout: 15_000 })
 }
