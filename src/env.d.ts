@@ -9,5 +9,7 @@ declare module 'vue-router' {
     /** Pages shown without the signed-in navigation (sign-in, register …). */
     layout?: 'public' | 'app'
     title?: string
+    /** The page runs on the player's instrument: the router asks for it with the session. */
+    usesInstrument?: boolean
   }
 }

@@ -51,7 +51,10 @@ export const routes: RouteRecordRaw[] = [
   ),
   signedIn('/practice', 'practice', () => import('../views/PracticeView.vue'), 'Practice'),
   ...DRILL_LIST.map((drill) =>
-    signedIn(drill.route, drillRouteName(drill.id), drill.page, drill.name),
+    page(drill.route, drillRouteName(drill.id), drill.page, {
+      ...{ roles: [...ANY_USER], title: drill.name },
+      usesInstrument: true,
+    }),
   ),
   signedIn('/tuner', 'tuner', () => import('../views/TunerView.vue'), 'Tuner'),
   signedIn(

@@ -2,7 +2,7 @@
 import { defineStore } from 'pinia'
 import { computed, ref } from 'vue'
 import * as api from '../api/instruments'
-import { useLoadState } from './load-state'
+import { sharedWhileRunning, useLoadState } from './load-state'
 import { useAuthStore } from './auth'
 import type {
   Instrument,
@@ -28,8 +28,9 @@ export const useInstrumentStore = defineStore('instruments', () => {
     () => instruments.value.find((i) => i.isActive) ?? instruments.value[0] ?? null,
   )
 
-  /** Loads the instruments (and presets); `force` reloads even when already loaded. */
-  const load = (force = false) =>
+  /** Loads the instruments (and presets); `force` reloads even when already loaded. A load under
+   * way (the router starts one for a drill page) is shared, not asked for twice. */
+  const load = sharedWhileRunning((force) =>
     track(async () => {
       const userId = useAuthStore().user?.id ?? null
       if (loaded.value && !force && loadedFor.value === userId) return
@@ -38,7 +39,8 @@ export const useInstrumentStore = defineStore('instruments', () => {
       presets.value = presetList.presets
       loaded.value = true
       loadedFor.value = userId
-    })
+    }),
+  )
 
   const create = (body: NewInstrument) =>
     track(async () => {
@@ -72,6 +74,7 @@ export const useInstrumentStore = defineStore('instruments', () => {
 
   /** Forgets everything (on sign-out, so the next player starts clean). */
   function reset() {
+    load.forget()
     instruments.value = []
     loaded.value = false
     loadedFor.value = null

@@ -33,3 +33,18 @@ export function useLoadState() {
     track: <T>(work: () => Promise<T>) => run(work, true) as Promise<T>,
   }
 }
+
+/** A load that, while under way, is shared by every caller instead of being asked for again
+ * (`force` starts a new one); `forget()` drops the one under way (on sign-out). */
+export function sharedWhileRunning(work: (force: boolean) => Promise<void>) {
+  let pending: Promise<void> | null = null
+  function load(force = false): Promise<void> {
+    if (pending && !force) return pending
+    const run = work(force)
+    const settle = () => void (pending === run && (pending = null))
+    run.then(settle, settle)
+    pending = run
+    return run
+  }
+  return Object.assign(load, { forget: () => void (pending = null) })
+}

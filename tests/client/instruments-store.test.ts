@@ -47,6 +47,20 @@ beforeEach(() => setActivePinia(createPinia()))
 afterEach(() => vi.unstubAllGlobals())
 
 describe('useInstrumentStore', () => {
+  it('a load asked for while one is under way shares it (the router starts one for a drill page); force asks again', async () => {
+    const fetch = respond({
+      'GET /api/instruments': { body: { instruments: [FOUR] } },
+      'GET /api/instruments/presets': { body: { presets: [] } },
+    })
+    const store = useInstrumentStore()
+    await Promise.all([store.load(), store.load()])
+    const lists = () => fetch.mock.calls.filter(([url]) => url === '/api/instruments').length
+    expect(lists()).toBe(1)
+    await store.load(true)
+    expect(lists()).toBe(2)
+    expect(store.active?.id).toBe('a')
+  })
+
   it('load() fills instruments and presets; active is the one the server marks', async () => {
     respond({
       'GET /api/instruments': { body: { instruments: [FOUR, FIVE] } },
