@@ -279,6 +279,9 @@ describe('time: the click, the beat and the tempo ladder', () => {
     run.forEach((pitch, k) => playAt(pitch, grid.firstBeatMs + (k + 1) * grid.intervalMs))
     await flushPromises()
     expect(drill.clock.bpm.value).toBe(76)
+    // the click's controls load apart from the page (once Play is chosen)
+    await import('../../src/components/drills/play/ClickControls.vue')
+    await flushPromises()
     expect(drill.session.state.value?.records[0]?.grade.detail).toMatchObject({
       played: true,
       tempo: 72,
