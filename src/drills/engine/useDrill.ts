@@ -166,7 +166,8 @@ function answerWith<D extends DrillId, Q extends DrillQuestion, A>(
   parts.session.answer(given, at)
 }
 
-/** Starts a session: sound unlocked, questions prepared, settings remembered (not a plan item's). */
+/** Starts a session: sound unlocked while the questions are prepared, settings remembered (not a
+ * plan item's). */
 async function begin<D extends DrillId, Q extends DrillQuestion, A, R>(
   parts: Parts<D, Q, A>,
   setup: DrillSetup<D, Q, A, R>,
@@ -178,8 +179,11 @@ async function begin<D extends DrillId, Q extends DrillQuestion, A, R>(
   if (setup.problem?.(context())) return
   parts.starting.value = true
   try {
-    await parts.sound.unlock()
-    const prepared = await setup.prepare({ ...context(), focus: parts.focus }, request)
+    // the sound engine starts while the questions are prepared (most ask the API for weak spots)
+    const [, prepared] = await Promise.all([
+      parts.sound.unlock(),
+      setup.prepare({ ...context(), focus: parts.focus }, request),
+    ])
     const { settings } = context()
     if (!parts.plan.item.value) saveSettings(parts.definition.id, prepared.remember ?? settings)
     parts.session.start(prepared.questions, prepared.limits ?? limitsOf(settings))
