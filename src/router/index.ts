@@ -29,7 +29,7 @@ function loadPagesEarly(to: RouteLocationNormalized) {
   }
 }
 
-/** A drill page's first question waits for the instrument: asked for now, while the page downloads. */
+/** A drill page's first question waits for the instrument: asked for now, while the page loads. */
 function loadInstrumentEarly() {
   const store = useInstrumentStore()
   // a failure stays in the store, where the page shows it

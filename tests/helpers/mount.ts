@@ -56,7 +56,7 @@ export function nextNavigation(router: Router): Promise<void> {
   })
 }
 
-/** Waits until `selector` shows: for parts a page fetches apart from itself (a drill's settings form). */
+/** Waits until `selector` shows: a part a page fetches apart from itself (a settings form). */
 export async function untilShown(wrapper: VueWrapper, selector: string): Promise<void> {
   // a first import of the part's module is transformed on demand, slow on a loaded machine
   await vi.waitFor(() => expect(wrapper.find(selector).exists()).toBe(true), { timeout: 15_000 })
