@@ -1,7 +1,7 @@
 -- The statistics rollups (progress_sessions, progress_days, progress_items), brought up to date by one
 -- statement per batch of queued attempts (called by the drain, server/statistics): data-modifying
--- CTEs whose upserts also compute the daily median and p90 and each place's recent accuracy and
--- median. See DEVELOPERS.md, "Statistics".
+-- CTEs whose upserts also compute each place's recent accuracy and median (a day's median and p90
+-- are computed when read, from its list of right-answer times). See DEVELOPERS.md, "Statistics".
 --   instrument_key: the instrument id, 00000000-… for attempts without one, ffffffff-… for all;
 --   drill: the drill id, or '*' for every drill; 50 answers per place are "recent";
 --   a gap longer than 120 000 ms inside a session is not practice time;
@@ -53,25 +53,17 @@ begin
     group by t.user_id, k.ikey, k.drill, t.day
   ),
   days as (
+    -- the day's median and p90 are computed when read, from recall_ms (not re-sorted per drain)
     insert into progress_days as d
       (user_id, instrument_key, drill, day, attempts, correct, active_ms, recall_ms, first_at, last_at,
-       shown, median_ms, p90_ms)
-    select g.*, p.median_ms, p.p90_ms
-    from day_groups g cross join lateral (
-      select q.p[1], q.p[2] from (
-        select percentile_cont(array[0.5, 0.9]) within group (order by v) as p
-        from unnest(g.recall_ms) as v) as q
-    ) as p(median_ms, p90_ms)
+       shown)
+    select g.* from day_groups g
     order by 1, 2, 3, 4
     on conflict (user_id, instrument_key, drill, day) do update set
       attempts = d.attempts + excluded.attempts, correct = d.correct + excluded.correct,
       active_ms = d.active_ms + excluded.active_ms, recall_ms = d.recall_ms || excluded.recall_ms,
       first_at = least(d.first_at, excluded.first_at), last_at = greatest(d.last_at, excluded.last_at),
-      shown = d.shown + excluded.shown,
-      (median_ms, p90_ms) = (
-        select q.p[1], q.p[2] from (
-          select percentile_cont(array[0.5, 0.9]) within group (order by v) as p
-          from unnest(d.recall_ms || excluded.recall_ms) as v) as q)
+      shown = d.shown + excluded.shown
   ),
   item_groups as (
     select t.user_id, t.ikey, k.drill, t.string, t.fret, t.expected_pitch,

@@ -85,7 +85,8 @@ const QUERIES = {
       from attempts where user_id = ? group by string, fret`,
   },
   days: {
-    rollup: `select day, attempts, correct, median_ms, p90_ms, active_ms from progress_days
+    rollup: `select day, attempts, correct, active_ms, (select percentile_cont(array[0.5, 0.9])
+        within group (order by v) from unnest(recall_ms) as v) from progress_days
       where user_id = ? and instrument_key = 'ffffffff-ffff-ffff-ffff-ffffffffffff' and day > (${DAY_30})::date`,
     raw: `select date(created_at), count(*), avg(correct::int),
         percentile_cont(array[0.5, 0.9]) within group (order by response_ms) filter (where correct)

@@ -98,6 +98,10 @@ const inRange = (range: DayRange) => (q: ReturnType<Db>) => {
   if (range.to) q.where('day', '<=', range.to)
 }
 
+/** A day's median and p90 of right-answer times, from its list (`percentile_cont`, as everywhere). */
+const DAY_PERCENTILES = `(select percentile_cont(array[0.5, 0.9]) within group (order by v)
+  from unnest(recall_ms) as v) as percentiles`
+
 /** Per-day rollup rows, oldest first, for the given drill keys ('*' = all drills together; null = every key). */
 export async function dayRows(
   db: Db,
@@ -113,8 +117,7 @@ export async function dayRows(
     correct: number
     shown: number
     active_ms: string
-    median_ms: number | null
-    p90_ms: number | null
+    percentiles: number[] | null
     last_at: Date
   }
   const rows: Row[] = await db('progress_days')
@@ -129,8 +132,7 @@ export async function dayRows(
       'correct',
       'shown',
       'active_ms',
-      'median_ms',
-      'p90_ms',
+      db.raw(DAY_PERCENTILES),
       'last_at',
     )
   return rows.map((r) => ({
@@ -140,8 +142,8 @@ export async function dayRows(
     correct: r.correct,
     shown: r.shown,
     activeMs: Number(r.active_ms),
-    medianMs: r.median_ms,
-    p90Ms: r.p90_ms,
+    medianMs: r.percentiles?.[0] ?? null,
+    p90Ms: r.percentiles?.[1] ?? null,
     lastAt: r.last_at,
   }))
 }
