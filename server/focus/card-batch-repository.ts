@@ -1,8 +1,8 @@
 // Review cards for a whole statistics drain at once: one read of the cards and usual times of every
-// player and instrument in the drain, one upsert of every card it moved (not two queries per player).
+// player and instrument in the drain (written back together by saveCardGroups, focus-repository).
 import type { Knex } from 'knex'
 import { ALL_DRILLS } from '../progress/progress-repository'
-import { cardFromJson, type CardJson, type PlacedCard } from './focus-repository'
+import { cardFromJson, cellKey, type CardJson } from './focus-repository'
 import type { ReviewCard } from './focus-types'
 
 /** A player's instrument ("user/instrument_key") in a drain, and the places its answers name. */
@@ -54,40 +54,5 @@ export async function cardsOfGroups(trx: Knex.Transaction, groups: CardGroup[]) 
 
 const cardsAndUsualOf = (r: { usual: number | null; cards: CardJson[] }): GroupCards => ({
   usual: r.usual,
-  cards: new Map(r.cards.map((c) => [`${c.string}:${c.fret}`, cardFromJson(c)])),
+  cards: new Map(r.cards.map((c) => [cellKey(c.string, c.fret), cardFromJson(c)])),
 })
-
-/** Writes the moved cards of every group (insert or replace) in one statement. */
-export async function saveGroupCards(
-  trx: Knex.Transaction,
-  moved: { userId: string; instrumentKey: string; cards: PlacedCard[] }[],
-) {
-  const rows = moved.flatMap(({ userId, instrumentKey, cards }) =>
-    cards.map(({ string, fret, card: c }) => ({
-      user_id: userId,
-      instrument_key: instrumentKey,
-      string,
-      fret,
-      due: c.due,
-      stability: c.stability,
-      difficulty: c.difficulty,
-      elapsed_days: c.elapsedDays,
-      scheduled_days: c.scheduledDays,
-      learning_steps: c.learningSteps,
-      reps: c.reps,
-      lapses: c.lapses,
-      state: c.state,
-      last_review: c.lastReview,
-      recent_misses: c.recentMisses,
-    })),
-  )
-  if (!rows.length) return
-  const columns = Object.keys(rows[0]!)
-  const updates = columns.slice(4).map((c) => `${c} = excluded.${c}`)
-  await trx.raw(
-    `insert into focus_cards (${columns.join(', ')})
-     select ${columns.join(', ')} from json_populate_recordset(null::focus_cards, ?::json)
-     on conflict (user_id, instrument_key, string, fret) do update set ${updates.join(', ')}`,
-    [JSON.stringify(rows)],
-  )
-}

@@ -2,8 +2,8 @@
 // grouped by player and instrument, their cards read in one query, moved in order, written in one.
 import type { Knex } from 'knex'
 import { NO_INSTRUMENT } from '../progress/progress-repository'
-import { cardsOfGroups, groupKey, saveGroupCards, type CardGroup } from './card-batch-repository'
-import type { CellAnswer } from './focus-repository'
+import { cardsOfGroups, groupKey, type CardGroup } from './card-batch-repository'
+import { cellKey, saveCardGroups, type CellAnswer } from './focus-repository'
 import { applyAnswers } from './focus-service'
 
 /** The fields of a stored attempt that move its place's review card. */
@@ -40,7 +40,7 @@ function groupAnswers(rows: ReviewedAnswer[]): AnswerGroup[] {
   }
   for (const g of groups.values()) {
     g.answers.sort((a, b) => a.at.getTime() - b.at.getTime())
-    const cells = new Map(g.answers.map((a) => [`${a.string}:${a.fret}`, [a.string, a.fret]]))
+    const cells = new Map(g.answers.map((a) => [cellKey(a.string, a.fret), [a.string, a.fret]]))
     g.cells = [...cells.values()] as [number, number][]
   }
   return [...groups.values()]
@@ -58,5 +58,5 @@ export async function reviewStoredAnswers(trx: Knex.Transaction, rows: ReviewedA
     }
     return { ...g, cards: applyAnswers(cards, g.answers, usual) }
   })
-  await saveGroupCards(trx, moved)
+  await saveCardGroups(trx, moved)
 }

@@ -68,36 +68,48 @@ const fromJson = (r: CardJson): CardRow => ({
 /** A card as json_agg gives it. */
 export const cardFromJson = (r: CardJson): ReviewCard => toCard(fromJson(r))
 
-/** Writes cards (insert or replace). */
-export async function saveCards(
-  db: Conn,
-  userId: string,
-  instrumentKey: string,
-  cards: PlacedCard[],
-) {
-  if (!cards.length) return
-  const rows = cards.map(({ string, fret, card: c }) => ({
-    user_id: userId,
-    instrument_key: instrumentKey,
-    string,
-    fret,
-    due: c.due,
-    stability: c.stability,
-    difficulty: c.difficulty,
-    elapsed_days: c.elapsedDays,
-    scheduled_days: c.scheduledDays,
-    learning_steps: c.learningSteps,
-    reps: c.reps,
-    lapses: c.lapses,
-    state: c.state,
-    last_review: c.lastReview,
-    recent_misses: c.recentMisses,
-  }))
-  await db('focus_cards')
-    .insert(rows)
-    .onConflict(['user_id', 'instrument_key', 'string', 'fret'])
-    .merge()
+/** A player's instrument and the cards moved on it. */
+export interface MovedCards {
+  userId: string
+  instrumentKey: string
+  cards: PlacedCard[]
 }
+
+/** Writes the cards of any players and instruments (insert or replace) in one statement. */
+export async function saveCardGroups(db: Conn, moved: MovedCards[]) {
+  const rows = moved.flatMap(({ userId, instrumentKey, cards }) =>
+    cards.map(({ string, fret, card: c }) => ({
+      user_id: userId,
+      instrument_key: instrumentKey,
+      string,
+      fret,
+      due: c.due,
+      stability: c.stability,
+      difficulty: c.difficulty,
+      elapsed_days: c.elapsedDays,
+      scheduled_days: c.scheduledDays,
+      learning_steps: c.learningSteps,
+      reps: c.reps,
+      lapses: c.lapses,
+      state: c.state,
+      last_review: c.lastReview,
+      recent_misses: c.recentMisses,
+    })),
+  )
+  if (!rows.length) return
+  const columns = Object.keys(rows[0]!)
+  const updates = columns.slice(4).map((c) => `${c} = excluded.${c}`)
+  await db.raw(
+    `insert into focus_cards (${columns.join(', ')})
+     select ${columns.join(', ')} from json_populate_recordset(null::focus_cards, ?::json)
+     on conflict (user_id, instrument_key, string, fret) do update set ${updates.join(', ')}`,
+    [JSON.stringify(rows)],
+  )
+}
+
+/** Writes one instrument's cards (insert or replace). */
+export const saveCards = (db: Conn, userId: string, instrumentKey: string, cards: PlacedCard[]) =>
+  saveCardGroups(db, [{ userId, instrumentKey, cards }])
 
 /** The player's usual response time on an instrument: the median of the places' median times. */
 export async function usualMs(

@@ -1,5 +1,6 @@
 // rollup_queue access: take queued answers, roll them up with the live SQL, and count what waits.
 import type { Knex } from 'knex'
+import type { ReviewedAnswer } from '../focus/card-review'
 import type { Db } from '../lib/db'
 
 type Conn = Db | Knex.Transaction
@@ -38,19 +39,9 @@ export async function rollUp(trx: Knex.Transaction, attemptIds: string[]) {
   )
 }
 
-export interface PlacedAnswer {
-  user_id: string
-  instrument_id: string | null
-  string: number | null
-  fret: number | null
-  correct: boolean
-  response_ms: number
-  created_at: Date
-}
-
 /** The attempts among these ids that name a place (they move review cards). */
 export async function placedAnswers(trx: Knex.Transaction, attemptIds: string[]) {
-  const rows: PlacedAnswer[] = await trx('attempts')
+  const rows: ReviewedAnswer[] = await trx('attempts')
     .whereIn('id', attemptIds)
     .whereNotNull('string')
     .whereNotNull('fret')
