@@ -91,13 +91,16 @@ export const useProgressStore = defineStore('progress', () => {
     }
   }
 
-  /** Loads everything for a selection; a newer call wins over a slower older one. */
-  async function load(next: Partial<ProgressSelection> = {}) {
+  /**
+   * Loads everything for a selection; a newer call wins over a slower older one. A quiet load (the
+   * refresh while answers wait) shows no loading state, so the filters stay usable under the hand.
+   */
+  async function load(next: Partial<ProgressSelection> = {}, { quiet = false } = {}) {
     const mine = ++request
     clearTimeout(refresh)
     if ('studentId' in next && next.studentId !== selection.value.studentId) summary.value = null
     selection.value = { ...selection.value, ...next }
-    isLoading.value = true
+    isLoading.value = !quiet
     error.value = null
     try {
       const f = filterOf(selection.value)
@@ -108,7 +111,7 @@ export const useProgressStore = defineStore('progress', () => {
       timeline.value = t
       positions.value = p
       notes.value = n
-      if (s.pending) refresh = setTimeout(() => void load(), PENDING_REFRESH_MS)
+      if (s.pending) refresh = setTimeout(() => void load({}, { quiet: true }), PENDING_REFRESH_MS)
     } catch (e) {
       if (mine === request)
         error.value = e instanceof ApiError ? e : new ApiError(0, 'unknown', String(e))

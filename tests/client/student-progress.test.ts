@@ -108,7 +108,7 @@ function stubApi(bodies: Record<string, unknown>, status = 200) {
 const mountProgress = (props: { studentId?: string } = {}) =>
   mountWithApp(StudentProgress, {
     props,
-    global: { stubs: { TimelineChart: true } },
+    global: { stubs: { TimelineChart: true, TempoChart: true } },
   })
 
 describe('StudentProgress', () => {
@@ -180,5 +180,37 @@ describe('StudentProgress', () => {
     expect(wrapper.find('[data-testid="progress-updating"]').exists()).toBe(false)
     await vi.advanceTimersByTimeAsync(PENDING_REFRESH_MS * 3)
     expect(vi.mocked(globalThis.fetch)).toHaveBeenCalledTimes(5) // no more loads once counted
+  })
+})
+
+describe('StudentProgress while answers wait', () => {
+  it('when the figures load again in the background, then no loading bar shows and the filters stay usable', async () => {
+    vi.useFakeTimers()
+    stubApi({ ...BODIES, summary: { ...summary('2026-03-09T10:00:00Z'), pending: 3 } })
+    const { wrapper } = mountProgress()
+    await flushPromises()
+    vi.stubGlobal(
+      'fetch',
+      vi.fn(() => new Promise<Response>(() => {})),
+    )
+    await vi.advanceTimersByTimeAsync(PENDING_REFRESH_MS)
+    expect(vi.mocked(globalThis.fetch)).toHaveBeenCalled() // the refresh is under way
+    expect(wrapper.find('[aria-label="Loading progress"]').exists()).toBe(false)
+    expect(wrapper.find('[data-testid="progress-filters"] .v-input--disabled').exists()).toBe(false)
+  })
+
+  it('when a filter is changed, then the loading bar shows without disabling the filters', async () => {
+    stubApi(BODIES)
+    const { wrapper } = mountProgress()
+    await flushPromises()
+    vi.stubGlobal(
+      'fetch',
+      vi.fn(() => new Promise<Response>(() => {})),
+    )
+    const filters = wrapper.findComponent({ name: 'ProgressFilters' })
+    filters.vm.$emit('change', { drill: 'hunt' })
+    await flushPromises()
+    expect(wrapper.find('[aria-label="Loading progress"]').exists()).toBe(true)
+    expect(wrapper.find('[data-testid="progress-filters"] .v-input--disabled').exists()).toBe(false)
   })
 })

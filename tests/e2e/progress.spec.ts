@@ -35,6 +35,13 @@ async function waitForFigures(page: Page) {
   await page.getByTestId('heat-map').getByTestId('fretboard').waitFor()
 }
 
+/** The answers figure, or the page's error when a load failed (so a failure says why). */
+async function answersOrError(page: Page) {
+  const error = page.getByTestId('progress-error')
+  if (await error.isVisible()) return `error: ${await error.textContent()}`
+  return page.getByTestId('stat-answers').textContent()
+}
+
 const heatCells = (page: Page) => page.getByTestId('heat-map').locator('[data-marks="highlight"]')
 
 describe('progress page', () => {
@@ -73,10 +80,12 @@ describe('progress page', () => {
 
     await page.getByTestId('filter-drill').locator('.v-field').click()
     await page.getByRole('option', { name: 'Pitch Hunt' }).click()
-    await expect.poll(() => page.getByTestId('stat-answers').textContent()).not.toBe(answersBefore)
+    expect(await page.getByTestId('filter-drill').textContent()).toContain('Pitch Hunt')
+    await expect.poll(() => answersOrError(page)).not.toBe(answersBefore)
+    expect(await answersOrError(page)).toMatch(/^Answers\s*\d+/) // not the page's error
     await page.getByTestId('filter-period').locator('.v-field').click()
     await page.getByRole('option', { name: 'Last 7 days' }).click()
-    await expect.poll(() => page.getByTestId('stat-answers').textContent()).toMatch(/Answers\s*\d+/)
+    await expect.poll(() => answersOrError(page)).toMatch(/^Answers\s*\d+/)
     await waitForFigures(page)
     expect(await page.getByTestId('speed-chart').locator('figcaption').textContent()).toMatch(
       /Median recall time|No practice/,
