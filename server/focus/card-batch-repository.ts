@@ -2,7 +2,7 @@
 // player and instrument in the drain (written back together by saveCardGroups, focus-repository).
 import type { Knex } from 'knex'
 import { ALL_DRILLS } from '../progress/progress-repository'
-import { cardFromJson, cellKey, type CardJson } from './focus-repository'
+import { cardFromJson, cellKey, USUAL_MS_SQL, type CardJson } from './focus-repository'
 import type { ReviewCard } from './focus-types'
 
 /** A player's instrument ("user/instrument_key") in a drain, and the places its answers name. */
@@ -37,9 +37,7 @@ export async function cardsOfGroups(trx: Knex.Transaction, groups: CardGroup[]) 
          as x(user_id uuid, instrument_key uuid, string smallint, fret smallint)),
      grp as (select distinct user_id, instrument_key from cell)
      select g.user_id, g.instrument_key,
-       (select percentile_cont(0.5) within group (order by p.recent_median_ms) from progress_items p
-         where p.user_id = g.user_id and p.instrument_key = g.instrument_key and p.drill = :all
-           and p.string >= 0 and p.recent_median_ms is not null) as usual,
+       ${USUAL_MS_SQL('g.user_id', 'g.instrument_key')} as usual,
        coalesce((select json_agg(c) from focus_cards c
          join cell x on x.user_id = c.user_id and x.instrument_key = c.instrument_key
            and x.string = c.string and x.fret = c.fret

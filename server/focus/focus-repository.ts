@@ -111,17 +111,26 @@ export async function saveCardGroups(db: Conn, moved: MovedCards[]) {
 export const saveCards = (db: Conn, userId: string, instrumentKey: string, cards: PlacedCard[]) =>
   saveCardGroups(db, [{ userId, instrumentKey, cards }])
 
-/** The player's usual response time on an instrument: the median of the places' median times. */
+/**
+ * The player's usual response time on an instrument, the median of the places' median times, as a
+ * scalar subquery over the SQL expressions `user` and `instrument` (binds `:all`, the all-drills key).
+ */
+export const USUAL_MS_SQL = (user: string, instrument: string) =>
+  `(select percentile_cont(0.5) within group (order by p.recent_median_ms) from progress_items p
+     where p.user_id = ${user} and p.instrument_key = ${instrument} and p.drill = :all
+       and p.string >= 0 and p.recent_median_ms is not null)`
+
+/** The player's usual response time on an instrument (USUAL_MS_SQL). */
 export async function usualMs(
   db: Conn,
   userId: string,
   instrumentKey: string,
 ): Promise<number | null> {
-  const { rows } = await db.raw(
-    `select percentile_cont(0.5) within group (order by recent_median_ms) as usual from progress_items
-     where user_id = ? and instrument_key = ? and drill = ? and string >= 0 and recent_median_ms is not null`,
-    [userId, instrumentKey, ALL_DRILLS],
-  )
+  const { rows } = await db.raw(`select ${USUAL_MS_SQL(':user', ':instrument')} as usual`, {
+    user: userId,
+    instrument: instrumentKey,
+    all: ALL_DRILLS,
+  })
   return (rows[0] as { usual: number | null } | undefined)?.usual ?? null
 }
 
