@@ -54,6 +54,9 @@ const ConfigSchema = z.object({
   stripeSecretKey: z.string().min(1).optional(),
   stripeWebhookSecret: z.string().min(1).optional(),
   stripeApiUrl: z.url().optional(),
+  // Whether this process rolls up queued answers in the background (STATISTICS_DRAIN=off leaves
+  // them to readers and to other processes; bench:ingest uses it to time the request path alone).
+  backgroundDrain: z.boolean().default(true),
   // The scheduler of each process (due-soon reminders, digests): first tick, then every interval.
   schedulerFirstRunMs: z.coerce.number().int().min(0).default(60_000),
   schedulerIntervalMs: z.coerce
@@ -121,6 +124,7 @@ export function loadConfig(
     stripeSecretKey: env.STRIPE_SECRET_KEY || undefined,
     stripeWebhookSecret: env.STRIPE_WEBHOOK_SECRET || undefined,
     stripeApiUrl: env.STRIPE_API_URL || undefined,
+    backgroundDrain: flag(env.STATISTICS_DRAIN),
     schedulerFirstRunMs: env.SCHEDULER_FIRST_RUN_MS,
     schedulerIntervalMs: env.SCHEDULER_INTERVAL_MS,
     s3: bucketOf(env),

@@ -15,7 +15,8 @@ const mailer = createMailer(config)
 const statistics = createStatistics(db, logger)
 const app = createApp({ config, db, logger, mailer, statistics })
 const scheduler = startScheduler({ config, db, logger, mailer, statistics })
-statistics.start({ databaseUrl: config.databaseUrl })
+if (config.backgroundDrain) statistics.start({ databaseUrl: config.databaseUrl })
+else logger.warn('STATISTICS_DRAIN is off: answers wait for their readers or another process')
 
 const server = app.listen(config.port, config.host, () => {
   logger.info(`Ambitus API listening on http://${config.host}:${config.port}`)

@@ -188,13 +188,20 @@ async function healthy(port: number) {
 }
 
 /** The saturated API run against WEB_CONCURRENCY app processes (node:cluster) sharing one port. */
-async function processesRun(env: NodeJS.ProcessEnv, processes: number) {
+async function processesRun(env: NodeJS.ProcessEnv, processes: number, drain = true) {
   const port = await freePort()
   const cluster = startService(
     `bench-api×${processes}`,
     process.execPath,
     ['--import', 'tsx', 'server/cluster.ts'],
-    { env: { ...env, PORT: String(port), WEB_CONCURRENCY: String(processes) } },
+    {
+      env: {
+        ...env,
+        PORT: String(port),
+        WEB_CONCURRENCY: String(processes),
+        STATISTICS_DRAIN: drain ? 'on' : 'off',
+      },
+    },
   )
   try {
     await healthy(port)
@@ -307,4 +314,12 @@ const one = await processesRun(env, 1)
 const two = await processesRun(env, 2)
 console.log(
   `ingest processes: 1 process ${one.rps.toFixed(0)} req/s (p99 ${one.p99} ms), 2 processes ${two.rps.toFixed(0)} req/s (p99 ${two.p99} ms), ratio 2/1 = ${(two.rps / one.rps).toFixed(2)}; ${one.failed + two.failed} failed`,
+)
+// The request path alone: one process whose background drain is off, so no rollup shares the cores
+// (its answers stay queued; the bench database is thrown away). The ceiling of the API on this
+// machine whatever the statistics cost, beside the raw INSERT baseline measured the same way.
+const requestPath = await processesRun(env, 1, false)
+const rawAgain = await rawRun(url, players, 'attempts_plain')
+console.log(
+  `ingest request path alone (background drain off; information): ${requestPath.rps.toFixed(0)} req/s, p99 ${requestPath.p99} ms; raw INSERT baseline now ${rawAgain.rps.toFixed(0)} req/s; ratio ${(requestPath.rps / rawAgain.rps).toFixed(2)}`,
 )
