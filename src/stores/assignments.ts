@@ -65,6 +65,7 @@ const takeActions = (updateItem: UpdateItem) => ({
 export const useAssignmentsStore = defineStore('assignments', () => {
   const { isLoading, error, load } = useLoadState()
   const assigned = ref<plansApi.Assignment[]>([])
+  let assignedLoad: Promise<void> | null = null
   const threads = ref<Threads>({})
   const setThread = (
     id: string,
@@ -87,8 +88,11 @@ export const useAssignmentsStore = defineStore('assignments', () => {
     threads,
     isLoading,
     error,
+    /** Loads the student's plans; callers while a load is under way share it. */
     loadAssigned: () =>
-      load(async () => void (assigned.value = (await plansApi.fetchAssigned()).assignments)),
+      (assignedLoad ??= load(
+        async () => void (assigned.value = (await plansApi.fetchAssigned()).assignments),
+      ).finally(() => (assignedLoad = null))),
     loadThread: (id: string) =>
       load(async () => {
         const { comments } = await assignmentsApi.listComments(id)
