@@ -43,6 +43,12 @@ describe('who needs attention', () => {
       .evaluateAll((rows) => rows.map((r) => !!r.querySelector('[data-testid="attention-reason"]')))
     expect(flagged[0]).toBe(true)
     expect(flagged).toEqual([...flagged].sort((a, b) => Number(b) - Number(a)))
+    // every column is in view on a 1366 px laptop: the table does not scroll sideways
+    const overflow = await teacher
+      .getByTestId('roster')
+      .locator('.v-table__wrapper')
+      .evaluate((w) => w.scrollWidth - w.clientWidth)
+    expect(overflow).toBeLessThanOrEqual(0)
     await screenshot(teacher, 'teacher-week-roster-laptop')
   })
 
