@@ -28,7 +28,7 @@ export function lastPractice(
   if (days <= 0) return 'today'
   if (days === 1) return 'yesterday'
   if (days < 14) return `${days} days ago`
-  return dateText(iso, {})
+  return dateText(iso)
 }
 
 /** "12 % faster (1.4 s)", "steady (1.9 s)", or "–" without two weeks of figures. */
