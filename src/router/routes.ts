@@ -83,13 +83,10 @@ export const routes: RouteRecordRaw[] = [
     'teacher',
     'student',
   ]),
-  signedIn(
-    '/recordings',
-    'recordings',
-    () => import('../views/RecordingsView.vue'),
-    'Recordings',
-    ['student', 'teacher'],
-  ),
+  signedIn('/recordings', 'recordings', () => import('../views/RecordingsView.vue'), 'Recordings', [
+    'student',
+    'teacher',
+  ]),
   signedIn('/plans', 'my-plans', () => import('../views/MyPlansView.vue'), 'My plans', ['student']),
   open(
     '/invitations/accept',
