@@ -5,7 +5,7 @@ import { ref } from 'vue'
 import * as assignmentsApi from '../api/assignments'
 import * as plansApi from '../api/plans'
 import * as recordingsApi from '../api/recordings'
-import { useLoadState } from './load-state'
+import { sharedWhileRunning, useLoadState } from './load-state'
 
 type Threads = Record<string, assignmentsApi.PlanComment[]>
 type Summary = assignmentsApi.RecordingSummary
@@ -65,7 +65,6 @@ const takeActions = (updateItem: UpdateItem) => ({
 export const useAssignmentsStore = defineStore('assignments', () => {
   const { isLoading, error, load } = useLoadState()
   const assigned = ref<plansApi.Assignment[]>([])
-  let assignedLoad: Promise<void> | null = null
   const threads = ref<Threads>({})
   const setThread = (
     id: string,
@@ -89,10 +88,9 @@ export const useAssignmentsStore = defineStore('assignments', () => {
     isLoading,
     error,
     /** Loads the student's plans; callers while a load is under way share it. */
-    loadAssigned: () =>
-      (assignedLoad ??= load(
-        async () => void (assigned.value = (await plansApi.fetchAssigned()).assignments),
-      ).finally(() => (assignedLoad = null))),
+    loadAssigned: sharedWhileRunning(() =>
+      load(async () => void (assigned.value = (await plansApi.fetchAssigned()).assignments)),
+    ),
     loadThread: (id: string) =>
       load(async () => {
         const { comments } = await assignmentsApi.listComments(id)

@@ -32,19 +32,17 @@ export function usePractiseNow() {
   })
 
   const facts = computed<PracticeFacts>(() => ({
-    assigned: assignments.error ? [] : assignments.assigned,
+    assigned: assignments.assigned,
     places: places.value,
     last,
   }))
+  const choice = computed(() => choosePractice(facts.value))
   return {
     /** False until both loads are over, so the card never shows a guess that changes under a tap. */
     ready,
-    choice: computed(() => choosePractice(facts.value)),
+    choice,
     /** The drill last played here, when it is not already the suggestion. */
-    last: computed(() => {
-      const choice = choosePractice(facts.value)
-      return last && choice.kind !== 'continue' ? last : null
-    }),
+    last: computed(() => (choice.value.kind === 'continue' ? null : last)),
     practised: computed(() => hasPractised(facts.value)),
   }
 }

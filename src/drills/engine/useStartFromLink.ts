@@ -13,7 +13,7 @@ export interface StartableDrill {
   settled: ComputedRef<boolean>
   canStart: ComputedRef<boolean>
   settings: Ref<{ questionCount?: number | null; focus?: boolean }>
-  plan: { isLoading: Ref<boolean>; item: Ref<unknown>; error: Ref<string | null> }
+  plan: { isLoading: Ref<boolean>; item: Ref<unknown> }
   begin(): Promise<void>
 }
 
